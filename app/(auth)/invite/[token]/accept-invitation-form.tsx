@@ -1,0 +1,68 @@
+"use client";
+
+import { useState } from "react";
+import { useRouter } from "next/navigation";
+import { signIn } from "next-auth/react";
+import { useForm } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { z } from "zod";
+import { acceptInvitationSchema } from "@/lib/validations/members";
+import { TextField } from "@/components/ui/field";
+import { Button } from "@/components/ui/button";
+import { LiveStatus, Notice } from "@/components/ui/notice";
+import { minPasswordLength } from "@/lib/auth/password-rules";
+import { acceptInvitationAction } from "./actions";
+
+const formSchema = acceptInvitationSchema
+  .extend({ confirm: z.string() })
+  .refine((values) => values.password === values.confirm, { error: "The two passwords differ.", path: ["confirm"] });
+type AcceptInput = z.infer<typeof formSchema>;
+
+export function AcceptInvitationForm({ token, email, defaultName }: { token: string; email: string; defaultName: string }) {
+  const router = useRouter();
+  const [failure, setFailure] = useState<string | null>(null);
+  const form = useForm<AcceptInput>({
+    resolver: zodResolver(formSchema),
+    defaultValues: { token, name: defaultName, password: "", confirm: "" },
+  });
+  const { errors, isSubmitting } = form.formState;
+
+  const onSubmit = form.handleSubmit(async ({ confirm: _confirm, ...values }) => {
+    setFailure(null);
+    const result = await acceptInvitationAction(values);
+    if (!result.ok) {
+      for (const [field, messages] of Object.entries(result.fieldErrors)) {
+        if (field === "name" || field === "password") form.setError(field, { message: messages[0] });
+      }
+      setFailure(result.message);
+      return;
+    }
+    const signedIn = await signIn("password", { email, password: values.password, redirect: false });
+    if (signedIn?.ok && !signedIn.error) {
+      router.replace("/home");
+      router.refresh();
+    } else {
+      router.replace("/sign-in");
+    }
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="space-y-4 rounded-lg bg-white p-4 shadow-sm">
+      <input type="hidden" {...form.register("token")} />
+      <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register("name")} />
+      <TextField
+        label="Choose a password"
+        type="password"
+        autoComplete="new-password"
+        hint={`At least ${minPasswordLength} characters. A few unrelated words work well; very common passwords are refused.`}
+        error={errors.password?.message}
+        {...form.register("password")}
+      />
+      <TextField label="Type it again" type="password" autoComplete="new-password" error={errors.confirm?.message} {...form.register("confirm")} />
+      <LiveStatus>{failure && <Notice tone="error" title={failure} />}</LiveStatus>
+      <Button type="submit" pending={isSubmitting} pendingLabel="Creating your account…" className="w-full">
+        Create account and sign in
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,54 @@
+"use client";
+
+import { useState } from "react";
+import { useRouter } from "next/navigation";
+import { signIn } from "next-auth/react";
+import { useForm } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { z } from "zod";
+import { signInSchema } from "@/lib/validations/members";
+import { TextField } from "@/components/ui/field";
+import { Button } from "@/components/ui/button";
+import { LiveStatus, Notice } from "@/components/ui/notice";
+
+type SignInInput = z.infer<typeof signInSchema>;
+
+const failureMessages: Record<string, string> = {
+  throttled: "Too many failed attempts. Wait 15 minutes, or ask for a one-time link below.",
+  default: "That e-mail address and password do not match an active account.",
+};
+
+export function PasswordSignInForm({ callbackUrl }: { callbackUrl: string }) {
+  const router = useRouter();
+  const [failure, setFailure] = useState<string | null>(null);
+  const form = useForm<SignInInput>({ resolver: zodResolver(signInSchema), defaultValues: { email: "", password: "" } });
+  const { errors, isSubmitting } = form.formState;
+
+  const onSubmit = form.handleSubmit(async (values) => {
+    setFailure(null);
+    const result = await signIn("password", { ...values, redirect: false });
+    if (result?.ok && !result.error) {
+      router.replace(callbackUrl);
+      router.refresh();
+      return;
+    }
+    setFailure(result?.status === 429 || result?.error === "throttled" ? failureMessages.throttled! : failureMessages.default!);
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="space-y-4" data-testid="password-sign-in">
+      <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="current-password"
+        error={errors.password?.message}
+        {...form.register("password")}
+      />
+      <LiveStatus testId="sign-in-status">{failure && <Notice tone="error" title={failure} />}</LiveStatus>
+      <Button type="submit" pending={isSubmitting} pendingLabel="Signing in…" className="w-full">
+        Sign in
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,54 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { PageTitle } from "@/components/ui/page-title";
+import { requirePageActor } from "@/lib/auth/session";
+import { clubOf, listClubMembers } from "@/lib/data/members";
+import { roleLabels } from "@/lib/auth/roles";
+import { isDemoMail } from "@/lib/env";
+import { InviteMemberForm } from "./_components/invite-member-form";
+
+export const metadata: Metadata = { title: "Club" };
+
+export default async function ClubPage() {
+  const actor = await requirePageActor("admin", "/club");
+  const [club, members] = await Promise.all([clubOf(actor), listClubMembers(actor)]);
+  return (
+    <div className="space-y-8">
+      <PageTitle lead="Members, invitations and the club's mail.">{club.name}</PageTitle>
+      <section aria-labelledby="invite-heading" className="rounded-lg bg-white p-4 shadow-sm">
+        <h2 id="invite-heading" className="mb-3 text-lg font-semibold">
+          Invite a member
+        </h2>
+        <InviteMemberForm />
+      </section>
+      {isDemoMail() && (
+        <p>
+          Demo mode: e-mail is not sent but kept in the{" "}
+          <Link href="/club/outbox" className="font-semibold text-river-700 underline">
+            club outbox
+          </Link>
+          .
+        </p>
+      )}
+      <section aria-labelledby="members-heading">
+        <h2 id="members-heading" className="mb-3 text-lg font-semibold">
+          Members ({members.length})
+        </h2>
+        <ul className="divide-y divide-slate-200 rounded-lg bg-white shadow-sm">
+          {members.map((member) => (
+            <li key={member.id} className="flex flex-wrap justify-between gap-2 px-4 py-3">
+              <span>
+                <span className="font-semibold">{member.name}</span>{" "}
+                <span className="text-sm text-slate-700">{member.email}</span>
+              </span>
+              <span className="text-sm">
+                {roleLabels[member.role]}
+                {member.status === "deactivated" ? " · deactivated" : ""}
+              </span>
+            </li>
+          ))}
+        </ul>
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,100 @@
+import type { Role } from "@/lib/auth/roles";
+import { ForbiddenError, NotFoundError, UnauthenticatedError } from "@/lib/http/errors";
+
+/** The signed-in user as every permission check sees them. */
+export interface Actor {
+  id: number;
+  clubId: number;
+  role: Role;
+  name: string;
+  email: string;
+}
+
+/** Who may enter a part of the site: anyone, any member, coaches (and admins), admins only. */
+export type Area = "public" | "member" | "coach" | "admin";
+
+const areaPrefixes: { prefix: string; area: Area }[] = [
+  { prefix: "/club", area: "admin" },
+  { prefix: "/roster", area: "coach" },
+  { prefix: "/learn", area: "member" },
+  { prefix: "/rig", area: "member" },
+  { prefix: "/account", area: "member" },
+];
+
+/** The area a page path belongs to; paths not listed are public. */
+export function areaForPath(pathname: string): Area {
+  for (const { prefix, area } of areaPrefixes) {
+    if (pathname === prefix || pathname.startsWith(`${prefix}/`)) return area;
+  }
+  return "public";
+}
+
+const roleRank: Record<Role, number> = { athlete: 1, coach: 2, admin: 3 };
+const areaRank: Record<Area, number> = { public: 0, member: 1, coach: 2, admin: 3 };
+
+/** Admins can do what coaches do, coaches what members do. */
+export function canEnterArea(role: Role | null, area: Area): boolean {
+  if (area === "public") return true;
+  if (!role) return false;
+  return roleRank[role] >= areaRank[area];
+}
+
+/** Where each role lands after signing in. */
+export function homePathFor(role: Role): string {
+  if (role === "admin") return "/club";
+  if (role === "coach") return "/roster";
+  return "/learn";
+}
+
+export function isCoach(actor: Actor): boolean {
+  return canEnterArea(actor.role, "coach");
+}
+
+export function isAdmin(actor: Actor): boolean {
+  return actor.role === "admin";
+}
+
+interface ClubMember {
+  id: number;
+  clubId: number;
+}
+
+/** Athletes see their own records; coaches and admins see their own club's athletes. */
+export function canViewAthlete(actor: Actor, athlete: ClubMember): boolean {
+  return actor.id === athlete.id || (isCoach(actor) && actor.clubId === athlete.clubId);
+}
+
+/** A coach or admin of the athlete's club observes the practical, never their own. */
+export function canSignOff(actor: Actor, athlete: ClubMember): boolean {
+  return isCoach(actor) && actor.clubId === athlete.clubId && actor.id !== athlete.id;
+}
+
+/** Admins manage members, settings, certificates and the register of their own club. */
+export function canManageClub(actor: Actor, clubId: number): boolean {
+  return isAdmin(actor) && actor.clubId === clubId;
+}
+
+/** Admins may change another member's role or deactivate them, never their own account. */
+export function canChangeMember(actor: Actor, member: ClubMember): boolean {
+  return canManageClub(actor, member.clubId) && actor.id !== member.id;
+}
+
+/** The local mail outbox is readable only in demo mode, and only by admins. */
+export function canReadOutbox(actor: Actor, demoMail: boolean): boolean {
+  return demoMail && isAdmin(actor);
+}
+
+/** Throws 401 when nobody is signed in. */
+export function assertSignedIn(actor: Actor | null): asserts actor is Actor {
+  if (!actor) throw new UnauthenticatedError();
+}
+
+/** Throws 403 when the rule refuses a signed-in user. */
+export function assertAllowed(allowed: boolean, message?: string): asserts allowed {
+  if (!allowed) throw new ForbiddenError(message);
+}
+
+/** Throws 404 for records that exist but are not the actor's to see (no hint that they exist). */
+export function assertVisible(visible: boolean): asserts visible {
+  if (!visible) throw new NotFoundError();
+}

@@ -1,0 +1,208 @@
+import "server-only";
+import { Op } from "sequelize";
+import { writeTransaction } from "@/lib/db";
+import { databaseReady } from "@/lib/data/database";
+import { recordAudit } from "@/lib/data/audit";
+import type { Actor } from "@/lib/auth/permissions";
+import { assertAllowed, canManageClub } from "@/lib/auth/permissions";
+import { hashPassword, passwordProblem, verifyAgainstDecoy, verifyPassword } from "@/lib/auth/password";
+import { hashToken, newToken } from "@/lib/auth/tokens";
+import { ConflictError, NotFoundError, ValidationError } from "@/lib/http/errors";
+import { sendMail } from "@/lib/mail/send";
+import { publicBaseUrl } from "@/lib/env";
+import type { Role } from "@/lib/auth/roles";
+import { Club, Invitation, SignInLink, User } from "@/models";
+
+/** A signed-in user plus the token version their session must carry. */
+export interface SessionUser extends Actor {
+  tokenVersion: number;
+}
+
+const invitationDays = 14;
+const signInLinkMinutes = 20;
+
+function toSessionUser(user: User): SessionUser {
+  return {
+    id: user.id,
+    clubId: user.clubId,
+    role: user.role,
+    name: user.name,
+    email: user.email,
+    tokenVersion: user.tokenVersion,
+  };
+}
+
+export function normaliseEmail(email: string): string {
+  return email.trim().toLowerCase();
+}
+
+async function markSignedIn(userId: number): Promise<void> {
+  await writeTransaction(async (transaction) => {
+    await User.update({ lastSignInAt: new Date() }, { where: { id: userId }, transaction });
+  });
+}
+
+/** E-mail and password; null for any failure (unknown account, wrong password, deactivated). */
+export async function authenticateWithPassword(email: string, password: string): Promise<SessionUser | null> {
+  await databaseReady();
+  const user = await User.findOne({ where: { email: normaliseEmail(email) } });
+  if (!user || !user.passwordHash || user.status !== "active") {
+    return verifyAgainstDecoy(password).then(() => null);
+  }
+  if (!(await verifyPassword(password, user.passwordHash))) return null;
+  await markSignedIn(user.id);
+  return toSessionUser(user);
+}
+
+/** Consumes a one-time sign-in link; null when unknown, used or expired. */
+export async function authenticateWithLink(token: string): Promise<SessionUser | null> {
+  await databaseReady();
+  const userId = await writeTransaction(async (transaction) => {
+    const link = await SignInLink.findOne({ where: { tokenHash: hashToken(token) }, transaction });
+    if (!link || link.usedAt || link.expiresAt.getTime() < Date.now()) return null;
+    await link.update({ usedAt: new Date() }, { transaction });
+    return link.userId;
+  });
+  if (!userId) return null;
+  const user = await User.findByPk(userId);
+  if (!user || user.status !== "active") return null;
+  await markSignedIn(user.id);
+  return toSessionUser(user);
+}
+
+/** The current state of a session's user: null when deactivated, removed or the token version moved on. */
+export async function sessionUserById(id: number, tokenVersion: number): Promise<SessionUser | null> {
+  await databaseReady();
+  const user = await User.findByPk(id);
+  if (!user || user.status !== "active" || user.tokenVersion !== tokenVersion) return null;
+  return toSessionUser(user);
+}
+
+/**
+ * Mails a one-time sign-in link when the address belongs to an active member. Says nothing either way,
+ * so the caller's answer is the same for known and unknown addresses.
+ */
+export async function requestSignInLink(email: string): Promise<void> {
+  await databaseReady();
+  const user = await User.findOne({ where: { email: normaliseEmail(email), status: "active" } });
+  if (!user) return;
+  const token = newToken();
+  await writeTransaction(async (transaction) => {
+    await SignInLink.create(
+      { userId: user.id, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + signInLinkMinutes * 60_000) },
+      { transaction },
+    );
+  });
+  await sendMail({
+    to: user.email,
+    subject: "Your Slipway sign-in link",
+    text: [
+      `Hello ${user.name},`,
+      "",
+      `Open this link within ${signInLinkMinutes} minutes to sign in to Slipway. It works once.`,
+      `${publicBaseUrl()}/sign-in/link?token=${token}`,
+      "",
+      "If you did not ask for it, ignore this message.",
+    ].join("\n"),
+  });
+}
+
+export interface InvitationInput {
+  email: string;
+  name: string;
+  role: Role;
+}
+
+/** An admin invites someone to their club; the invitation link arrives by e-mail. */
+export async function inviteMember(actor: Actor, input: InvitationInput): Promise<{ invitationId: number }> {
+  await databaseReady();
+  assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators can invite members.");
+  const email = normaliseEmail(input.email);
+  if (await User.findOne({ where: { email } })) {
+    throw new ConflictError("Someone with that e-mail address is already a member.");
+  }
+  const club = await Club.findByPk(actor.clubId);
+  if (!club) throw new NotFoundError();
+  const token = newToken();
+  const invitation = await writeTransaction(async (transaction) => {
+    const created = await Invitation.create(
+      {
+        clubId: actor.clubId,
+        invitedById: actor.id,
+        email,
+        name: input.name.trim(),
+        role: input.role,
+        tokenHash: hashToken(token),
+        expiresAt: new Date(Date.now() + invitationDays * 86_400_000),
+      },
+      { transaction },
+    );
+    await recordAudit(
+      { clubId: actor.clubId, actorId: actor.id, action: "member.invited", subjectType: "invitation", subjectId: created.id, details: { email, role: input.role } },
+      transaction,
+    );
+    return created;
+  });
+  await sendMail({
+    to: email,
+    subject: `You are invited to ${club.name} on Slipway`,
+    text: [
+      `Hello ${input.name.trim()},`,
+      "",
+      `${actor.name} has invited you to ${club.name} on Slipway, the club's oar-rigging course.`,
+      `Choose a password here within ${invitationDays} days:`,
+      `${publicBaseUrl()}/invite/${token}`,
+    ].join("\n"),
+  });
+  return { invitationId: invitation.id };
+}
+
+export interface PendingInvitation {
+  email: string;
+  name: string;
+  role: Role;
+  clubName: string;
+}
+
+async function openInvitation(token: string): Promise<Invitation | null> {
+  const invitation = await Invitation.findOne({
+    where: { tokenHash: hashToken(token), acceptedAt: null, expiresAt: { [Op.gt]: new Date() } },
+  });
+  return invitation;
+}
+
+/** What the invitation page shows; null when the link is unknown, used or expired. */
+export async function findPendingInvitation(token: string): Promise<PendingInvitation | null> {
+  await databaseReady();
+  const invitation = await openInvitation(token);
+  if (!invitation) return null;
+  const club = await Club.findByPk(invitation.clubId);
+  return { email: invitation.email, name: invitation.name, role: invitation.role, clubName: club?.name ?? "" };
+}
+
+/** Accepting creates the member with their chosen password; the invitation works once. */
+export async function acceptInvitation(token: string, name: string, password: string): Promise<{ email: string }> {
+  await databaseReady();
+  const problem = passwordProblem(password);
+  if (problem) throw new ValidationError(problem, { password: [problem] });
+  const passwordHash = await hashPassword(password);
+  return writeTransaction(async (transaction) => {
+    const invitation = await Invitation.findOne({ where: { tokenHash: hashToken(token) }, transaction });
+    if (!invitation || invitation.acceptedAt || invitation.expiresAt.getTime() < Date.now()) {
+      throw new NotFoundError("This invitation link is no longer valid. Ask your club administrator for a new one.");
+    }
+    if (await User.findOne({ where: { email: invitation.email }, transaction })) {
+      throw new ConflictError("That e-mail address already has an account. Sign in instead.");
+    }
+    const user = await User.create(
+      { clubId: invitation.clubId, email: invitation.email, name: name.trim(), role: invitation.role, passwordHash },
+      { transaction },
+    );
+    await invitation.update({ acceptedAt: new Date() }, { transaction });
+    await recordAudit(
+      { clubId: invitation.clubId, actorId: user.id, action: "member.joined", subjectType: "user", subjectId: user.id },
+      transaction,
+    );
+    return { email: user.email };
+  });
+}

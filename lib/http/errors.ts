@@ -1,0 +1,67 @@
+/** Field name (dotted path) → messages, as returned to forms and API clients. */
+export type FieldErrors = Record<string, string[]>;
+
+/** An error that maps to one HTTP status. Everything that refuses a request throws one of these. */
+export class AppError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fieldErrors?: FieldErrors,
+  ) {
+    super(message);
+    this.name = new.target.name;
+  }
+}
+
+export class UnauthenticatedError extends AppError {
+  constructor(message = "Sign in to continue.") {
+    super(401, "unauthenticated", message);
+  }
+}
+
+export class ForbiddenError extends AppError {
+  constructor(message = "Your role does not allow this.") {
+    super(403, "forbidden", message);
+  }
+}
+
+/** Also used for "exists but is not yours", so that nobody learns another athlete's ids. */
+export class NotFoundError extends AppError {
+  constructor(message = "Not found.") {
+    super(404, "not_found", message);
+  }
+}
+
+export class ValidationError extends AppError {
+  constructor(message: string, fieldErrors: FieldErrors = {}, status: 400 | 422 = 400) {
+    super(status, "invalid_input", message, fieldErrors);
+  }
+}
+
+export class ConflictError extends AppError {
+  constructor(message: string) {
+    super(409, "conflict", message);
+  }
+}
+
+export class PayloadTooLargeError extends AppError {
+  constructor(message = "The upload is too large.") {
+    super(413, "too_large", message);
+  }
+}
+
+export class UnsupportedMediaError extends AppError {
+  constructor(message: string) {
+    super(415, "unsupported_media_type", message);
+  }
+}
+
+export class TooManyRequestsError extends AppError {
+  constructor(
+    message = "Too many attempts. Wait a few minutes and try again.",
+    readonly retryAfterSeconds = 60,
+  ) {
+    super(429, "too_many_requests", message);
+  }
+}

@@ -1,0 +1,77 @@
+import "server-only";
+import { NextResponse } from "next/server";
+import type { ZodType } from "zod";
+import { AppError, TooManyRequestsError, UnsupportedMediaError, ValidationError, ForbiddenError } from "@/lib/http/errors";
+import { validationErrorFrom } from "@/lib/validations/issues";
+
+/** The one mapping of errors to HTTP responses for route handlers. Unknown errors are logged, never shown. */
+export function errorResponse(error: unknown): NextResponse {
+  if (error instanceof AppError) {
+    const headers: Record<string, string> = {};
+    if (error instanceof TooManyRequestsError) headers["Retry-After"] = String(error.retryAfterSeconds);
+    return NextResponse.json(
+      { error: error.code, message: error.message, ...(error.fieldErrors ? { fields: error.fieldErrors } : {}) },
+      { status: error.status, headers },
+    );
+  }
+  console.error("Unexpected error in route handler", error);
+  return NextResponse.json({ error: "internal", message: "Something went wrong on our side. Nothing was saved twice; try again." }, { status: 500 });
+}
+
+const safeMethods = new Set(["GET", "HEAD", "OPTIONS"]);
+
+/** Refuses state-changing requests sent from another site (Sec-Fetch-Site, else Origin against Host). */
+export function assertSameOrigin(request: Request): void {
+  if (safeMethods.has(request.method)) return;
+  const fetchSite = request.headers.get("sec-fetch-site");
+  if (fetchSite && fetchSite !== "same-origin" && fetchSite !== "none") {
+    throw new ForbiddenError("Cross-site requests are refused.");
+  }
+  const origin = request.headers.get("origin");
+  if (!origin) return;
+  const host = request.headers.get("x-forwarded-host") ?? request.headers.get("host");
+  let originHost: string;
+  try {
+    originHost = new URL(origin).host;
+  } catch {
+    throw new ForbiddenError("Cross-site requests are refused.");
+  }
+  if (originHost !== host) throw new ForbiddenError("Cross-site requests are refused.");
+}
+
+type Handler<Context> = (request: Request, context: Context) => Promise<Response>;
+
+/** Wraps a route handler: same-origin check for writes, typed errors mapped to statuses, no stack traces. */
+export function route<Context = unknown>(handler: Handler<Context>): Handler<Context> {
+  return async (request, context) => {
+    try {
+      assertSameOrigin(request);
+      return await handler(request, context);
+    } catch (error) {
+      return errorResponse(error);
+    }
+  };
+}
+
+const maxJsonBytes = 64 * 1024;
+
+/** Reads a JSON body (content type checked, size bounded) and validates it with the schema. */
+export async function readJson<T>(request: Request, schema: ZodType<T>): Promise<T> {
+  const type = request.headers.get("content-type") ?? "";
+  if (!type.toLowerCase().startsWith("application/json")) {
+    throw new UnsupportedMediaError("Send the body as JSON with Content-Type: application/json.");
+  }
+  const declared = Number(request.headers.get("content-length") ?? "0");
+  if (declared > maxJsonBytes) throw new ValidationError(`body: larger than ${maxJsonBytes} bytes`, { body: ["too large"] });
+  const text = await request.text();
+  if (text.length > maxJsonBytes) throw new ValidationError(`body: larger than ${maxJsonBytes} bytes`, { body: ["too large"] });
+  let raw: unknown;
+  try {
+    raw = JSON.parse(text);
+  } catch {
+    throw new ValidationError("body: not valid JSON", { body: ["not valid JSON"] });
+  }
+  const parsed = schema.safeParse(raw);
+  if (!parsed.success) throw validationErrorFrom(parsed.error);
+  return parsed.data;
+}

@@ -1,0 +1,54 @@
+import type { Sequelize } from "sequelize";
+import { hashPassword } from "@/lib/auth/password";
+import type { Role } from "@/lib/auth/roles";
+import { initModels, Club, User } from "@/models";
+
+/** Invented demo data only: no real club or person. */
+export const demoClub = { name: "Lantern Reach Rowing Club", slug: "lantern-reach" };
+export const demoPassword = "lantern-reach-demo";
+
+export interface DemoMember {
+  email: string;
+  name: string;
+  role: Role;
+}
+
+export const demoMembers: DemoMember[] = [
+  { email: "admin@lantern-reach.example", name: "Maren Okafor", role: "admin" },
+  { email: "coach.tobias@lantern-reach.example", name: "Tobias Lindqvist", role: "coach" },
+  { email: "coach.ines@lantern-reach.example", name: "Inès Barrow", role: "coach" },
+  { email: "ada@lantern-reach.example", name: "Ada Whitcombe", role: "athlete" },
+  { email: "bilal@lantern-reach.example", name: "Bilal Hartigan", role: "athlete" },
+  { email: "carys@lantern-reach.example", name: "Carys Penhallow", role: "athlete" },
+  { email: "dev@lantern-reach.example", name: "Dev Castellano", role: "athlete" },
+  { email: "elin@lantern-reach.example", name: "Elin Marchetti", role: "athlete" },
+  { email: "femi@lantern-reach.example", name: "Femi Ashdown", role: "athlete" },
+  { email: "greta@lantern-reach.example", name: "Greta Quennell", role: "athlete" },
+  { email: "hamish@lantern-reach.example", name: "Hamish Oyelaran", role: "athlete" },
+  { email: "iris@lantern-reach.example", name: "Iris Delacourt", role: "athlete" },
+  { email: "jonah@lantern-reach.example", name: "Jonah Treloar", role: "athlete" },
+  { email: "kit@lantern-reach.example", name: "Kit Abernethy", role: "athlete" },
+  { email: "lena@lantern-reach.example", name: "Lena Fairbrother", role: "athlete" },
+];
+
+/**
+ * Creates the demo club and its members when they are missing; running it again changes nothing
+ * (members are matched by e-mail, so a demo password someone changed is kept).
+ */
+export async function seedDemoClub(sequelize: Sequelize): Promise<{ created: number }> {
+  initModels(sequelize);
+  const passwordHash = await hashPassword(demoPassword);
+  return sequelize.transaction(async (transaction) => {
+    const [club] = await Club.findOrCreate({ where: { slug: demoClub.slug }, defaults: { ...demoClub, settings: {} }, transaction });
+    let created = 0;
+    for (const member of demoMembers) {
+      const [, wasCreated] = await User.findOrCreate({
+        where: { email: member.email },
+        defaults: { ...member, clubId: club.id, passwordHash },
+        transaction,
+      });
+      if (wasCreated) created += 1;
+    }
+    return { created };
+  });
+}

@@ -1,0 +1,28 @@
+import { z } from "zod";
+import { roles } from "@/lib/auth/roles";
+import { maxPasswordLength, minPasswordLength } from "@/lib/auth/password-rules";
+
+export const invitationSchema = z.strictObject({
+  email: z.email({ error: "Enter an e-mail address like name@example.org." }).max(254),
+  name: z.string().trim().min(1, { error: "Enter the member's name." }).max(120, { error: "Keep the name under 120 characters." }),
+  role: z.enum(roles, { error: "Choose athlete, coach or admin." }),
+});
+export type InvitationFormInput = z.input<typeof invitationSchema>;
+
+export const acceptInvitationSchema = z.strictObject({
+  token: z.string().min(10).max(100),
+  name: z.string().trim().min(1, { error: "Enter your name." }).max(120),
+  password: z
+    .string()
+    .min(minPasswordLength, { error: `Use at least ${minPasswordLength} characters.` })
+    .max(maxPasswordLength, { error: `Use at most ${maxPasswordLength} characters.` }),
+});
+
+export const signInSchema = z.strictObject({
+  email: z.email({ error: "Enter the e-mail address you signed up with." }).max(254),
+  password: z.string().min(1, { error: "Enter your password." }).max(maxPasswordLength),
+});
+
+export const signInLinkSchema = z.strictObject({
+  email: z.email({ error: "Enter the e-mail address you signed up with." }).max(254),
+});

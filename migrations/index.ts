@@ -1,0 +1,11 @@
+import * as createFoundation from "@/migrations/20261202-0001-create-foundation";
+
+export interface MigrationModule {
+  up: typeof createFoundation.up;
+  down: typeof createFoundation.down;
+}
+
+/** Every migration in order. A static list works alike in the Next server, tsx scripts and vitest. */
+export const migrationList: { name: string; module: MigrationModule }[] = [
+  { name: "20261202-0001-create-foundation", module: createFoundation },
+];

@@ -1,0 +1,114 @@
+import fs from "node:fs";
+import path from "node:path";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { createTempDataDir } from "@/tests/support/temp-data-dir";
+import { closeDatabase, getSequelize, writeTransaction } from "@/lib/db";
+import { databaseReady } from "@/lib/data/database";
+import { migrateToLatest, migrateToNothing } from "@/lib/migrate";
+import { seedDemoClub, demoMembers } from "@/lib/seed/demo-club";
+import { acceptInvitation, authenticateWithPassword, findPendingInvitation, inviteMember, sessionUserById } from "@/lib/data/users";
+import { listOutbox } from "@/lib/mail/outbox";
+import { AuditEvent, Club, User } from "@/models";
+import type { Actor } from "@/lib/auth/permissions";
+import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "@/lib/http/errors";
+
+const dataDir = createTempDataDir("foundation");
+
+beforeAll(async () => {
+  await databaseReady();
+  await seedDemoClub(getSequelize());
+});
+
+afterAll(async () => {
+  await closeDatabase();
+});
+
+describe("database", () => {
+  it("creates the file in SLIPWAY_DATA_DIR, in WAL mode with a busy timeout", async () => {
+    expect(fs.existsSync(path.join(dataDir, "slipway.sqlite"))).toBe(true);
+    const [rows] = await getSequelize().query("PRAGMA journal_mode");
+    expect(rows).toEqual([{ journal_mode: "wal" }]);
+  });
+
+  it("runs the migrations down and up again", async () => {
+    const sequelize = getSequelize();
+    await migrateToNothing(sequelize);
+    const tablesAfterDown = await sequelize.getQueryInterface().showAllTables();
+    expect(tablesAfterDown).not.toContain("users");
+    const applied = await migrateToLatest(sequelize);
+    expect(applied.length).toBeGreaterThan(0);
+    expect(await sequelize.getQueryInterface().showAllTables()).toEqual(expect.arrayContaining(["clubs", "users", "invitations"]));
+    await seedDemoClub(sequelize);
+  });
+
+  it("seeds the demo club idempotently", async () => {
+    const again = await seedDemoClub(getSequelize());
+    expect(again.created).toBe(0);
+    expect(await User.count()).toBe(demoMembers.length);
+    expect(await Club.count()).toBe(1);
+  });
+
+  it("queues concurrent write transactions instead of failing with SQLITE_BUSY", async () => {
+    const club = await Club.findOne();
+    const results = await Promise.allSettled(
+      Array.from({ length: 40 }, (_, index) =>
+        writeTransaction(async (transaction) => {
+          const count = await AuditEvent.count({ transaction });
+          await AuditEvent.create(
+            { clubId: club!.id, actorId: null, action: "test.write", subjectType: "test", subjectId: String(index), details: { seen: count } },
+            { transaction },
+          );
+        }),
+      ),
+    );
+    expect(results.filter((result) => result.status === "rejected")).toHaveLength(0);
+    const written = await AuditEvent.findAll({ where: { action: "test.write" } });
+    expect(written).toHaveLength(40);
+    // Each transaction saw every earlier one: the counts are exactly 0..39 with no duplicates.
+    const seen = written.map((event) => (event.details as { seen: number }).seen).sort((a, b) => a - b);
+    expect(seen).toEqual(Array.from({ length: 40 }, (_, index) => index));
+  });
+});
+
+describe("accounts and invitations", () => {
+  async function actorFor(email: string): Promise<Actor> {
+    const user = await User.findOne({ where: { email } });
+    return { id: user!.id, clubId: user!.clubId, role: user!.role, name: user!.name, email: user!.email };
+  }
+
+  it("authenticates the demo admin and refuses a wrong password or unknown account", async () => {
+    expect(await authenticateWithPassword("ADMIN@lantern-reach.example", "lantern-reach-demo")).toMatchObject({ role: "admin" });
+    expect(await authenticateWithPassword("admin@lantern-reach.example", "wrong-password-here")).toBeNull();
+    expect(await authenticateWithPassword("nobody@lantern-reach.example", "lantern-reach-demo")).toBeNull();
+  });
+
+  it("ends sessions whose token version is stale or whose user is deactivated", async () => {
+    const user = await User.findOne({ where: { email: "kit@lantern-reach.example" } });
+    expect(await sessionUserById(user!.id, user!.tokenVersion)).not.toBeNull();
+    expect(await sessionUserById(user!.id, user!.tokenVersion + 1)).toBeNull();
+    await writeTransaction((transaction) => user!.update({ status: "deactivated" }, { transaction }));
+    expect(await sessionUserById(user!.id, user!.tokenVersion)).toBeNull();
+    expect(await authenticateWithPassword("kit@lantern-reach.example", "lantern-reach-demo")).toBeNull();
+  });
+
+  it("lets only admins invite, mails the link, and accepts it once", async () => {
+    const admin = await actorFor("admin@lantern-reach.example");
+    const coach = await actorFor("coach.tobias@lantern-reach.example");
+    await expect(inviteMember(coach, { email: "x@lantern-reach.example", name: "X", role: "athlete" })).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(inviteMember(admin, { email: "ada@lantern-reach.example", name: "Ada", role: "athlete" })).rejects.toBeInstanceOf(ConflictError);
+
+    await inviteMember(admin, { email: "Rowan.New@lantern-reach.example", name: "Rowan New", role: "athlete" });
+    const [mail] = await listOutbox();
+    expect(mail?.to).toBe("rowan.new@lantern-reach.example");
+    const token = /\/invite\/(\S+)/.exec(mail!.text)?.[1];
+    expect(token).toBeTruthy();
+    expect(await findPendingInvitation(token!)).toMatchObject({ email: "rowan.new@lantern-reach.example", role: "athlete" });
+
+    await expect(acceptInvitation(token!, "Rowan New", "password123")).rejects.toBeInstanceOf(ValidationError);
+    await acceptInvitation(token!, "Rowan New", "oarlock heron tidewater");
+    expect(await authenticateWithPassword("rowan.new@lantern-reach.example", "oarlock heron tidewater")).toMatchObject({ name: "Rowan New" });
+    await expect(acceptInvitation(token!, "Rowan New", "oarlock heron tidewater")).rejects.toBeInstanceOf(NotFoundError);
+    expect(await findPendingInvitation(token!)).toBeNull();
+    expect(await AuditEvent.count({ where: { action: "member.invited" } })).toBe(1);
+  });
+});

@@ -1,0 +1,46 @@
+import { describe, expect, it } from "vitest";
+import { hashPassword, passwordProblem, verifyPassword } from "@/lib/auth/password";
+import { safeCallbackPath } from "@/lib/http/safe-redirect";
+
+// Rules after NIST SP 800-63B (2017), 5.1.1.2: a minimum length, a check against common passwords,
+// no composition rules.
+describe("password rules", () => {
+  it("refuses passwords under 10 characters", () => {
+    expect(passwordProblem("short")).toMatch(/at least 10/);
+    expect(passwordProblem("nine-char")).toMatch(/at least 10/);
+  });
+
+  it.each(["password123", "qwertyuiop", "1234567890", "iloveyou12", "aaaaaaaaaaaa"])(
+    "refuses the common or trivially guessable %s",
+    (password) => {
+      expect(passwordProblem(password)).toMatch(/too common/);
+    },
+  );
+
+  it("accepts long unusual passphrases without any composition rule", () => {
+    expect(passwordProblem("heron collar tidewater")).toBeNull();
+    expect(passwordProblem("lantern-reach-demo")).toBeNull();
+    expect(passwordProblem("allsmallletterswithoutdigits")).toBeNull();
+  });
+
+  it("refuses absurdly long input", () => {
+    expect(passwordProblem("x".repeat(129))).toMatch(/at most/);
+  });
+
+  it("stores bcrypt hashes that verify only the right password", async () => {
+    const hash = await hashPassword("heron collar tidewater");
+    expect(hash).toMatch(/^\$2[aby]\$11\$/);
+    expect(await verifyPassword("heron collar tidewater", hash)).toBe(true);
+    expect(await verifyPassword("heron collar tidewateR", hash)).toBe(false);
+  });
+});
+
+describe("callback paths after sign-in", () => {
+  it("follows only same-site relative paths", () => {
+    expect(safeCallbackPath("/roster")).toBe("/roster");
+    expect(safeCallbackPath("//evil.example/x")).toBe("/home");
+    expect(safeCallbackPath("https://evil.example")).toBe("/home");
+    expect(safeCallbackPath("/\\evil.example")).toBe("/home");
+    expect(safeCallbackPath(undefined)).toBe("/home");
+  });
+});
