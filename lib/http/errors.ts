@@ -8,6 +8,8 @@ export class AppError extends Error {
     readonly code: string,
     message: string,
     readonly fieldErrors?: FieldErrors,
+    /** Extra JSON fields for the response body, e.g. the stored result of an already-submitted attempt. */
+    readonly extra?: Record<string, unknown>,
   ) {
     super(message);
     this.name = new.target.name;
@@ -40,8 +42,8 @@ export class ValidationError extends AppError {
 }
 
 export class ConflictError extends AppError {
-  constructor(message: string) {
-    super(409, "conflict", message);
+  constructor(message: string, extra?: Record<string, unknown>) {
+    super(409, "conflict", message, undefined, extra);
   }
 }
 

@@ -10,7 +10,12 @@ export function errorResponse(error: unknown): NextResponse {
     const headers: Record<string, string> = {};
     if (error instanceof TooManyRequestsError) headers["Retry-After"] = String(error.retryAfterSeconds);
     return NextResponse.json(
-      { error: error.code, message: error.message, ...(error.fieldErrors ? { fields: error.fieldErrors } : {}) },
+      {
+        ...error.extra,
+        error: error.code,
+        message: error.message,
+        ...(error.fieldErrors ? { fields: error.fieldErrors } : {}),
+      },
       { status: error.status, headers },
     );
   }
