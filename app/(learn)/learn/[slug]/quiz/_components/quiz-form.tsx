@@ -1,0 +1,317 @@
+"use client";
+
+import { useCallback, useEffect, useMemo, useState } from "react";
+import Link from "next/link";
+import { Controller, useForm, useWatch } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import type { PublicQuestion } from "@/lib/quiz/types";
+import { Button, buttonClasses } from "@/components/ui/button";
+import { LiveStatus, Notice } from "@/components/ui/notice";
+import { LoadingState } from "@/components/ui/loading-state";
+import { quizFormSchema, toSubmission, type QuizFormValues } from "./quiz-schema";
+import { OrderQuestion } from "./order-question";
+
+interface Opening {
+  attemptId: string;
+  questions: PublicQuestion[];
+  resumed: boolean;
+}
+
+interface QuizResult {
+  score: number;
+  passed: boolean;
+  passMark: number;
+  results: { id: string; correct: boolean; expected: string; explanation: string }[];
+}
+
+type Phase =
+  | { kind: "loading" }
+  | { kind: "error"; message: string }
+  | { kind: "answering"; opening: Opening }
+  | { kind: "graded"; opening: Opening; result: QuizResult; answers: Record<string, string | string[]> };
+
+const storageKey = (attemptId: string) => `slipway:quiz:${attemptId}`;
+
+function initialValues(opening: Opening): QuizFormValues {
+  const answers: Record<string, string | string[]> = {};
+  for (const question of opening.questions) {
+    if (question.kind === "order") answers[question.id] = (question.choices ?? []).map((choice) => choice.id);
+    else if (question.kind === "multiple") answers[question.id] = [];
+    else answers[question.id] = "";
+  }
+  try {
+    const saved = window.localStorage.getItem(storageKey(opening.attemptId));
+    if (saved) Object.assign(answers, (JSON.parse(saved) as QuizFormValues).answers);
+  } catch {
+    // Stored answers are a convenience; a damaged copy is ignored.
+  }
+  return { answers };
+}
+
+async function readError(response: Response): Promise<string> {
+  try {
+    const body = (await response.json()) as { message?: string };
+    return body.message ?? `The server answered ${response.status}.`;
+  } catch {
+    return `The server answered ${response.status}.`;
+  }
+}
+
+async function openAttempt(slug: string): Promise<Phase> {
+  try {
+    const response = await fetch(`/api/modules/${slug}/attempts`, { method: "POST" });
+    if (!response.ok) return { kind: "error", message: await readError(response) };
+    return { kind: "answering", opening: (await response.json()) as Opening };
+  } catch {
+    return { kind: "error", message: "Could not reach Slipway. Check your connection and try again." };
+  }
+}
+
+/** The practical quiz: starts or resumes an attempt, keeps answers through a reload, shows worked solutions. */
+export function QuizForm({ slug }: { slug: string }) {
+  const [phase, setPhase] = useState<Phase>({ kind: "loading" });
+
+  const start = useCallback(async () => {
+    setPhase({ kind: "loading" });
+    setPhase(await openAttempt(slug));
+  }, [slug]);
+
+  useEffect(() => {
+    let cancelled = false;
+    void openAttempt(slug).then((next) => {
+      if (!cancelled) setPhase(next);
+    });
+    return () => {
+      cancelled = true;
+    };
+  }, [slug]);
+
+  if (phase.kind === "loading") return <LoadingState label="Getting your questions…" />;
+  if (phase.kind === "error") {
+    return (
+      <div className="space-y-3">
+        <Notice tone="error" title="The quiz could not start.">
+          {phase.message}
+        </Notice>
+        <Button type="button" onClick={() => void start()}>
+          Try again
+        </Button>
+      </div>
+    );
+  }
+  if (phase.kind === "graded") {
+    return <QuizResults opening={phase.opening} result={phase.result} answers={phase.answers} onRetake={() => void start()} slug={slug} />;
+  }
+  return (
+    <AnsweringForm
+      key={phase.opening.attemptId}
+      opening={phase.opening}
+      onGraded={(result, answers) => setPhase({ kind: "graded", opening: phase.opening, result, answers })}
+    />
+  );
+}
+
+function AnsweringForm({
+  opening,
+  onGraded,
+}: {
+  opening: Opening;
+  onGraded: (result: QuizResult, answers: Record<string, string | string[]>) => void;
+}) {
+  const schema = useMemo(() => quizFormSchema(opening.questions), [opening.questions]);
+  const form = useForm<QuizFormValues>({ resolver: zodResolver(schema), defaultValues: initialValues(opening) });
+  const [failure, setFailure] = useState<string | null>(null);
+  const { errors, isSubmitting } = form.formState;
+
+  const watched = useWatch({ control: form.control, name: "answers" });
+  useEffect(() => {
+    try {
+      window.localStorage.setItem(storageKey(opening.attemptId), JSON.stringify({ answers: watched }));
+    } catch {
+      // Private browsing may refuse storage; the quiz still works.
+    }
+  }, [watched, opening.attemptId]);
+
+  const onSubmit = form.handleSubmit(async (values) => {
+    setFailure(null);
+    const answers = toSubmission(opening.questions, values);
+    try {
+      const response = await fetch(`/api/attempts/${opening.attemptId}/submit`, {
+        method: "POST",
+        headers: { "Content-Type": "application/json" },
+        body: JSON.stringify({ answers }),
+      });
+      if (response.ok || response.status === 409) {
+        const body = (await response.json()) as QuizResult & { result?: QuizResult };
+        window.localStorage.removeItem(storageKey(opening.attemptId));
+        onGraded(response.status === 409 && body.result ? body.result : body, answers);
+        return;
+      }
+      setFailure(await readError(response));
+    } catch {
+      setFailure("Could not reach Slipway. Your answers are kept on this phone; try again when you are back online.");
+    }
+  });
+
+  const answered = Object.values(watched ?? {}).filter((value) => (Array.isArray(value) ? value.length > 0 : value !== "")).length;
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="space-y-5" data-testid="quiz-form" aria-describedby="quiz-progress">
+      <p id="quiz-progress" className="text-sm text-slate-700">
+        {opening.resumed ? "Picking up where you left off. " : ""}
+        {opening.questions.length} questions
+      </p>
+      <ol className="space-y-5">
+        {opening.questions.map((question, index) => {
+          const error = errors.answers?.[question.id]?.message;
+          const errorId = `${question.id}-error`;
+          return (
+            <li key={question.id} className="rounded-lg bg-white p-4 shadow-sm" data-testid={`question-${question.id}`}>
+              <fieldset aria-describedby={error ? errorId : undefined}>
+                <legend className="mb-3 font-semibold">
+                  <span className="text-slate-600">Question {index + 1}. </span>
+                  {question.prompt}
+                </legend>
+                {question.kind === "numeric" && (
+                  <div className="flex items-center gap-2">
+                    <label htmlFor={`${question.id}-input`} className="sr-only">
+                      Your answer{question.unit ? ` in ${question.unit}` : ""}
+                    </label>
+                    <input
+                      id={`${question.id}-input`}
+                      type="text"
+                      inputMode="decimal"
+                      autoComplete="off"
+                      aria-invalid={error ? true : undefined}
+                      aria-describedby={error ? errorId : undefined}
+                      className="min-h-11 w-36 rounded-md border border-slate-500 px-3 text-base"
+                      {...form.register(`answers.${question.id}`)}
+                    />
+                    {question.unit && <span aria-hidden="true">{question.unit}</span>}
+                  </div>
+                )}
+                {(question.kind === "single" || question.kind === "multiple") && (
+                  <div className="space-y-2">
+                    {(question.choices ?? []).map((choice) => (
+                      <label
+                        key={choice.id}
+                        className="flex min-h-11 cursor-pointer items-center gap-3 rounded-md border border-slate-300 px-3 py-2 has-[:checked]:border-river-700 has-[:checked]:bg-river-50"
+                      >
+                        <input
+                          type={question.kind === "single" ? "radio" : "checkbox"}
+                          value={choice.id}
+                          className="h-5 w-5 shrink-0 accent-river-700"
+                          {...form.register(`answers.${question.id}`)}
+                        />
+                        <span>{choice.label}</span>
+                      </label>
+                    ))}
+                  </div>
+                )}
+                {question.kind === "order" && (
+                  <Controller
+                    control={form.control}
+                    name={`answers.${question.id}`}
+                    render={({ field }) => (
+                      <OrderQuestion
+                        choices={question.choices ?? []}
+                        value={Array.isArray(field.value) ? field.value : []}
+                        onChange={field.onChange}
+                      />
+                    )}
+                  />
+                )}
+                {error && (
+                  <p id={errorId} className="mt-2 text-sm font-semibold text-alarm-800">
+                    <span aria-hidden="true">⚠ </span>
+                    {error}
+                  </p>
+                )}
+              </fieldset>
+            </li>
+          );
+        })}
+      </ol>
+      <LiveStatus testId="quiz-status">{failure && <Notice tone="error" title={failure} />}</LiveStatus>
+      <div className="sticky bottom-0 -mx-4 border-t border-slate-200 bg-river-50/95 px-4 py-3">
+        <p className="mb-2 text-sm text-slate-700">
+          {answered} of {opening.questions.length} answered
+        </p>
+        <Button type="submit" pending={isSubmitting} pendingLabel="Marking…" className="w-full">
+          Hand in my answers
+        </Button>
+      </div>
+    </form>
+  );
+}
+
+function QuizResults({
+  opening,
+  result,
+  answers,
+  onRetake,
+  slug,
+}: {
+  opening: Opening;
+  result: QuizResult;
+  answers: Record<string, string | string[]>;
+  onRetake: () => void;
+  slug: string;
+}) {
+  const byId = new Map(result.results.map((entry) => [entry.id, entry]));
+  const correctCount = result.results.filter((entry) => entry.correct).length;
+  const labelOf = (question: PublicQuestion, value: string | string[] | undefined): string => {
+    if (value === undefined || value === "" || (Array.isArray(value) && value.length === 0)) return "no answer";
+    const ids = Array.isArray(value) ? value : [value];
+    if (!question.choices) return `${ids.join(", ")}${question.unit ? ` ${question.unit}` : ""}`;
+    return ids.map((id) => question.choices?.find((choice) => choice.id === id)?.label ?? id).join(question.kind === "order" ? " → " : "; ");
+  };
+  return (
+    <div className="space-y-5" data-testid="quiz-results">
+      <div role="status" aria-live="polite">
+        <Notice
+          tone={result.passed ? "success" : "warning"}
+          title={result.passed ? `Passed: ${Math.round(result.score * 100)}%` : `Not passed yet: ${Math.round(result.score * 100)}%`}
+          testId="quiz-outcome"
+        >
+          {correctCount} of {result.results.length} right; the pass mark is {Math.round(result.passMark * 100)}%.{" "}
+          {result.passed
+            ? "Next, ask a coach to watch you do it on a real oar."
+            : "Read the worked solutions below, then try a fresh set of questions."}
+        </Notice>
+      </div>
+      <ol className="space-y-4">
+        {opening.questions.map((question, index) => {
+          const entry = byId.get(question.id);
+          return (
+            <li key={question.id} className="rounded-lg bg-white p-4 shadow-sm">
+              <p className="font-semibold">
+                <span className="text-slate-600">Question {index + 1}. </span>
+                {question.prompt}
+              </p>
+              <p className={`mt-2 font-semibold ${entry?.correct ? "text-reed-800" : "text-alarm-800"}`}>
+                <span aria-hidden="true">{entry?.correct ? "✓ " : "✕ "}</span>
+                {entry?.correct ? "Right" : "Not right"}: you answered {labelOf(question, answers[question.id])}
+              </p>
+              {!entry?.correct && <p className="mt-1">Expected: {entry?.expected}</p>}
+              <p className="mt-2 text-slate-800">{entry?.explanation}</p>
+            </li>
+          );
+        })}
+      </ol>
+      <div className="flex flex-wrap gap-2">
+        {!result.passed && (
+          <Button type="button" onClick={onRetake}>
+            Try a fresh set of questions
+          </Button>
+        )}
+        <Link href="/learn" className={buttonClasses(result.passed ? "primary" : "secondary")}>
+          Back to your course
+        </Link>
+        <Link href={`/learn/${slug}`} className={buttonClasses("secondary")}>
+          Read the lesson again
+        </Link>
+      </div>
+    </div>
+  );
+}

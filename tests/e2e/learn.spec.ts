@@ -1,0 +1,75 @@
+import { expect, test } from "@playwright/test";
+import { demo, signIn } from "./support/auth";
+import { answerQuiz, openQuiz, storedQuestions } from "./support/attempts";
+
+test("an athlete reads a lesson, fails the quiz, retakes it, passes, and the course page says so", async ({ page }) => {
+  await signIn(page, demo.athlete);
+  await expect(page.getByTestId("module-setting-inboard")).toContainText("Not started");
+
+  await page.goto("/learn/setting-inboard");
+  await expect(page.getByRole("heading", { level: 1 })).toContainText("inboard", { ignoreCase: true });
+  await expect(page.locator("svg[role=img]").first()).toBeVisible();
+
+  const opened = page.waitForResponse((response) => response.url().endsWith("/api/modules/setting-inboard/attempts"));
+  await page.getByRole("button", { name: "I've read it: start the quiz" }).click();
+  await expect(page).toHaveURL(/\/learn\/setting-inboard\/quiz$/);
+  const first = await opened;
+  const payload = await first.text();
+  expect(first.status()).toBe(201);
+  // The questions sent to the browser carry no answers or worked solutions.
+  expect(payload).not.toMatch(/"answer"|"explanation"|"tolerance"|"generator"/);
+  const { attemptId } = JSON.parse(payload) as { attemptId: string };
+
+  const questions = await storedQuestions(attemptId);
+  expect(questions.length).toBeGreaterThanOrEqual(6);
+  await answerQuiz(page, questions, false);
+  // A reload mid-quiz resumes the same attempt with the answers kept.
+  const resumed = page.waitForResponse((response) => response.url().endsWith("/api/modules/setting-inboard/attempts"));
+  await page.reload();
+  const again = await resumed;
+  expect(again.status()).toBe(200);
+  expect(((await again.json()) as { attemptId: string }).attemptId).toBe(attemptId);
+  await expect(page.getByText(`${questions.length} of ${questions.length} answered`)).toBeVisible();
+
+  await page.getByRole("button", { name: "Hand in my answers" }).click();
+  await expect(page.getByTestId("quiz-outcome")).toContainText("Not passed yet: 0%");
+  await expect(page.getByText("Expected:").first()).toBeVisible();
+
+  const retake = page.waitForResponse((response) => response.url().endsWith("/api/modules/setting-inboard/attempts"));
+  await page.getByRole("button", { name: "Try a fresh set of questions" }).click();
+  const second = (await (await retake).json()) as { attemptId: string };
+  expect(second.attemptId).not.toBe(attemptId);
+  await answerQuiz(page, await storedQuestions(second.attemptId), true);
+  await page.getByRole("button", { name: "Hand in my answers" }).click();
+  await expect(page.getByTestId("quiz-outcome")).toContainText("Passed: 100%");
+
+  await page.getByRole("link", { name: "Back to your course" }).click();
+  const card = page.getByTestId("module-setting-inboard");
+  await expect(card).toContainText("Quiz passed");
+  await expect(card).toContainText("best score 100%");
+  await expect(card).toContainText("2 attempts");
+
+  const progress = (await (await page.request.get("/api/me/progress")).json()) as {
+    modules: { slug: string; passed: boolean; attempts: number; lessonRead: boolean }[];
+  };
+  expect(progress.modules.find((entry) => entry.slug === "setting-inboard")).toMatchObject({ passed: true, attempts: 2, lessonRead: true });
+});
+
+test("a submitted attempt cannot be submitted again, and another athlete's attempt is not found", async ({ page, browser }) => {
+  await signIn(page, demo.secondAthlete);
+  const { attemptId } = await openQuiz(page, "overall-length");
+  const submit = () => page.request.post(`/api/attempts/${attemptId}/submit`, { data: { answers: { q1: "1" } } });
+  const firstSubmit = await submit();
+  expect(firstSubmit.status()).toBe(200);
+  const stored = (await firstSubmit.json()) as { score: number };
+  const replay = await submit();
+  expect(replay.status()).toBe(409);
+  expect(((await replay.json()) as { result: { score: number } }).result.score).toBe(stored.score);
+
+  const other = await browser.newContext();
+  const otherPage = await other.newPage();
+  await signIn(otherPage, demo.athlete);
+  const foreign = await otherPage.request.post(`/api/attempts/${attemptId}/submit`, { data: { answers: {} } });
+  expect(foreign.status()).toBe(404);
+  await other.close();
+});
