@@ -2,12 +2,16 @@ import { closeDatabase, getSequelize } from "@/lib/db";
 import { migrateToLatest } from "@/lib/migrate";
 import { seedDemoClub, demoClub } from "@/lib/seed/demo-club";
 import { databaseFile } from "@/lib/env";
+import { seedLoadAthletes } from "@/lib/seed/load-athletes";
 
 async function main() {
   const sequelize = getSequelize();
   await migrateToLatest(sequelize);
   const { created } = await seedDemoClub(sequelize);
   console.log(`${demoClub.name}: ${created} new members seeded into ${databaseFile()}.`);
+  // Test-only: numbered athletes in a separate invented club for the load and crash tests.
+  const loadAthletes = Number(process.env.SLIPWAY_SEED_LOAD_ATHLETES ?? "0");
+  if (loadAthletes > 0) await seedLoadAthletes(sequelize, loadAthletes);
   await closeDatabase();
 }
 
