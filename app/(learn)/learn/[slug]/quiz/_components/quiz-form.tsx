@@ -233,7 +233,7 @@ function AnsweringForm({
         })}
       </ol>
       <LiveStatus testId="quiz-status">{failure && <Notice tone="error" title={failure} />}</LiveStatus>
-      <div className="sticky bottom-0 -mx-4 border-t border-slate-200 bg-river-50/95 px-4 py-3">
+      <div className="rounded-lg border border-slate-200 bg-white p-4">
         <p className="mb-2 text-sm text-slate-700">
           {answered} of {opening.questions.length} answered
         </p>
