@@ -1,6 +1,7 @@
 import { closeDatabase, getSequelize } from "@/lib/db";
 import { migrateToLatest } from "@/lib/migrate";
 import { seedDemoClub, demoClub } from "@/lib/seed/demo-club";
+import { seedSecondClub, secondClub } from "@/lib/seed/second-club";
 import { databaseFile } from "@/lib/env";
 
 async function main() {
@@ -8,6 +9,10 @@ async function main() {
   await migrateToLatest(sequelize);
   const { created } = await seedDemoClub(sequelize);
   console.log(`${demoClub.name}: ${created} new members seeded into ${databaseFile()}.`);
+  if (process.env.SLIPWAY_SEED_SECOND_CLUB === "1") {
+    const second = await seedSecondClub(sequelize);
+    console.log(`${secondClub.name} (tests only): ${second.created} new members.`);
+  }
   await closeDatabase();
 }
 
