@@ -4,6 +4,7 @@ import { installNextHeadersStandIn } from "@/tests/support/request-scope";
 import { asCookie, callRoute, sessionCookieFor } from "@/tests/support/call-route";
 
 vi.mock("next/headers", async () => (await import("@/tests/support/request-scope")).nextHeadersStandIn);
+vi.mock("next/cache", () => ({ revalidatePath: () => undefined }));
 
 createTempDataDir("member-admin");
 installNextHeadersStandIn();
@@ -20,6 +21,7 @@ const { AuditEvent, Invitation, User } = await import("@/models");
 const { ForbiddenError, NotFoundError } = await import("@/lib/http/errors");
 const memberRoute = await import("@/app/api/members/[id]/route");
 const importRoute = await import("@/app/api/members/import/route");
+const { importRosterAction, setMemberStatusAction } = await import("@/app/(club)/club/members/actions");
 
 type Actor = import("@/lib/auth/permissions").Actor;
 
@@ -200,5 +202,41 @@ describe("member route handlers", () => {
     const noHeader = await callRoute(importRoute.POST, { method: "POST", path, cookie, body: "just,some\ntext,here\n", contentType: "text/plain" });
     expect(noHeader.status).toBe(400);
     expect(await noHeader.json()).toMatchObject({ error: "invalid_input", fields: { file: [expect.stringContaining("Missing: name, email")] } });
+  });
+});
+
+describe("members page actions", () => {
+  function upload(body: BlobPart, type: string, name = "roster.csv"): FormData {
+    const data = new FormData();
+    data.set("roster", new File([body], name, { type }));
+    return data;
+  }
+
+  it("importRosterAction refuses a missing, non-text, binary or oversized file with a message for the field", async () => {
+    const cookie = await sessionCookieFor(admin, demoPassword);
+    const missing = await asCookie(cookie, () => importRosterAction(new FormData()));
+    expect(missing).toMatchObject({ ok: false, fieldErrors: { roster: ["Choose a CSV file."] } });
+    const image = await asCookie(cookie, () => importRosterAction(upload(new Uint8Array([0x89, 0x50]), "image/png", "a.png")));
+    expect(image).toMatchObject({ ok: false, message: "Choose a CSV or plain-text file." });
+    const binary = await asCookie(cookie, () => importRosterAction(upload(new Uint8Array([0x6e, 0x00, 0xff]), "text/csv")));
+    expect(binary).toMatchObject({ ok: false, message: expect.stringContaining("not text") });
+    const big = await asCookie(cookie, () => importRosterAction(upload("x".repeat(201 * 1024), "text/csv")));
+    expect(big).toMatchObject({ ok: false, message: expect.stringContaining("200 KB") });
+  });
+
+  it("importRosterAction invites the good rows and returns the report", async () => {
+    const cookie = await sessionCookieFor(admin, demoPassword);
+    const result = await asCookie(cookie, () => importRosterAction(upload("name,email\nRue Castellan,rue.castellan@lantern-reach.example\n,x@y.example\n", "text/csv")));
+    expect(result.ok).toBe(true);
+    expect(result.message).toBe("1 invitation sent. Some rows were not imported.");
+    expect(result.ok && result.data?.problems).toEqual([{ row: 3, field: "name", message: "Missing name." }]);
+  });
+
+  it("setMemberStatusAction turns the admin's own account away with the rule's message", async () => {
+    const cookie = await sessionCookieFor(admin, demoPassword);
+    const self = await userFor(admin);
+    const result = await asCookie(cookie, () => setMemberStatusAction({ memberId: self.id, status: "deactivated" }));
+    expect(result).toMatchObject({ ok: false, message: expect.stringContaining("cannot change your own role or deactivate yourself") });
+    expect((await userFor(admin)).status).toBe("active");
   });
 });
