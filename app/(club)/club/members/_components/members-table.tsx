@@ -48,7 +48,7 @@ function StatusWord({ status }: { status: MemberRow["status"] }) {
   );
 }
 
-/** What the "Changes" cell needs from the component, passed through TanStack's table meta. */
+/** What the role and status cells need from the component, passed through TanStack's table meta. */
 interface ChangesMeta {
   actorId: number;
   busy: boolean;
@@ -57,14 +57,26 @@ interface ChangesMeta {
   reactivate: (member: MemberRow) => void;
 }
 
-function MemberChanges({ member, meta }: { member: MemberRow; meta: ChangesMeta }) {
-  if (member.id === meta.actorId) return <span className="text-sm text-slate-700">Your own account</span>;
+function RoleCell({ member, meta }: { member: MemberRow; meta: ChangesMeta }) {
   return (
-    <div className="flex flex-wrap gap-2">
-      <Button variant="secondary" onClick={() => meta.askRole(member)}>
-        Change role<span className="sr-only"> of {member.name}</span>
-      </Button>
-      {member.status === "active" ? (
+    <div className="flex flex-col items-start gap-1">
+      <span>{roleLabels[member.role]}</span>
+      {member.id !== meta.actorId && (
+        <Button variant="secondary" onClick={() => meta.askRole(member)} className="whitespace-nowrap">
+          Change role<span className="sr-only"> of {member.name}</span>
+        </Button>
+      )}
+    </div>
+  );
+}
+
+function StatusCell({ member, meta }: { member: MemberRow; meta: ChangesMeta }) {
+  return (
+    <div className="flex flex-col items-start gap-1">
+      <StatusWord status={member.status} />
+      {member.id === meta.actorId ? (
+        <span className="text-sm text-slate-700">Your own account</span>
+      ) : member.status === "active" ? (
         <Button variant="secondary" onClick={() => meta.askDeactivate(member)}>
           Deactivate<span className="sr-only"> {member.name}</span>
         </Button>
@@ -79,19 +91,21 @@ function MemberChanges({ member, meta }: { member: MemberRow; meta: ChangesMeta 
 
 const columns = [
   column.accessor("name", { header: "Name", cell: (info) => <span className="font-semibold">{info.getValue()}</span> }),
-  column.accessor("email", { header: "E-mail", cell: (info) => <span className="break-all">{info.getValue()}</span> }),
-  column.accessor((member) => roleLabels[member.role], { id: "role", header: "Role" }),
-  column.accessor("status", { header: "Status", cell: (info) => <StatusWord status={info.getValue()} /> }),
+  column.accessor("email", { header: "E-mail", cell: (info) => <span className="[overflow-wrap:anywhere]">{info.getValue()}</span> }),
+  column.accessor((member) => roleLabels[member.role], {
+    id: "role",
+    header: "Role",
+    cell: (info) => <RoleCell member={info.row.original} meta={info.table.options.meta as ChangesMeta} />,
+  }),
+  column.accessor("status", {
+    header: "Status",
+    cell: (info) => <StatusCell member={info.row.original} meta={info.table.options.meta as ChangesMeta} />,
+  }),
   column.accessor("lastSignInAt", {
     header: "Last sign-in",
     // ISO timestamps sort as text; "never signed in" comes first when ascending.
     sortingFn: (a, b) => (a.original.lastSignInAt ?? "").localeCompare(b.original.lastSignInAt ?? ""),
     cell: (info) => info.row.original.lastSignInLabel,
-  }),
-  column.display({
-    id: "changes",
-    header: "Changes",
-    cell: (info) => <MemberChanges member={info.row.original} meta={info.table.options.meta as ChangesMeta} />,
   }),
 ];
 
@@ -161,7 +175,7 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
         {outcome?.message && <Notice tone={outcome.ok ? "success" : "error"} title={outcome.message} />}
       </LiveStatus>
       <div className="overflow-x-auto rounded-lg bg-white shadow-sm">
-        <table className="w-full min-w-[44rem] text-left text-sm" data-testid="members-table">
+        <table className="w-full min-w-[40rem] text-left text-sm" data-testid="members-table">
           <caption className="sr-only">Members of the club, sorted by {sorting[0]?.id ?? "name"}</caption>
           <thead className="border-b border-slate-300 bg-river-50">
             {table.getHeaderGroups().map((group) => (
@@ -194,7 +208,7 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
             {table.getRowModel().rows.map((row) => (
               <tr key={row.id} data-testid={`member-row-${row.original.email}`}>
                 {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-3 py-2 align-middle">
+                  <td key={cell.id} className="px-3 py-2 align-top">
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>
                 ))}
