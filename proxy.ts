@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { getToken } from "next-auth/jwt";
 import { areaForPath, canEnterArea } from "@/lib/auth/permissions";
-import { authSecret } from "@/lib/env";
+import { authSecret, ensureAuthUrl } from "@/lib/env";
 
 /**
  * An optimistic check only: anonymous visitors to a members' page go to sign-in. The pages, actions and
@@ -11,6 +11,9 @@ export async function proxy(request: NextRequest) {
   const { pathname, search } = request.nextUrl;
   const area = areaForPath(pathname);
   if (area === "public") return NextResponse.next();
+  // getToken picks the cookie name (__Secure- or not) from NEXTAUTH_URL: set it before the first
+  // next-auth call of this process, or an https deployment reads no cookie right after a restart.
+  ensureAuthUrl();
   const token = await getToken({ req: request, secret: authSecret() });
   if (!token || !canEnterArea(token.role ?? null, "member")) {
     const signIn = new URL("/sign-in", request.url);

@@ -3,6 +3,8 @@
 set -euo pipefail
 export SLIPWAY_DATA_DIR="${SLIPWAY_DATA_DIR:-$PWD/.e2e-data}"
 export NEXT_TELEMETRY_DISABLED=1
+# A second invented club, so the route-guard tests can check cross-club refusals.
+export SLIPWAY_SEED_SECOND_CLUB=1
 rm -rf "$SLIPWAY_DATA_DIR"
 mkdir -p "$SLIPWAY_DATA_DIR"
 SLIPWAY_SEED_LOAD_ATHLETES=40 node_modules/.bin/tsx --conditions=react-server scripts/seed.ts

@@ -1,6 +1,7 @@
 import { closeDatabase, getSequelize } from "@/lib/db";
 import { migrateToLatest } from "@/lib/migrate";
 import { seedDemoClub, demoClub } from "@/lib/seed/demo-club";
+import { seedSecondClub, secondClub } from "@/lib/seed/second-club";
 import { databaseFile } from "@/lib/env";
 import { seedLoadAthletes } from "@/lib/seed/load-athletes";
 
@@ -12,6 +13,10 @@ async function main() {
   // Test-only: numbered athletes in a separate invented club for the load and crash tests.
   const loadAthletes = Number(process.env.SLIPWAY_SEED_LOAD_ATHLETES ?? "0");
   if (loadAthletes > 0) await seedLoadAthletes(sequelize, loadAthletes);
+  if (process.env.SLIPWAY_SEED_SECOND_CLUB === "1") {
+    const second = await seedSecondClub(sequelize);
+    console.log(`${secondClub.name} (tests only): ${second.created} new members.`);
+  }
   await closeDatabase();
 }
 

@@ -3,6 +3,7 @@ import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { authSecret, ensureAuthUrl } from "@/lib/env";
 import { authenticateWithLink, authenticateWithPassword, type SessionUser } from "@/lib/data/users";
+import { endSessionsOf } from "@/lib/data/sessions";
 import type { Role } from "@/lib/auth/roles";
 
 /** Twelve hours: a poolside session lasts a training day, not a week. */
@@ -47,6 +48,14 @@ export function authOptions(): NextAuthOptions {
         },
       }),
     ],
+    events: {
+      // Sign-out ends the session for real: the token version moves on, so a copied cookie stops working.
+      async signOut({ token }) {
+        if (typeof token?.uid === "number" && typeof token.tokenVersion === "number") {
+          await endSessionsOf(token.uid, token.tokenVersion);
+        }
+      },
+    },
     callbacks: {
       async jwt({ token, user }) {
         if (user) {

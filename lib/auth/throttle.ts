@@ -34,10 +34,27 @@ export async function recordSignInFailure(email: string, address: string): Promi
   await Promise.allSettled([byAccount.penalty(accountKey(email), 1), byAddress.penalty(address, 1)]);
 }
 
-/** The caller's address as the server saw it (first X-Forwarded-For hop when behind a proxy). */
+/** How many reverse proxies in front of the app append to X-Forwarded-For (SLIPWAY_TRUST_PROXY); 0 = none trusted. */
+export function trustedProxyCount(): number {
+  const value = Number(process.env.SLIPWAY_TRUST_PROXY ?? "0");
+  return Number.isInteger(value) && value > 0 ? Math.min(value, 10) : 0;
+}
+
+/**
+ * The key for per-address limits. Next's server gives a route handler no socket address; it only sets
+ * X-Forwarded-For to the connection's address when the request arrived without one (it keeps a header
+ * the client sent). So:
+ * - with SLIPWAY_TRUST_PROXY=n, the proxies are trusted to append: the address is the n-th entry from
+ *   the right, the one our outermost trusted proxy saw (entries further left are the client's own claims);
+ * - without it, the header is taken whole, as Next passed it: the connection's address for ordinary
+ *   clients, but a value a client can choose when the server is reachable directly (see DEVELOPERS.md).
+ */
 export function clientAddress(headers: Headers): string {
-  const forwarded = headers.get("x-forwarded-for")?.split(",")[0]?.trim();
-  return forwarded || headers.get("x-real-ip") || "local";
+  const forwarded = (headers.get("x-forwarded-for") ?? "").slice(0, 512);
+  const hops = trustedProxyCount();
+  if (hops === 0) return forwarded.trim().slice(0, 100) || "unknown";
+  const entries = forwarded.split(",").map((entry) => entry.trim()).filter(Boolean);
+  return entries[entries.length - hops] ?? entries[0] ?? "unknown";
 }
 
 /** A general-purpose limiter for public endpoints (e.g. the rig planner): points per minute per key. */

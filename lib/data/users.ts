@@ -143,18 +143,71 @@ export async function inviteMember(actor: Actor, input: InvitationInput): Promis
     );
     return created;
   });
-  await sendMail({
-    to: email,
-    subject: `You are invited to ${club.name} on Slipway`,
+  await sendInvitationMail({ to: email, name: input.name.trim(), inviterName: actor.name, clubName: club.name, token });
+  return { invitationId: invitation.id };
+}
+
+function sendInvitationMail(mail: { to: string; name: string; inviterName: string; clubName: string; token: string }) {
+  return sendMail({
+    to: mail.to,
+    subject: `You are invited to ${mail.clubName} on Slipway`,
     text: [
-      `Hello ${input.name.trim()},`,
+      `Hello ${mail.name},`,
       "",
-      `${actor.name} has invited you to ${club.name} on Slipway, the club's oar-rigging course.`,
+      `${mail.inviterName} has invited you to ${mail.clubName} on Slipway, the club's oar-rigging course.`,
       `Choose a password here within ${invitationDays} days:`,
-      `${publicBaseUrl()}/invite/${token}`,
+      `${publicBaseUrl()}/invite/${mail.token}`,
     ].join("\n"),
   });
-  return { invitationId: invitation.id };
+}
+
+/**
+ * Invites several people at once (a roster import): one write transaction creates every invitation and
+ * its audit entry, then each invitation e-mail goes out. The caller has already refused existing members.
+ */
+export async function inviteMembers(
+  actor: Actor,
+  inputs: readonly InvitationInput[],
+  via: string,
+): Promise<{ invitationIds: number[]; unsent: string[] }> {
+  await databaseReady();
+  assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators can invite members.");
+  const club = await Club.findByPk(actor.clubId);
+  if (!club) throw new NotFoundError();
+  const prepared = inputs.map((input) => ({ email: normaliseEmail(input.email), name: input.name.trim(), role: input.role, token: newToken() }));
+  const invitationIds = await writeTransaction(async (transaction) => {
+    const ids: number[] = [];
+    for (const item of prepared) {
+      const created = await Invitation.create(
+        {
+          clubId: actor.clubId,
+          invitedById: actor.id,
+          email: item.email,
+          name: item.name,
+          role: item.role,
+          tokenHash: hashToken(item.token),
+          expiresAt: new Date(Date.now() + invitationDays * 86_400_000),
+        },
+        { transaction },
+      );
+      await recordAudit(
+        { clubId: actor.clubId, actorId: actor.id, action: "member.invited", subjectType: "invitation", subjectId: created.id, details: { email: item.email, role: item.role, via } },
+        transaction,
+      );
+      ids.push(created.id);
+    }
+    return ids;
+  });
+  const unsent: string[] = [];
+  for (const item of prepared) {
+    try {
+      await sendInvitationMail({ to: item.email, name: item.name, inviterName: actor.name, clubName: club.name, token: item.token });
+    } catch (error) {
+      console.error("Invitation e-mail failed", error);
+      unsent.push(item.email);
+    }
+  }
+  return { invitationIds, unsent };
 }
 
 export interface PendingInvitation {

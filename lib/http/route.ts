@@ -1,7 +1,7 @@
 import "server-only";
 import { NextResponse } from "next/server";
 import type { ZodType } from "zod";
-import { AppError, TooManyRequestsError, UnsupportedMediaError, ValidationError, ForbiddenError } from "@/lib/http/errors";
+import { AppError, PayloadTooLargeError, TooManyRequestsError, UnsupportedMediaError, ValidationError, ForbiddenError } from "@/lib/http/errors";
 import { validationErrorFrom } from "@/lib/validations/issues";
 
 /** The one mapping of errors to HTTP responses for route handlers. Unknown errors are logged, never shown. */
@@ -79,4 +79,38 @@ export async function readJson<T>(request: Request, schema: ZodType<T>): Promise
   const parsed = schema.safeParse(raw);
   if (!parsed.success) throw validationErrorFrom(parsed.error);
   return parsed.data;
+}
+
+/**
+ * Reads a body of one of the given content types, at most maxBytes, stopping as soon as it is over
+ * (413), so a chunked upload without Content-Length cannot make the server buffer more.
+ */
+export async function readBodyBytes(request: Request, options: { maxBytes: number; types: readonly string[] }): Promise<Uint8Array> {
+  const type = (request.headers.get("content-type") ?? "").split(";")[0]!.trim().toLowerCase();
+  if (!options.types.includes(type)) {
+    throw new UnsupportedMediaError(`Send the body as ${options.types.join(" or ")}.`);
+  }
+  const tooLarge = () => new PayloadTooLargeError(`The body is larger than ${Math.round(options.maxBytes / 1024)} KB.`);
+  if (Number(request.headers.get("content-length") ?? "0") > options.maxBytes) throw tooLarge();
+  if (!request.body) return new Uint8Array();
+  const reader = request.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > options.maxBytes) {
+      await reader.cancel();
+      throw tooLarge();
+    }
+    chunks.push(value);
+  }
+  const bytes = new Uint8Array(size);
+  let offset = 0;
+  for (const chunk of chunks) {
+    bytes.set(chunk, offset);
+    offset += chunk.byteLength;
+  }
+  return bytes;
 }

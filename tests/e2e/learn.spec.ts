@@ -27,8 +27,8 @@ test("an athlete reads a lesson, fails the quiz, retakes it, passes, and the cou
   const resumed = page.waitForResponse((response) => response.url().endsWith("/api/modules/setting-inboard/attempts"));
   await page.reload();
   const again = await resumed;
-  expect(again.status()).toBe(200);
-  expect(((await again.json()) as { attemptId: string }).attemptId).toBe(attemptId);
+  expect(again.status()).toBe(201);
+  expect((await again.json()) as { attemptId: string; resumed: boolean }).toMatchObject({ attemptId, resumed: true });
   await expect(page.getByText(`${questions.length} of ${questions.length} answered`)).toBeVisible();
 
   await page.getByRole("button", { name: "Hand in my answers" }).click();

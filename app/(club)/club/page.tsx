@@ -3,7 +3,6 @@ import Link from "next/link";
 import { PageTitle } from "@/components/ui/page-title";
 import { requirePageActor } from "@/lib/auth/session";
 import { clubOf, listClubMembers } from "@/lib/data/members";
-import { roleLabels } from "@/lib/auth/roles";
 import { isDemoMail } from "@/lib/env";
 import { InviteMemberForm } from "./_components/invite-member-form";
 
@@ -30,24 +29,18 @@ export default async function ClubPage() {
           .
         </p>
       )}
-      <section aria-labelledby="members-heading">
-        <h2 id="members-heading" className="mb-3 text-lg font-semibold">
+      <section aria-labelledby="members-heading" className="rounded-lg bg-white p-4 shadow-sm">
+        <h2 id="members-heading" className="mb-2 text-lg font-semibold">
           Members ({members.length})
         </h2>
-        <ul className="divide-y divide-slate-200 rounded-lg bg-white shadow-sm">
-          {members.map((member) => (
-            <li key={member.id} className="flex flex-wrap justify-between gap-2 px-4 py-3">
-              <span>
-                <span className="font-semibold">{member.name}</span>{" "}
-                <span className="text-sm text-slate-700">{member.email}</span>
-              </span>
-              <span className="text-sm">
-                {roleLabels[member.role]}
-                {member.status === "deactivated" ? " · deactivated" : ""}
-              </span>
-            </li>
-          ))}
-        </ul>
+        <p>
+          {members.filter((member) => member.status === "active").length} active,{" "}
+          {members.filter((member) => member.status === "deactivated").length} deactivated.{" "}
+          <Link href="/club/members" className="font-semibold text-river-700 underline">
+            Manage members
+          </Link>{" "}
+          to search the list, change roles, deactivate or import a roster.
+        </p>
       </section>
     </div>
   );

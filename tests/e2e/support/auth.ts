@@ -1,4 +1,4 @@
-import { expect, type Page } from "@playwright/test";
+import { expect, type Browser, type BrowserContext, type Page } from "@playwright/test";
 
 /** Demo accounts from lib/seed/demo-club.ts (invented). */
 export const demo = {
@@ -25,4 +25,20 @@ export async function openNewestMailTo(page: Page, to: string): Promise<string> 
   const body = page.getByTestId("message-body");
   await expect(body).toBeVisible();
   return (await body.textContent()) ?? "";
+}
+
+/** The invented second club, seeded only for tests (SLIPWAY_SEED_SECOND_CLUB=1 in scripts/e2e-server.sh). */
+export const otherClub = {
+  password: "brackwater-test-only",
+  admin: "admin@brackwater.example",
+  coach: "coach@brackwater.example",
+  athlete: "athlete@brackwater.example",
+};
+
+/** A fresh browser context signed in as one account (its own cookies, like a second device). */
+export async function signedInContext(browser: Browser, email: string, password = demo.password): Promise<{ context: BrowserContext; page: Page }> {
+  const context = await browser.newContext();
+  const page = await context.newPage();
+  await signIn(page, email, password);
+  return { context, page };
 }

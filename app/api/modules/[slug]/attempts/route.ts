@@ -9,11 +9,14 @@ interface Context {
   params: Promise<{ slug: string }>;
 }
 
-/** Starts (201) or resumes (200) the athlete's attempt at a module's quiz; the questions carry no answers. */
+/**
+ * Starts or resumes the athlete's attempt at a module's quiz: 201 either way (the body says `resumed`);
+ * the questions carry no answers.
+ */
 export const POST = route<Context>(async (_request, context) => {
   const actor = await requireActor();
   const parsed = moduleSlugParamSchema.safeParse(await context.params);
   if (!parsed.success) throw validationErrorFrom(parsed.error);
   const opening = await startOrResumeAttempt(actor, parsed.data.slug);
-  return NextResponse.json(opening, { status: opening.resumed ? 200 : 201 });
+  return NextResponse.json(opening, { status: 201 });
 });

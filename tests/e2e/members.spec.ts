@@ -1,0 +1,146 @@
+import { expect, test } from "@playwright/test";
+import AxeBuilder from "@axe-core/playwright";
+import { demo, openNewestMailTo, signIn, signedInContext } from "./support/auth";
+
+test.describe("members admin", () => {
+  test("the admin searches the member list and sees roles, status and last sign-in", async ({ page }) => {
+    await signIn(page, demo.admin);
+    await page.goto("/club");
+    await page.getByRole("link", { name: "Manage members" }).click();
+    await expect(page).toHaveURL(/\/club\/members$/);
+    await expect(page.getByRole("heading", { level: 1 })).toHaveText("Members");
+
+    const table = page.getByTestId("members-table");
+    for (const header of ["Name", "E-mail", "Role", "Status", "Last sign-in"]) {
+      await expect(table.getByRole("columnheader", { name: new RegExp(header) })).toBeVisible();
+    }
+    const adminRow = page.getByTestId(`member-row-${demo.admin}`);
+    await expect(adminRow).toContainText("Club administrator");
+    await expect(adminRow).toContainText("Your own account");
+    await expect(adminRow.getByRole("button")).toHaveCount(0);
+
+    await page.getByLabel("Search members").fill("penhallow");
+    await expect(page.getByTestId("members-count")).toContainText("Showing 1 of");
+    await expect(table.getByRole("row")).toHaveCount(2);
+    await expect(page.getByTestId("member-row-carys@lantern-reach.example")).toContainText("Never");
+    await page.getByLabel("Search members").fill("coach");
+    await expect(page.getByTestId("members-count")).toContainText("Showing 2 of");
+  });
+
+  test("deactivating asks first, then the signed-in athlete's next page load goes to sign-in", async ({ page, browser }) => {
+    const athlete = await signedInContext(browser, "carys@lantern-reach.example");
+    await athlete.page.goto("/learn");
+    await expect(athlete.page.getByTestId("learn-page")).toBeVisible();
+
+    await signIn(page, demo.admin);
+    await page.goto("/club/members");
+    const row = page.getByTestId("member-row-carys@lantern-reach.example");
+    await row.getByRole("button", { name: "Deactivate Carys Penhallow" }).click();
+    const dialog = page.getByRole("dialog", { name: "Deactivate Carys Penhallow?" });
+    await expect(dialog).toBeVisible();
+    await expect(dialog.getByRole("button", { name: "Keep active" })).toBeFocused();
+    await dialog.getByRole("button", { name: "Keep active" }).click();
+    await expect(dialog).toBeHidden();
+    await expect(row).toContainText("Active");
+
+    await row.getByRole("button", { name: "Deactivate Carys Penhallow" }).click();
+    await page.keyboard.press("Escape");
+    await expect(dialog).toBeHidden();
+    await row.getByRole("button", { name: "Deactivate Carys Penhallow" }).click();
+    await dialog.getByRole("button", { name: "Deactivate member" }).click();
+    await expect(page.getByTestId("members-status")).toContainText("Carys Penhallow is deactivated");
+    await expect(row).toContainText("Deactivated");
+
+    await athlete.page.reload();
+    await expect(athlete.page).toHaveURL(/\/sign-in\?callbackUrl=%2Flearn/);
+    expect((await athlete.page.request.get("/api/roster")).status()).toBe(401);
+
+    await row.getByRole("button", { name: "Reactivate Carys Penhallow" }).click();
+    await expect(page.getByTestId("members-status")).toContainText("Carys Penhallow is active again");
+    await signIn(athlete.page, "carys@lantern-reach.example");
+    await expect(athlete.page.getByTestId("signed-in-as")).toContainText("Carys");
+    await athlete.context.close();
+  });
+
+  test("changing a role ends the member's session; they sign in again with the new role", async ({ page, browser }) => {
+    const member = await signedInContext(browser, "greta@lantern-reach.example");
+    await expect(member.page.getByTestId("signed-in-as")).toContainText("Athlete");
+
+    await signIn(page, demo.admin);
+    await page.goto("/club/members");
+    await page.getByTestId("member-row-greta@lantern-reach.example").getByRole("button", { name: "Change role of Greta Quennell" }).click();
+    const dialog = page.getByRole("dialog", { name: "Change role of Greta Quennell" });
+    await dialog.getByLabel("New role").selectOption("coach");
+    await dialog.getByRole("button", { name: "Save role" }).click();
+    await expect(page.getByTestId("members-status")).toContainText("Greta Quennell is now coach");
+    await expect(page.getByTestId("member-row-greta@lantern-reach.example")).toContainText("Coach");
+
+    await member.page.goto("/learn");
+    await expect(member.page).toHaveURL(/\/sign-in/);
+    await signIn(member.page, "greta@lantern-reach.example");
+    await expect(member.page).toHaveURL(/\/roster$/);
+    await expect(member.page.getByTestId("signed-in-as")).toContainText("Coach");
+    await member.context.close();
+  });
+
+  test("importing a roster previews the rows, invites the good ones and reports the rest by row", async ({ page }) => {
+    const stamp = Date.now();
+    const first = `sorrel.${stamp}@lantern-reach.example`;
+    const second = `pike.${stamp}@lantern-reach.example`;
+    const csv = [
+      "name,email,role",
+      `Sorrel Voss,${first},athlete`,
+      `Pike Amberley,${second},coach`,
+      `Ada Again,${demo.athlete},athlete`,
+      ",nameless@lantern-reach.example,athlete",
+      "Wrong Mail,wrong-mail,athlete",
+      "Odd Role,odd.role@lantern-reach.example,bowman",
+      `Sorrel Twice,${first},athlete`,
+    ].join("\n");
+
+    await signIn(page, demo.admin);
+    await page.goto("/club/members");
+    const importer = page.getByTestId("roster-import");
+    await importer.getByLabel("Roster file (CSV)").setInputFiles({ name: "roster.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
+
+    const preview = page.getByTestId("roster-preview");
+    await expect(preview).toContainText("7 rows read: 3 ready to invite, 4 with problems.");
+    await expect(page.getByTestId("roster-preview-problems")).toContainText("Missing name.");
+    await preview.getByRole("button", { name: "Send 3 invitations" }).click();
+
+    await expect(page.getByTestId("roster-status")).toContainText("2 invitations sent.");
+    const problems = page.getByTestId("roster-report-problems");
+    const rowsOf = async () => (await problems.locator("tbody tr").allInnerTexts()).map((text) => text.split("\t").slice(0, 2).join(" "));
+    expect(await rowsOf()).toEqual(["4 email", "5 name", "6 email", "7 role", "8 email"]);
+    await expect(problems).toContainText("Already a member");
+    await expect(problems).toContainText('Unknown role "bowman"');
+    await expect(problems).toContainText("Same e-mail address as row 2");
+
+    const mail = await openNewestMailTo(page, first);
+    expect(mail).toMatch(/\/invite\/\S+/);
+  });
+
+  test("a file that is not a roster is refused before anything is sent", async ({ page }) => {
+    await signIn(page, demo.admin);
+    await page.goto("/club/members");
+    const input = page.getByLabel("Roster file (CSV)");
+    await input.setInputFiles({ name: "photo.png", mimeType: "image/png", buffer: Buffer.from([0x89, 0x50, 0x4e, 0x47]) });
+    await expect(page.getByTestId("roster-import")).toContainText("Choose a CSV or plain-text file.");
+    await expect(input).toHaveAttribute("aria-invalid", "true");
+    await input.setInputFiles({ name: "people.csv", mimeType: "text/csv", buffer: Buffer.from("first,last\nA,B\n") });
+    await expect(page.getByTestId("roster-import")).toContainText("Missing: name, email");
+    await expect(page.getByTestId("roster-preview")).toHaveCount(0);
+  });
+
+  test("the members page and its confirm step have no axe violations", async ({ page }) => {
+    await signIn(page, demo.admin);
+    await page.goto("/club/members");
+    const pageScan = await new AxeBuilder({ page }).analyze();
+    expect(pageScan.violations.map((violation) => violation.id)).toEqual([]);
+    await page.getByRole("button", { name: "Deactivate Lena Fairbrother" }).click();
+    await expect(page.getByRole("dialog")).toBeVisible();
+    const dialogScan = await new AxeBuilder({ page }).include("dialog[open]").analyze();
+    expect(dialogScan.violations.map((violation) => violation.id)).toEqual([]);
+    await page.getByRole("button", { name: "Keep active" }).click();
+  });
+});

@@ -1,0 +1,211 @@
+/**
+ * The route-guard table: the status every route handler (and every server action) must give each kind
+ * of caller. tests/integration/route-guards.test.ts walks app/ and fails for any handler or action
+ * without a row here, then calls each one directly as every role; tests/e2e/route-guards.spec.ts sends
+ * the route rows through the real server with real signed-in browsers.
+ *
+ * Roles: "home" is the demo club (Lantern Reach); "other" is the invented second club seeded for tests
+ * (lib/seed/second-club.ts). Requests aim at home-club records, so the other club's members must get
+ * 404 wherever a record is addressed (never 403: they must not learn that it exists).
+ *
+ * Adding a route or action? Add one row per exported method / action with all seven statuses. Pure
+ * data: no app imports, so Playwright can load it too.
+ */
+
+export const guardRoles = ["anonymous", "athlete", "otherAthlete", "coach", "otherCoach", "admin", "otherAdmin"] as const;
+export type GuardRole = (typeof guardRoles)[number];
+export type Expected = Record<GuardRole, number>;
+
+/** Values the requests may use: a home-club athlete to aim at, and a tag unique to each call. */
+export interface GuardFixtures {
+  homeAthleteId: number;
+  tag: string;
+}
+
+export interface GuardRequest {
+  path: string;
+  json?: unknown;
+  /** A form body (application/x-www-form-urlencoded). */
+  form?: Record<string, string>;
+  /** A raw body with its content type, e.g. a CSV upload. */
+  text?: { body: string; contentType: string };
+}
+
+export interface RouteGuardRow {
+  /** The route file, relative to the project root. */
+  file: string;
+  method: "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
+  request: (fixtures: GuardFixtures) => GuardRequest;
+  expect: Expected;
+  /** Text that must not appear in any answer given to the other club's members. */
+  hiddenFromOtherClub?: string;
+  why?: string;
+}
+
+export interface ActionGuardRow {
+  file: string;
+  action: string;
+  /** The action's argument: an object, or a FormData built from these fields and files. */
+  input: (fixtures: GuardFixtures) => unknown;
+  /** 200 for { ok: true }; 303 for a form action that redirects; else the status of the typed error it turned into a failure. */
+  expect: Expected;
+  /** For redirecting form actions: where each role must be sent. */
+  redirects?: Partial<Record<GuardRole, RegExp>>;
+  why?: string;
+}
+
+/** Everyone gets the same answer. */
+function all(status: number): Expected {
+  return { anonymous: status, athlete: status, otherAthlete: status, coach: status, otherCoach: status, admin: status, otherAdmin: status };
+}
+
+/** Signed in as coach or admin of any club. */
+const coachesOfAnyClub: Expected = { anonymous: 401, athlete: 403, otherAthlete: 403, coach: 200, otherCoach: 200, admin: 200, otherAdmin: 200 };
+
+/** Admins acting on their own club, with `ok` as the success status. */
+function adminsOwnClub(ok: number): Expected {
+  return { anonymous: 401, athlete: 403, otherAthlete: 403, coach: 403, otherCoach: 403, admin: ok, otherAdmin: ok };
+}
+
+/** Admins changing a home-club record: the other club's admin is told it does not exist. */
+const homeAdminOnRecord: Expected = { anonymous: 401, athlete: 403, otherAthlete: 403, coach: 403, otherCoach: 403, admin: 200, otherAdmin: 404 };
+
+/** Any signed-in member of any club; nobody signed in gets 401. */
+function members(status: number): Expected {
+  return { ...all(status), anonymous: 401 };
+}
+
+export const routeGuardRows: RouteGuardRow[] = [
+  {
+    file: "app/api/auth/[...nextauth]/route.ts",
+    method: "GET",
+    request: () => ({ path: "/api/auth/session" }),
+    expect: all(200),
+    why: "next-auth's own endpoints are public; the session endpoint says who is signed in.",
+  },
+  {
+    file: "app/api/auth/[...nextauth]/route.ts",
+    method: "POST",
+    request: () => ({ path: "/api/auth/callback/password", form: { email: "nobody@nowhere.example", password: "no-csrf-token-sent" } }),
+    expect: all(302),
+    why: "Without next-auth's CSRF token a sign-in is sent back to the sign-in page, for everyone.",
+  },
+  {
+    file: "app/api/health/route.ts",
+    method: "GET",
+    request: () => ({ path: "/api/health" }),
+    expect: all(200),
+    why: "Public: says only whether the database answers.",
+  },
+  {
+    file: "app/api/invitations/route.ts",
+    method: "POST",
+    request: ({ tag }) => ({ path: "/api/invitations", json: { email: `guard.${tag}@invitations.example`, name: "Guard Row", role: "athlete" } }),
+    expect: adminsOwnClub(201),
+  },
+  {
+    file: "app/api/roster/route.ts",
+    method: "GET",
+    request: () => ({ path: "/api/roster" }),
+    expect: coachesOfAnyClub,
+    hiddenFromOtherClub: "@lantern-reach.example",
+    why: "Each coach sees their own club's athletes only.",
+  },
+  {
+    file: "app/api/members/[id]/route.ts",
+    method: "PATCH",
+    request: ({ homeAthleteId }) => ({ path: `/api/members/${homeAthleteId}`, json: { role: "athlete" } }),
+    expect: homeAdminOnRecord,
+    why: "Setting the role the athlete already has: passes every guard, changes nothing.",
+  },
+  {
+    file: "app/api/members/import/route.ts",
+    method: "POST",
+    request: ({ tag }) => ({
+      path: "/api/members/import",
+      text: { body: `name,email\nGuard Import,guard.import.${tag}@roster.example\n`, contentType: "text/csv" },
+    }),
+    expect: adminsOwnClub(200),
+  },
+];
+
+routeGuardRows.push(
+  {
+    file: "app/api/modules/[slug]/attempts/route.ts",
+    method: "POST",
+    request: () => ({ path: "/api/modules/secure-and-check/attempts" }),
+    expect: members(201),
+    why: "Any member starts (or resumes) their own attempt; the questions carry no answers.",
+  },
+  {
+    file: "app/api/attempts/[id]/submit/route.ts",
+    method: "POST",
+    request: () => ({ path: "/api/attempts/00000000-0000-4000-8000-000000000000/submit", json: { answers: {} } }),
+    expect: members(404),
+    why: "Only the athlete's own attempt can be submitted; any other id is not found (tests/e2e/learn.spec.ts covers another athlete's real attempt).",
+  },
+  {
+    file: "app/api/me/progress/route.ts",
+    method: "GET",
+    request: () => ({ path: "/api/me/progress" }),
+    expect: members(200),
+    why: "Each member's own progress.",
+  },
+);
+
+export const actionGuardRows: ActionGuardRow[] = [
+  {
+    file: "app/(auth)/invite/[token]/actions.ts",
+    action: "acceptInvitationAction",
+    input: () => ({ token: "not-a-real-invitation-token", name: "Guard Row", password: "heron slipway tidewater" }),
+    expect: all(404),
+    why: "Public: the invitation token is the guard; an unknown one is not found for everyone.",
+  },
+  {
+    file: "app/(auth)/sign-in/actions.ts",
+    action: "requestSignInLinkAction",
+    input: () => ({ email: "nobody@nowhere.example" }),
+    expect: all(200),
+    why: "Public, and the same answer whether or not the address has an account.",
+  },
+  {
+    file: "app/(club)/club/actions.ts",
+    action: "inviteMemberAction",
+    input: ({ tag }) => ({ email: `guard.${tag}@invite-action.example`, name: "Guard Row", role: "athlete" }),
+    expect: adminsOwnClub(200),
+  },
+  {
+    file: "app/(club)/club/members/actions.ts",
+    action: "changeMemberRoleAction",
+    input: ({ homeAthleteId }) => ({ memberId: homeAthleteId, role: "athlete" }),
+    expect: homeAdminOnRecord,
+  },
+  {
+    file: "app/(club)/club/members/actions.ts",
+    action: "setMemberStatusAction",
+    input: ({ homeAthleteId }) => ({ memberId: homeAthleteId, status: "active" }),
+    expect: homeAdminOnRecord,
+  },
+  {
+    file: "app/(club)/club/members/actions.ts",
+    action: "importRosterAction",
+    input: ({ tag }) => ({ formData: { roster: { name: "roster.csv", type: "text/csv", body: `name,email\nGuard Import,guard.action.${tag}@roster.example\n` } } }),
+    expect: adminsOwnClub(200),
+  },
+  {
+    file: "app/(learn)/learn/[slug]/actions.ts",
+    action: "finishLessonAction",
+    input: () => ({ formData: { slug: "overall-length" } }),
+    expect: all(303),
+    redirects: {
+      anonymous: /^\/sign-in\?callbackUrl=/,
+      athlete: /^\/learn\/overall-length\/quiz$/,
+      otherAthlete: /^\/learn\/overall-length\/quiz$/,
+      coach: /^\/learn\/overall-length\/quiz$/,
+      otherCoach: /^\/learn\/overall-length\/quiz$/,
+      admin: /^\/learn\/overall-length\/quiz$/,
+      otherAdmin: /^\/learn\/overall-length\/quiz$/,
+    },
+    why: "A plain form action (works without JavaScript): records the read for any member, sends the signed-out to sign in.",
+  },
+];
