@@ -8,7 +8,7 @@ import {
   formatCm,
   type ClicksField,
 } from "@/components/lessons/lesson-format";
-import { useHydrated } from "@/components/lessons/use-hydrated";
+import { useHydrated } from "@/components/ui/use-hydrated";
 
 export interface ClicksCalculatorProps {
   /** Starting value for the measured inboard; also used in the worked example. */

@@ -3,7 +3,7 @@
 import { useId, useState } from "react";
 import { overlapCm, simpleOverlapCm } from "@/lib/rigging/geometry";
 import { formatCm, formatSignedCm, parseCmInput } from "@/components/lessons/lesson-format";
-import { useHydrated } from "@/components/lessons/use-hydrated";
+import { useHydrated } from "@/components/ui/use-hydrated";
 
 export interface OverlapVisualiserProps {
   defaultSpanCm?: number;

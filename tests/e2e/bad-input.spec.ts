@@ -1,6 +1,7 @@
 import { expect, test, type APIRequestContext } from "@playwright/test";
 import { demo } from "./support/auth";
 import { apiSession } from "./support/api-session";
+import { loadAthleteEmail } from "@/lib/seed/load-athletes";
 
 /** One malformed request: a body (object → JSON; string → sent raw) and an optional content type. */
 interface BadInput {
@@ -79,7 +80,8 @@ async function expectAllRefused(session: APIRequestContext, url: string, inputs:
 
 test.describe("bad input is refused with 4xx JSON naming the field", () => {
   test("POST /api/attempts/{id}/submit", async ({ baseURL }) => {
-    const session = await apiSession(baseURL!, "carys@lantern-reach.example");
+    // A load-club athlete, so demo members keep their "never signed in" state for other tests.
+    const session = await apiSession(baseURL!, loadAthleteEmail(40));
     const opened = await session.post("/api/modules/overall-length/attempts");
     const { attemptId } = (await opened.json()) as { attemptId: string };
     const url = `/api/attempts/${attemptId}/submit`;
@@ -128,7 +130,7 @@ test.describe("bad input is refused with 4xx JSON naming the field", () => {
   });
 
   test("POST /api/modules/{slug}/attempts with unknown or malformed modules", async ({ baseURL }) => {
-    const session = await apiSession(baseURL!, "dev@lantern-reach.example");
+    const session = await apiSession(baseURL!, loadAthleteEmail(39));
     const cases: [string, number][] = [
       ["/api/modules/no-such-module/attempts", 404],
       ["/api/modules/BAD_SLUG/attempts", 400],

@@ -109,6 +109,7 @@ test.describe("crash safety", () => {
         await waitForHealth();
       }
       let running = true;
+      let acknowledgedThisRound = 0;
       const workers = sessions.map(async (session, index) => {
         let turn = 0;
         while (running) {
@@ -119,13 +120,20 @@ test.describe("crash safety", () => {
             if (!opened.ok()) continue;
             const { attemptId } = (await opened.json()) as { attemptId: string };
             const submitted = await session.post(`/api/attempts/${attemptId}/submit`, { data: { answers: {} } });
-            if (submitted.status() === 200) acknowledged.add(attemptId);
+            if (submitted.status() === 200) {
+              acknowledged.add(attemptId);
+              acknowledgedThisRound += 1;
+            }
           } catch {
             return; // the server died under us
           }
         }
       });
-      await new Promise((resolve) => setTimeout(resolve, 300 + ((round * 97) % 400)));
+      // Kill while the load runs: once this round has written something, after a varying extra delay.
+      for (let waited = 0; acknowledgedThisRound === 0 && waited < 10_000; waited += 50) {
+        await new Promise((resolve) => setTimeout(resolve, 50));
+      }
+      await new Promise((resolve) => setTimeout(resolve, (round * 97) % 400));
       await killHard(server);
       running = false;
       await Promise.all(workers);

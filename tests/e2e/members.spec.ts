@@ -123,6 +123,7 @@ test.describe("members admin", () => {
   test("a file that is not a roster is refused before anything is sent", async ({ page }) => {
     await signIn(page, demo.admin);
     await page.goto("/club/members");
+    await expect(page.getByTestId("roster-import")).toHaveAttribute("data-ready", "true");
     const input = page.getByLabel("Roster file (CSV)");
     await input.setInputFiles({ name: "photo.png", mimeType: "image/png", buffer: Buffer.from([0x89, 0x50, 0x4e, 0x47]) });
     await expect(page.getByTestId("roster-import")).toContainText("Choose a CSV or plain-text file.");

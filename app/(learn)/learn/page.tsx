@@ -20,7 +20,7 @@ export default async function LearnPage() {
   const nextSlug = nextModuleSlug(course.map((entry) => entry.progress));
   const next = course.find((entry) => entry.meta.slug === nextSlug);
   return (
-    <div className="space-y-6">
+    <div className="space-y-6" data-testid="learn-page">
       <PageTitle lead="Read each lesson, pass its quiz, then show a coach you can do it for real.">
         Hello, {actor.name.split(" ")[0]}
       </PageTitle>

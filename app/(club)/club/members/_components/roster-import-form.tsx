@@ -1,5 +1,6 @@
 "use client";
 
+import { useHydrated } from "@/components/ui/use-hydrated";
 import { useRef, useState } from "react";
 import { useRouter } from "next/navigation";
 import { checkRoster, rosterFileProblem, rosterLimits, type RosterCheck, type RosterProblem } from "@/lib/members/roster-import";
@@ -43,6 +44,8 @@ function ProblemTable({ problems, caption, testId }: { problems: RosterProblem[]
  * the invitations; the server checks again, also against existing members and open invitations.
  */
 export function RosterImportForm() {
+  // A file chosen before the page's scripts run would be lost: the input waits for them.
+  const hydrated = useHydrated();
   const router = useRouter();
   const input = useRef<HTMLInputElement>(null);
   const [file, setFile] = useState<File | null>(null);
@@ -93,12 +96,13 @@ export function RosterImportForm() {
   }
 
   return (
-    <div className="space-y-4" data-testid="roster-import">
+    <div className="space-y-4" data-testid="roster-import" data-ready={hydrated ? "true" : "false"}>
       <TextField
         ref={input}
         label="Roster file (CSV)"
         type="file"
         accept=".csv,.txt,text/csv,text/plain"
+        disabled={!hydrated}
         hint={`Columns: name, email and optionally role (athlete, coach or admin; blank means athlete). Up to ${rosterLimits.maxRows} rows and ${rosterLimits.maxBytes / 1024} KB.`}
         error={fileError}
         onChange={(event) => void choose(event.target.files?.[0])}
