@@ -1,4 +1,5 @@
 import * as createFoundation from "@/migrations/20261202-0001-create-foundation";
+import * as createFleet from "@/migrations/20261202-0003-create-fleet";
 
 export interface MigrationModule {
   up: typeof createFoundation.up;
@@ -8,4 +9,5 @@ export interface MigrationModule {
 /** Every migration in order. A static list works alike in the Next server, tsx scripts and vitest. */
 export const migrationList: { name: string; module: MigrationModule }[] = [
   { name: "20261202-0001-create-foundation", module: createFoundation },
+  { name: "20261202-0003-create-fleet", module: createFleet },
 ];
