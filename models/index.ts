@@ -6,8 +6,15 @@ import { LessonRead } from "@/models/LessonRead";
 import { QuizAttempt } from "@/models/QuizAttempt";
 import { SignInLink } from "@/models/SignInLink";
 import { User } from "@/models/User";
+import { Boat } from "@/models/Boat";
+import { BoatOarSet } from "@/models/BoatOarSet";
+import { CleaningDigest } from "@/models/CleaningDigest";
+import { CleaningRecord } from "@/models/CleaningRecord";
+import { OarSet } from "@/models/OarSet";
+import { RigPlan } from "@/models/RigPlan";
 
 export { AuditEvent, Club, Invitation, LessonRead, QuizAttempt, SignInLink, User };
+export { Boat, BoatOarSet, CleaningDigest, CleaningRecord, OarSet, RigPlan };
 
 const initialised = new WeakSet<Sequelize>();
 
@@ -30,5 +37,24 @@ export function initModels(sequelize: Sequelize): void {
   LessonRead.belongsTo(User, { foreignKey: "userId" });
   QuizAttempt.belongsTo(User, { foreignKey: "userId" });
   User.hasMany(QuizAttempt, { foreignKey: "userId" });
+  initFleetModels(sequelize);
   initialised.add(sequelize);
+}
+
+/** The rig feature's models (issue 5): boats, oar sets, saved plans, the cleaning log and digests. */
+function initFleetModels(sequelize: Sequelize): void {
+  Boat.initModel(sequelize);
+  OarSet.initModel(sequelize);
+  BoatOarSet.initModel(sequelize);
+  RigPlan.initModel(sequelize);
+  CleaningRecord.initModel(sequelize);
+  CleaningDigest.initModel(sequelize);
+
+  Boat.belongsToMany(OarSet, { through: BoatOarSet, foreignKey: "boatId", otherKey: "oarSetId", as: "oarSets" });
+  OarSet.belongsToMany(Boat, { through: BoatOarSet, foreignKey: "oarSetId", otherKey: "boatId", as: "boats" });
+  RigPlan.belongsTo(User, { foreignKey: "userId", as: "user" });
+  RigPlan.belongsTo(Boat, { foreignKey: "boatId", as: "boat" });
+  RigPlan.belongsTo(OarSet, { foreignKey: "oarSetId", as: "oarSet" });
+  CleaningRecord.belongsTo(User, { foreignKey: "cleanedById", as: "cleanedBy" });
+  CleaningRecord.belongsTo(OarSet, { foreignKey: "oarSetId", as: "oarSet" });
 }

@@ -2,6 +2,7 @@ import { closeDatabase, getSequelize } from "@/lib/db";
 import { migrateToLatest } from "@/lib/migrate";
 import { seedDemoClub, demoClub } from "@/lib/seed/demo-club";
 import { seedSecondClub, secondClub } from "@/lib/seed/second-club";
+import { seedDemoFleet } from "@/lib/seed/demo-fleet";
 import { databaseFile } from "@/lib/env";
 import { seedLoadAthletes } from "@/lib/seed/load-athletes";
 
@@ -17,6 +18,8 @@ async function main() {
     const second = await seedSecondClub(sequelize);
     console.log(`${secondClub.name} (tests only): ${second.created} new members.`);
   }
+  const fleet = await seedDemoFleet(sequelize);
+  console.log(`${demoClub.name}: ${fleet.boats} new boats and ${fleet.oarSets} new oar sets seeded.`);
   await closeDatabase();
 }
 

@@ -10,6 +10,7 @@ export async function SiteHeader() {
   const links: { href: string; label: string }[] = [];
   if (actor) {
     links.push({ href: "/learn", label: "Learn" });
+    links.push({ href: "/rig", label: "Rig" });
     if (isCoach(actor)) links.push({ href: "/roster", label: "Roster" });
     if (isAdmin(actor)) links.push({ href: "/club", label: "Club" });
   }

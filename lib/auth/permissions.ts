@@ -84,6 +84,16 @@ export function canReadOutbox(actor: Actor, demoMail: boolean): boolean {
   return demoMail && isAdmin(actor);
 }
 
+/** Coaches and admins keep their own club's boats, oar sets, race days and cleaning digest. */
+export function canManageFleet(actor: Actor, clubId: number): boolean {
+  return isCoach(actor) && actor.clubId === clubId;
+}
+
+/** Coaches and admins see the rig plans their own club's athletes saved. */
+export function canReviewRigPlans(actor: Actor, clubId: number): boolean {
+  return isCoach(actor) && actor.clubId === clubId;
+}
+
 /** Throws 401 when nobody is signed in. */
 export function assertSignedIn(actor: Actor | null): asserts actor is Actor {
   if (!actor) throw new UnauthenticatedError();

@@ -104,3 +104,29 @@ describe("assertions throw the typed errors that map to statuses", () => {
     expect(() => assertAllowed(true)).not.toThrow();
   });
 });
+
+describe("fleet (issue 5)", () => {
+  it("lets coaches and admins of the club manage boats and oar sets, never athletes or other clubs", async () => {
+    const { canManageFleet } = await import("@/lib/auth/permissions");
+    expect(canManageFleet(coach, 1)).toBe(true);
+    expect(canManageFleet(admin, 1)).toBe(true);
+    expect(canManageFleet(athlete, 1)).toBe(false);
+    expect(canManageFleet(foreignCoach, 1)).toBe(false);
+    expect(canManageFleet(foreignAdmin, 1)).toBe(false);
+  });
+
+  it("shows saved rig plans to the club's coaches and admins only", async () => {
+    const { canReviewRigPlans } = await import("@/lib/auth/permissions");
+    expect(canReviewRigPlans(coach, 1)).toBe(true);
+    expect(canReviewRigPlans(admin, 1)).toBe(true);
+    expect(canReviewRigPlans(athlete, 1)).toBe(false);
+    expect(canReviewRigPlans(foreignCoach, 1)).toBe(false);
+  });
+
+  it("keeps /rig for members", () => {
+    expect(areaForPath("/rig")).toBe("member");
+    expect(areaForPath("/rig/boats/3")).toBe("member");
+    expect(areaForPath("/rig/care")).toBe("member");
+    expect(areaForPath("/roster/fleet")).toBe("coach");
+  });
+});

@@ -1,0 +1,25 @@
+"use server";
+
+import { revalidatePath } from "next/cache";
+import { requireActor } from "@/lib/auth/session";
+import { recordCleaning } from "@/lib/data/cleaning";
+import { actionFailure, type ActionResult } from "@/lib/http/action-result";
+import { cleaningRecordSchema } from "@/lib/validations/cleaning";
+import { fieldErrorsFrom } from "@/lib/validations/issues";
+
+/** Any member records that an oar set's handles were cleaned. */
+export async function recordCleaningAction(input: unknown): Promise<ActionResult> {
+  try {
+    const actor = await requireActor();
+    const parsed = cleaningRecordSchema.safeParse(input);
+    if (!parsed.success) {
+      return { ok: false, message: "Check the highlighted fields.", fieldErrors: fieldErrorsFrom(parsed.error) };
+    }
+    await recordCleaning(actor, parsed.data);
+    revalidatePath("/rig/care");
+    revalidatePath("/roster/fleet/care");
+    return { ok: true, message: "Cleaning recorded. Thank you." };
+  } catch (error) {
+    return actionFailure(error);
+  }
+}

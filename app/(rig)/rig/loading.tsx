@@ -1,0 +1,5 @@
+import { LoadingState } from "@/components/ui/loading-state";
+
+export default function Loading() {
+  return <LoadingState />;
+}

@@ -1,0 +1,39 @@
+import { dayNumberToIsoDate, isoDateToDayNumber } from "@/lib/care/dates";
+
+/** Today's calendar date (YYYY-MM-DD) in the local time zone of the machine that asks. */
+export function localIsoDate(now: Date = new Date()): string {
+  const month = String(now.getMonth() + 1).padStart(2, "0");
+  const day = String(now.getDate()).padStart(2, "0");
+  return `${now.getFullYear()}-${month}-${day}`;
+}
+
+/** ISO weekday of a day number: Monday 1 … Sunday 7 (day 0, 1970-01-01, was a Thursday). */
+function isoWeekday(dayNumber: number): number {
+  return ((((dayNumber + 3) % 7) + 7) % 7) + 1;
+}
+
+/**
+ * ISO 8601 week of a date, e.g. "2026-W49": weeks start on Monday, and week 1 is the week with the
+ * year's first Thursday, so a week belongs to the year its Thursday falls in.
+ */
+export function isoWeekOf(isoDate: string): string {
+  const day = isoDateToDayNumber(isoDate);
+  const thursday = day + (4 - isoWeekday(day));
+  const year = Number(dayNumberToIsoDate(thursday).slice(0, 4));
+  const firstOfYear = isoDateToDayNumber(`${String(year).padStart(4, "0")}-01-01`);
+  const week = Math.floor((thursday - firstOfYear) / 7) + 1;
+  return `${year}-W${String(week).padStart(2, "0")}`;
+}
+
+const weekdayNames = ["Mon", "Tue", "Wed", "Thu", "Fri", "Sat", "Sun"] as const;
+const monthNames = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"] as const;
+
+/**
+ * A YYYY-MM-DD date for people, e.g. "Wed 2 Dec 2026": built by hand rather than with Intl, so the server
+ * and every browser write it the same way (no hydration mismatch, no time zone shift).
+ */
+export function formatIsoDate(isoDate: string): string {
+  const day = isoDateToDayNumber(isoDate);
+  const [year, month, date] = isoDate.split("-").map(Number) as [number, number, number];
+  return `${weekdayNames[isoWeekday(day) - 1]} ${date} ${monthNames[month - 1]} ${year}`;
+}

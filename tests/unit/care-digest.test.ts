@@ -1,0 +1,126 @@
+import { describe, expect, it } from "vitest";
+
+import { formatIsoDate, isoWeekOf, localIsoDate } from "@/lib/care/calendar";
+import { cleaningDueState } from "@/lib/care/cleaning-due";
+import { addDaysIso } from "@/lib/care/dates";
+import { buildCleaningDigest, cleaningCautions } from "@/lib/care/digest";
+import { dueStatus } from "@/lib/care/due-status";
+
+describe("isoWeekOf (ISO 8601 week dates; values checked against Python's date.isocalendar)", () => {
+  it.each([
+    ["2026-01-01", "2026-W01"], // a Thursday: week 1 is the week of the year's first Thursday
+    ["2021-01-03", "2020-W53"], // a Sunday still in the previous ISO year
+    ["2024-12-30", "2025-W01"], // a Monday already in the next ISO year
+    ["2026-12-31", "2026-W53"],
+    ["2027-01-03", "2026-W53"],
+    ["2027-01-04", "2027-W01"],
+    ["2030-01-07", "2030-W02"],
+    ["2030-01-13", "2030-W02"], // Sunday ends the week
+    ["2030-01-14", "2030-W03"],
+    ["1969-12-29", "1970-W01"], // before day 0 of the day numbers
+    ["2026-12-02", "2026-W49"],
+  ])("%s is in %s", (date, week) => {
+    expect(isoWeekOf(date)).toBe(week);
+  });
+
+  it("reads today in local time and formats dates as written", () => {
+    expect(localIsoDate(new Date(2026, 11, 2, 23, 59))).toBe("2026-12-02");
+    expect(localIsoDate(new Date(2026, 0, 5, 0, 1))).toBe("2026-01-05");
+    expect(formatIsoDate("2026-12-02")).toBe("Wed 2 Dec 2026");
+  });
+});
+
+const today = "2026-12-02";
+
+describe("dueStatus", () => {
+  it("says why a set is due in words with an icon", () => {
+    const never = cleaningDueState({ lastCleanedOn: null, today, raceDays: [], humidSpell: false });
+    expect(dueStatus(never, today, null)).toEqual({ due: true, icon: "⚠", label: "Due now", detail: "No cleaning on record." });
+
+    const weekAgo = addDaysIso(today, -7);
+    expect(dueStatus(cleaningDueState({ lastCleanedOn: weekAgo, today, raceDays: [], humidSpell: false }), today, weekAgo)).toMatchObject({
+      due: true,
+      label: "Due today",
+    });
+    const longAgo = addDaysIso(today, -12);
+    expect(dueStatus(cleaningDueState({ lastCleanedOn: longAgo, today, raceDays: [], humidSpell: false }), today, longAgo)).toMatchObject({
+      label: "Overdue",
+      detail: "A week since the last clean ran out on Fri 27 Nov 2026. Last cleaned Fri 20 Nov 2026.",
+    });
+
+    const race = addDaysIso(today, 1);
+    const cleaned = addDaysIso(today, -2);
+    expect(dueStatus(cleaningDueState({ lastCleanedOn: cleaned, today, raceDays: [race], humidSpell: false }), today, cleaned)).toMatchObject({
+      label: "Due before the race",
+      detail: expect.stringContaining("Race day Thu 3 Dec 2026"),
+    });
+    const yesterday = addDaysIso(today, -1);
+    expect(dueStatus(cleaningDueState({ lastCleanedOn: yesterday, today, raceDays: [], humidSpell: true }), today, yesterday).label).toBe(
+      "Due today (humid spell)",
+    );
+  });
+
+  it("says when a clean set falls due next", () => {
+    const state = cleaningDueState({ lastCleanedOn: today, today, raceDays: [], humidSpell: false });
+    expect(dueStatus(state, today, today)).toEqual({
+      due: false,
+      icon: "✓",
+      label: "Clean",
+      detail: "Next clean due Wed 9 Dec 2026. Last cleaned Wed 2 Dec 2026.",
+    });
+  });
+});
+
+describe("buildCleaningDigest", () => {
+  const sets = [
+    { name: "Eight sweeps", lastCleanedOn: "2026-11-20" },
+    { name: "Pair sweeps", lastCleanedOn: null },
+    { name: "Green-band sculls", lastCleanedOn: "2026-12-01" },
+  ].map((set) => ({ ...set, state: cleaningDueState({ lastCleanedOn: set.lastCleanedOn, today, raceDays: ["2026-12-07"], humidSpell: false }) }));
+
+  const digest = buildCleaningDigest({
+    clubName: "Test Reach RC",
+    today,
+    isoWeek: "2026-W49",
+    oarSets: sets,
+    raceDays: ["2026-11-01", "2026-12-07"],
+    humidSpell: false,
+    careUrl: "http://127.0.0.1:3000/roster/fleet/care",
+  });
+
+  it("names the overdue sets in the subject count and the body, never-cleaned first", () => {
+    expect(digest.subject).toBe("Slipway: 2 oar sets due for cleaning at Test Reach RC (2026-W49)");
+    const lines = digest.text.split("\n");
+    const dueAt = lines.indexOf("Due for cleaning (2):");
+    expect(dueAt).toBeGreaterThan(0);
+    // Never cleaned has no due date and sorts before any date.
+    expect(lines[dueAt + 1]).toBe("- Pair sweeps: due now. No cleaning on record.");
+    expect(lines[dueAt + 2]).toMatch(/^- Eight sweeps: overdue\. A week since the last clean ran out on Fri 27 Nov 2026\./);
+    expect(digest.text).toContain("Up to date (1):\n- Green-band sculls: next clean due Sun 6 Dec 2026.");
+  });
+
+  it("lists only race days ahead, the humid spell, the cautions and the link", () => {
+    expect(digest.text).toContain("Race days ahead: Mon 7 Dec 2026.");
+    expect(digest.text).not.toContain("1 Nov 2026");
+    expect(digest.text).toContain("Humid spell: off.");
+    for (const caution of cleaningCautions) expect(digest.text).toContain(caution);
+    expect(digest.text).toContain("Trisodium phosphate burns skin and eyes: wear gloves and eye protection");
+    expect(digest.text.endsWith("Record cleanings and see the list: http://127.0.0.1:3000/roster/fleet/care")).toBe(true);
+  });
+
+  it("says so when nothing is due", () => {
+    const clean = buildCleaningDigest({
+      clubName: "Test Reach RC",
+      today,
+      isoWeek: "2026-W49",
+      oarSets: [sets[2]!],
+      raceDays: [],
+      humidSpell: true,
+      careUrl: "http://x.example/roster/fleet/care",
+    });
+    expect(clean.subject).toBe("Slipway: no oar sets due for cleaning at Test Reach RC (2026-W49)");
+    expect(clean.text).toContain("No oar set is due for cleaning.");
+    expect(clean.text).toContain("Humid spell: on.");
+    expect(clean.text).toContain("No race days ahead in the club calendar.");
+  });
+});
