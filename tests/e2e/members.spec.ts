@@ -101,6 +101,7 @@ test.describe("members admin", () => {
     await signIn(page, demo.admin);
     await page.goto("/club/members");
     const importer = page.getByTestId("roster-import");
+    await expect(importer).toHaveAttribute("data-ready", "true");
     await importer.getByLabel("Roster file (CSV)").setInputFiles({ name: "roster.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
 
     const preview = page.getByTestId("roster-preview");
