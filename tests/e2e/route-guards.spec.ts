@@ -1,6 +1,6 @@
-import { expect, test, type APIRequestContext, type BrowserContext } from "@playwright/test";
+import { expect, test, type APIRequestContext, type BrowserContext, type Locator, type Page } from "@playwright/test";
 import { demo, otherClub, signedInContext } from "./support/auth";
-import { guardRoles, routeGuardRows, type GuardRole } from "../support/route-guard-table";
+import { guardRoles, routeGuardRows, type GuardFixtures, type GuardRole } from "../support/route-guard-table";
 
 /**
  * The route rows of tests/support/route-guard-table.ts through the real server, each role a real
@@ -16,28 +16,43 @@ const accounts: Record<Exclude<GuardRole, "anonymous">, [string, string]> = {
   otherAdmin: [otherClub.admin, otherClub.password],
 };
 
+/** The id at the end of a link's href, e.g. 7 from /roster/fleet/boats/7. */
+async function recordIdFrom(link: Locator): Promise<number> {
+  const href = (await link.getAttribute("href")) ?? "";
+  const id = Number(/\/(\d+)$/.exec(href)?.[1]);
+  expect(id, `a record id in ${href}`).toBeGreaterThan(0);
+  return id;
+}
+
 test("every route handler answers each role as the guard table says", async ({ browser }) => {
   test.setTimeout(120_000);
   const contexts: BrowserContext[] = [];
   const requests = {} as Record<GuardRole, APIRequestContext>;
+  let coachPage: Page | undefined;
   const anonymous = await browser.newContext();
   contexts.push(anonymous);
   requests.anonymous = anonymous.request;
   for (const [role, [email, password]] of Object.entries(accounts)) {
-    const { context } = await signedInContext(browser, email, password);
+    const { context, page } = await signedInContext(browser, email, password);
     contexts.push(context);
+    if (role === "coach") coachPage = page;
     requests[role as GuardRole] = context.request;
   }
 
   const roster = (await (await requests.coach.get("/api/roster")).json()) as { athletes: { id: number; email: string }[] };
   const homeAthleteId = roster.athletes.find((athlete) => athlete.email === "lena@lantern-reach.example")!.id;
+  // The demo fleet's Heron and Short-loom sculls, read from the edit links of the coach's fleet page.
+  await coachPage!.goto("/roster/fleet");
+  const homeBoatId = await recordIdFrom(coachPage!.locator('[data-testid="fleet-boat"][data-name="Heron"] a[href^="/roster/fleet/boats/"]'));
+  const homeOarSetId = await recordIdFrom(coachPage!.locator('[data-testid="fleet-oar-set"][data-name="Short-loom sculls"] a[href^="/roster/fleet/oar-sets/"]'));
+  const home: Omit<GuardFixtures, "tag"> = { homeAthleteId, homeBoatId, homeOarSetId };
 
   const mismatches: string[] = [];
   let calls = 0;
   for (const row of routeGuardRows) {
     for (const role of guardRoles) {
       calls += 1;
-      const request = row.request({ homeAthleteId, tag: `e2e${Date.now()}x${calls}` });
+      const request = row.request({ ...home, tag: `e2e${Date.now()}x${calls}` });
       const response = await requests[role].fetch(request.path, {
         method: row.method,
         maxRedirects: 0,

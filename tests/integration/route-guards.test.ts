@@ -30,8 +30,9 @@ const { closeDatabase, getSequelize } = await import("@/lib/db");
 const { databaseReady } = await import("@/lib/data/database");
 const { seedDemoClub, demoPassword } = await import("@/lib/seed/demo-club");
 const { seedSecondClub, secondClubPassword } = await import("@/lib/seed/second-club");
+const { seedDemoFleet } = await import("@/lib/seed/demo-fleet");
 const { AppError } = await import("@/lib/http/errors");
-const { User } = await import("@/models");
+const { Boat, BoatOarSet, Club, OarSet, User } = await import("@/models");
 
 const accounts: Record<Exclude<GuardRole, "anonymous">, [string, string]> = {
   athlete: ["ada@lantern-reach.example", demoPassword],
@@ -42,19 +43,25 @@ const accounts: Record<Exclude<GuardRole, "anonymous">, [string, string]> = {
   otherAdmin: ["admin@brackwater.example", secondClubPassword],
 };
 const cookies = {} as Record<GuardRole, string | undefined>;
-let homeAthleteId = 0;
+let home: Omit<GuardFixtures, "tag"> = { homeAthleteId: 0, homeBoatId: 0, homeOarSetId: 0 };
 let calls = 0;
 
 function fixtures(): GuardFixtures {
   calls += 1;
-  return { homeAthleteId, tag: `int${calls}` };
+  return { ...home, tag: `int${calls}` };
 }
 
 beforeAll(async () => {
   await databaseReady();
   await seedDemoClub(getSequelize());
   await seedSecondClub(getSequelize());
-  homeAthleteId = (await User.findOne({ where: { email: "lena@lantern-reach.example" } }))!.id;
+  await seedDemoFleet(getSequelize());
+  const athlete = (await User.findOne({ where: { email: "lena@lantern-reach.example" } }))!;
+  home = {
+    homeAthleteId: athlete.id,
+    homeBoatId: (await Boat.findOne({ where: { clubId: athlete.clubId, name: "Heron" } }))!.id,
+    homeOarSetId: (await OarSet.findOne({ where: { clubId: athlete.clubId, name: "Short-loom sculls" } }))!.id,
+  };
   cookies.anonymous = undefined;
   for (const [role, [email, password]] of Object.entries(accounts)) {
     cookies[role as GuardRole] = await sessionCookieFor(email, password);
@@ -123,14 +130,15 @@ function actionArgument(input: unknown): unknown {
 
 describe.each(actionGuardRows.map((row) => [`${row.action} in ${row.file}`, row] as const))("%s", (_label, row) => {
   it.each(guardRoles.map((role) => [role, row.expect[role]] as const))("as %s answers %i", async (role, status) => {
-    const actions = (await import(/* @vite-ignore */ path.join(projectRoot, row.file))) as Record<string, (input: unknown) => Promise<{ ok: boolean; message?: string }>>;
+    const actions = (await import(/* @vite-ignore */ path.join(projectRoot, row.file))) as Record<string, (...args: unknown[]) => Promise<{ ok: boolean; message?: string }>>;
     lastActionError.current = null;
-    const argument = actionArgument(row.input(fixtures()));
+    const given = fixtures();
+    const args = row.args ? row.args(given) : [actionArgument(row.input(given))];
     const headers = { cookie: cookies[role] ?? "", "x-forwarded-for": `203.0.113.${calls % 250}` };
     let result: { ok: boolean; message?: string } | undefined;
     let actual: number;
     try {
-      result = await withRequest(new Request(`${testOrigin}/`, { headers }), () => actions[row.action]!(argument));
+      result = await withRequest(new Request(`${testOrigin}/`, { headers }), () => actions[row.action]!(...args));
       const error = lastActionError.current;
       actual = result.ok ? 200 : error instanceof AppError ? error.status : 400;
     } catch (thrown) {
@@ -142,5 +150,23 @@ describe.each(actionGuardRows.map((row) => [`${row.action} in ${row.file}`, row]
       if (row.redirects) expect(target, `${role} is sent to`).toMatch(row.redirects[role] ?? /^$/);
     }
     expect(actual, result?.message).toBe(status);
+  });
+});
+
+describe("after every row", () => {
+  it("has left the home-club records the rows aim at as they were seeded", async () => {
+    const boat = (await Boat.findByPk(home.homeBoatId))!;
+    expect({ name: boat.name, boatClass: boat.boatClass, spanCm: boat.spanCm, archivedAt: boat.archivedAt }).toEqual({
+      name: "Heron",
+      boatClass: "1x",
+      spanCm: 160,
+      archivedAt: null,
+    });
+    const set = (await OarSet.findByPk(home.homeOarSetId))!;
+    expect({ name: set.name, targetLengthCm: set.targetLengthCm, archivedAt: set.archivedAt }).toEqual({ name: "Short-loom sculls", targetLengthCm: 286, archivedAt: null });
+    const links = await BoatOarSet.findAll({ where: { oarSetId: home.homeOarSetId } });
+    expect(links.map((link) => link.boatId)).toEqual([home.homeBoatId]);
+    const club = (await Club.findByPk(boat.clubId))!;
+    expect((club.settings as { humidSpell?: boolean }).humidSpell ?? false).toBe(false);
   });
 });

@@ -16,9 +16,14 @@ export const guardRoles = ["anonymous", "athlete", "otherAthlete", "coach", "oth
 export type GuardRole = (typeof guardRoles)[number];
 export type Expected = Record<GuardRole, number>;
 
-/** Values the requests may use: a home-club athlete to aim at, and a tag unique to each call. */
+/**
+ * Values the requests may use: home-club records to aim at, and a tag unique to each call. The boat is the
+ * demo fleet's Heron (1x) and the oar set its Short-loom sculls (lib/seed/demo-fleet.ts), linked to Heron only.
+ */
 export interface GuardFixtures {
   homeAthleteId: number;
+  homeBoatId: number;
+  homeOarSetId: number;
   tag: string;
 }
 
@@ -42,17 +47,29 @@ export interface RouteGuardRow {
   why?: string;
 }
 
-export interface ActionGuardRow {
+interface ActionGuardRowBase {
   file: string;
   action: string;
-  /** The action's argument: an object, or a FormData built from these fields and files. */
-  input: (fixtures: GuardFixtures) => unknown;
   /** 200 for { ok: true }; 303 for a form action that redirects; else the status of the typed error it turned into a failure. */
   expect: Expected;
   /** For redirecting form actions: where each role must be sent. */
   redirects?: Partial<Record<GuardRole, RegExp>>;
   why?: string;
 }
+
+export type ActionGuardRow = ActionGuardRowBase &
+  (
+    | {
+        /** The action's one argument: an object, or a FormData built from these fields and files. */
+        input: (fixtures: GuardFixtures) => unknown;
+        args?: never;
+      }
+    | {
+        /** Every argument, in order, for actions that take more than one (or none); used as given. */
+        args: (fixtures: GuardFixtures) => unknown[];
+        input?: never;
+      }
+  );
 
 /** Everyone gets the same answer. */
 function all(status: number): Expected {
@@ -69,6 +86,31 @@ function adminsOwnClub(ok: number): Expected {
 
 /** Admins changing a home-club record: the other club's admin is told it does not exist. */
 const homeAdminOnRecord: Expected = { anonymous: 401, athlete: 403, otherAthlete: 403, coach: 403, otherCoach: 403, admin: 200, otherAdmin: 404 };
+
+/** Coaches and admins changing a home-club record: the other club's coach and admin are told it does not exist. */
+const homeCoachOnRecord: Expected = { anonymous: 401, athlete: 403, otherAthlete: 403, coach: 200, otherCoach: 404, admin: 200, otherAdmin: 404 };
+
+/** Any member using a home-club record, with `ok` as the success status: the other club's members are told it does not exist. */
+function homeMembersOnRecord(ok: number): Expected {
+  return { anonymous: 401, athlete: ok, otherAthlete: 404, coach: ok, otherCoach: 404, admin: ok, otherAdmin: 404 };
+}
+
+/** A YYYY-MM-DD day `offset` days from today in this machine's time zone (as the server's localIsoDate reads it). */
+function localDay(offset: number): string {
+  const day = new Date();
+  day.setDate(day.getDate() + offset);
+  return `${day.getFullYear()}-${String(day.getMonth() + 1).padStart(2, "0")}-${String(day.getDate()).padStart(2, "0")}`;
+}
+
+/** A number from the tag, so each call can pick its own far-away day. */
+function tagNumber(tag: string): number {
+  let sum = 0;
+  for (const char of tag) sum = (sum * 31 + char.charCodeAt(0)) % 100_000;
+  return sum;
+}
+
+/** A sculling change the engine can plan (287/86.5 → 288/88): valid for the default limits and every club's. */
+const scullChange = { oarType: "sculling", measured: { lengthCm: 287, inboardCm: 86.5 }, target: { lengthCm: 288, inboardCm: 88 } };
 
 /** Any signed-in member of any club; nobody signed in gets 401. */
 function members(status: number): Expected {
@@ -153,6 +195,41 @@ routeGuardRows.push(
   },
 );
 
+routeGuardRows.push(
+  {
+    file: "app/api/rig/plan/route.ts",
+    method: "POST",
+    request: () => ({ path: "/api/rig/plan", json: scullChange }),
+    expect: all(200),
+    why: "Public: plans a boat change with the rigging engine (the club's limits for members, the defaults for anyone else); throttled at 60 a minute per address, and a row makes 7 calls.",
+  },
+  {
+    file: "app/api/rig/plans/route.ts",
+    method: "POST",
+    request: ({ homeBoatId, homeOarSetId }) => ({
+      path: "/api/rig/plans",
+      json: {
+        // A fresh once-only id per call, so every home-club call records a new plan (201, not the 200 of a resend).
+        clientId: globalThis.crypto.randomUUID(),
+        boatId: homeBoatId,
+        oarSetId: homeOarSetId,
+        request: { ...scullChange, target: { lengthCm: 286, inboardCm: 87 } },
+        plannedAt: new Date().toISOString(),
+      },
+    }),
+    expect: homeMembersOnRecord(201),
+    why: "Any member records a plan for their own club's boat and oar set; the other club's members are told the boat does not exist. Adds a plan for Heron, which no other test counts.",
+  },
+  {
+    file: "app/api/rig/plans/route.ts",
+    method: "GET",
+    request: () => ({ path: "/api/rig/plans" }),
+    expect: coachesOfAnyClub,
+    hiddenFromOtherClub: "Heron",
+    why: "Each coach sees their own club's saved plans only; the POST row before this one has just saved home-club plans for Heron.",
+  },
+);
+
 export const actionGuardRows: ActionGuardRow[] = [
   {
     file: "app/(auth)/invite/[token]/actions.ts",
@@ -209,3 +286,110 @@ export const actionGuardRows: ActionGuardRow[] = [
     why: "A plain form action (works without JavaScript): records the read for any member, sends the signed-out to sign in.",
   },
 ];
+
+const fleetActions = "app/(coach)/roster/fleet/actions.ts";
+
+/** Heron exactly as lib/seed/demo-fleet.ts seeds it, so an update with it changes nothing. */
+const heronAsSeeded = { name: "Heron", boatClass: "1x", spanCm: 160, notes: "Learn-to-scull single, wide and stable." };
+
+actionGuardRows.push(
+  {
+    file: fleetActions,
+    action: "createBoatAction",
+    input: ({ tag }) => ({ name: `Guard boat ${tag}`, boatClass: "1x", spanCm: 160 }),
+    expect: coachesOfAnyClub,
+    why: "Coaches and admins add a boat to their own club (a new name each call); athletes may not.",
+  },
+  {
+    file: fleetActions,
+    action: "updateBoatAction",
+    args: ({ homeBoatId }) => [homeBoatId, heronAsSeeded],
+    expect: homeCoachOnRecord,
+    why: "Saving Heron with its own values: passes every guard, changes nothing.",
+  },
+  {
+    file: fleetActions,
+    action: "setBoatArchivedAction",
+    input: ({ homeBoatId }) => ({ id: homeBoatId, archived: false }),
+    expect: homeCoachOnRecord,
+    why: "Restoring Heron, which is not archived: passes every guard, changes nothing (archiving it would hide it from later rows).",
+  },
+  {
+    file: fleetActions,
+    action: "createOarSetAction",
+    input: ({ tag }) => ({
+      name: `Guard sculls ${tag}`,
+      oarType: "sculling",
+      oarCount: 2,
+      targetLengthCm: 288,
+      targetInboardCm: 88,
+      clickCm: 0.5,
+      handleMechanism: "clamped-slide",
+      boatIds: [],
+    }),
+    expect: coachesOfAnyClub,
+    why: "Coaches and admins add an oar set to their own club, linked to no boat (a home-club boat would be refused as a field error, 400, for the other club).",
+  },
+  {
+    file: fleetActions,
+    action: "updateOarSetAction",
+    // Short-loom sculls as seeded, still linked to Heron only: an empty boatIds would unlink it.
+    args: ({ homeOarSetId, homeBoatId }) => [
+      homeOarSetId,
+      {
+        name: "Short-loom sculls",
+        oarType: "sculling",
+        oarCount: 2,
+        targetLengthCm: 286,
+        targetInboardCm: 87,
+        clickCm: 0.5,
+        handleMechanism: "end-screw",
+        boatIds: [homeBoatId],
+      },
+    ],
+    expect: homeCoachOnRecord,
+    why: "Saving Short-loom sculls with its own values and links: passes every guard, changes nothing.",
+  },
+  {
+    file: fleetActions,
+    action: "setOarSetArchivedAction",
+    input: ({ homeOarSetId }) => ({ id: homeOarSetId, archived: false }),
+    expect: homeCoachOnRecord,
+    why: "Restoring Short-loom sculls, which is not archived: passes every guard, changes nothing.",
+  },
+  {
+    file: fleetActions,
+    action: "addRaceDayAction",
+    input: ({ tag }) => ({ raceDay: localDay(400 + (tagNumber(tag) % 300)) }),
+    expect: coachesOfAnyClub,
+    why: "Coaches and admins add a race day to their own club's calendar: one more than a year ahead, so no set falls due because of it.",
+  },
+  {
+    file: fleetActions,
+    action: "removeRaceDayAction",
+    input: () => ({ raceDay: "2001-01-01" }),
+    expect: coachesOfAnyClub,
+    why: "Removing a day that is not on the calendar: passes every guard, changes nothing.",
+  },
+  {
+    file: fleetActions,
+    action: "setHumidSpellAction",
+    input: () => ({ humidSpell: false }),
+    expect: coachesOfAnyClub,
+    why: "Setting the humid spell to off, as it already is: passes every guard, changes nothing.",
+  },
+  {
+    file: fleetActions,
+    action: "sendDigestNowAction",
+    args: () => [],
+    expect: coachesOfAnyClub,
+    why: "Coaches and admins send their own club's cleaning digest. No harmless way to succeed: it really mails the club's coaches and admins (the test outbox) and counts as this week's digest.",
+  },
+  {
+    file: "app/(rig)/rig/care/actions.ts",
+    action: "recordCleaningAction",
+    input: ({ homeOarSetId }) => ({ oarSetId: homeOarSetId, cleanedOn: localDay(0), method: "wipe-down" }),
+    expect: homeMembersOnRecord(200),
+    why: "Any member records a cleaning of their own club's oar set (adds a record for today); the other club's members are told the set does not exist.",
+  },
+);
