@@ -1,5 +1,6 @@
 import * as createFoundation from "@/migrations/20261202-0001-create-foundation";
 import * as createLearning from "@/migrations/20261202-0002-create-learning";
+import * as createCertification from "@/migrations/20261202-0004-create-certification";
 
 export interface MigrationModule {
   up: typeof createFoundation.up;
@@ -10,4 +11,5 @@ export interface MigrationModule {
 export const migrationList: { name: string; module: MigrationModule }[] = [
   { name: "20261202-0001-create-foundation", module: createFoundation },
   { name: "20261202-0002-create-learning", module: createLearning },
+  { name: "20261202-0004-create-certification", module: createCertification },
 ];
