@@ -27,7 +27,11 @@ export async function up({ context: queryInterface }: MigrationParams): Promise<
     id: { type: DataTypes.STRING(36), primaryKey: true },
     club_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: "clubs", key: "id" } },
     athlete_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: "users", key: "id" } },
-    assessment_id: { type: DataTypes.STRING(36), allowNull: false, references: { model: "practical_assessments", key: "id" } },
+    assessment_id: {
+      type: DataTypes.STRING(36),
+      allowNull: false,
+      references: { model: "practical_assessments", key: "id" },
+    },
     uploaded_by_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: "users", key: "id" } },
     stored_name: { type: DataTypes.STRING(80), allowNull: false, unique: true },
     media_type: { type: DataTypes.STRING(32), allowNull: false },
@@ -42,7 +46,11 @@ export async function up({ context: queryInterface }: MigrationParams): Promise<
     athlete_id: { type: DataTypes.INTEGER, allowNull: false, references: { model: "users", key: "id" } },
     kind: { type: DataTypes.STRING(16), allowNull: false },
     module_slug: { type: DataTypes.STRING(60), allowNull: true },
-    assessment_id: { type: DataTypes.STRING(36), allowNull: true, references: { model: "practical_assessments", key: "id" } },
+    assessment_id: {
+      type: DataTypes.STRING(36),
+      allowNull: true,
+      references: { model: "practical_assessments", key: "id" },
+    },
     covered_modules: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
     serial: { type: DataTypes.STRING(32), allowNull: false },
     serial_year: { type: DataTypes.INTEGER, allowNull: false },
@@ -59,7 +67,9 @@ export async function up({ context: queryInterface }: MigrationParams): Promise<
     revoked_by_id: { type: DataTypes.INTEGER, allowNull: true, references: { model: "users", key: "id" } },
     revoke_reason: { type: DataTypes.TEXT, allowNull: true },
   });
-  await queryInterface.addIndex("certificates", ["club_id", "serial_year", "serial_number"], { unique: true });
+  await queryInterface.addIndex("certificates", ["club_id", "serial_year", "serial_number"], {
+    unique: true,
+  });
   await queryInterface.addIndex("certificates", ["club_id", "serial"], { unique: true });
   await queryInterface.addIndex("certificates", ["club_id", "issued_on"]);
   await queryInterface.addIndex("certificates", ["athlete_id", "kind"]);

@@ -49,7 +49,11 @@ export class Certificate extends Model<InferAttributes<Certificate>, InferCreati
         id: { type: DataTypes.STRING(36), primaryKey: true },
         clubId: { type: DataTypes.INTEGER, allowNull: false },
         athleteId: { type: DataTypes.INTEGER, allowNull: false },
-        kind: { type: DataTypes.STRING(16), allowNull: false, validate: { isIn: [certificateKinds as unknown as string[]] } },
+        kind: {
+          type: DataTypes.STRING(16),
+          allowNull: false,
+          validate: { isIn: [certificateKinds as unknown as string[]] },
+        },
         moduleSlug: { type: DataTypes.STRING(60), allowNull: true },
         assessmentId: { type: DataTypes.STRING(36), allowNull: true },
         coveredModules: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },

@@ -1,6 +1,7 @@
 import { closeDatabase, getSequelize } from "@/lib/db";
 import { migrateToLatest } from "@/lib/migrate";
 import { seedDemoClub, demoClub } from "@/lib/seed/demo-club";
+import { seedDemoCertification } from "@/lib/seed/demo-certification";
 import { databaseFile } from "@/lib/env";
 
 async function main() {
@@ -8,6 +9,8 @@ async function main() {
   await migrateToLatest(sequelize);
   const { created } = await seedDemoClub(sequelize);
   console.log(`${demoClub.name}: ${created} new members seeded into ${databaseFile()}.`);
+  const { staged } = await seedDemoCertification(sequelize);
+  console.log(`${demoClub.name}: ${staged} athletes staged with quizzes, sign-offs and certificates.`);
   await closeDatabase();
 }
 

@@ -14,8 +14,10 @@ export interface BadgeSource {
 }
 
 const criteria = {
-  module: "Pass the module's quiz, then show a coach of the club, hands-on, every item of the module's practical checklist.",
-  clearance: "Hold a current pass (quiz and coach's practical sign-off) of every module the club requires before an athlete rigs without a coach.",
+  module:
+    "Pass the module's quiz, then show a coach of the club, hands-on, every item of the module's practical checklist.",
+  clearance:
+    "Hold a current pass (quiz and coach's practical sign-off) of every module the club requires before an athlete rigs without a coach.",
 };
 
 /**
@@ -26,7 +28,10 @@ const criteria = {
 export function openBadgeCredential(source: BadgeSource, baseUrl: string): Record<string, unknown> {
   const achievementKey = source.kind === "module" ? `module:${source.moduleSlug ?? "unknown"}` : "clearance";
   return {
-    "@context": ["https://www.w3.org/ns/credentials/v2", "https://purl.imsglobal.org/spec/ob/v3p0/context-3.0.3.json"],
+    "@context": [
+      "https://www.w3.org/ns/credentials/v2",
+      "https://purl.imsglobal.org/spec/ob/v3p0/context-3.0.3.json",
+    ],
     id: `${baseUrl}/api/verify/${source.code}`,
     type: ["VerifiableCredential", "OpenBadgeCredential"],
     name: source.title,
@@ -36,12 +41,17 @@ export function openBadgeCredential(source: BadgeSource, baseUrl: string): Recor
     validUntil: `${source.expiresOn}T00:00:00Z`,
     credentialSubject: {
       type: ["AchievementSubject"],
-      identifier: [{ type: "IdentityObject", identityType: "name", hashed: false, identityHash: source.athleteName }],
+      identifier: [
+        { type: "IdentityObject", identityType: "name", hashed: false, identityHash: source.athleteName },
+      ],
       achievement: {
         id: `urn:slipway:achievement:${source.clubSlug}:${achievementKey}`,
         type: ["Achievement"],
         name: source.title,
-        description: source.kind === "module" ? `Practical sign-off: ${source.title}` : "May rig their own oars without a coach standing by, within the club's limits.",
+        description:
+          source.kind === "module"
+            ? `Practical sign-off: ${source.title}`
+            : "May rig their own oars without a coach standing by, within the club's limits.",
         criteria: { narrative: criteria[source.kind] },
       },
     },

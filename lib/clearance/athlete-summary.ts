@@ -45,7 +45,12 @@ export interface AthleteStanding {
 }
 
 /** Each module's status (quiz and practical together) and the clearance, from the recorded facts. */
-export function athleteStanding(moduleSlugs: readonly string[], requiredModules: readonly string[], facts: AthleteFacts, today: string): AthleteStanding {
+export function athleteStanding(
+  moduleSlugs: readonly string[],
+  requiredModules: readonly string[],
+  facts: AthleteFacts,
+  today: string,
+): AthleteStanding {
   const reads = new Set(facts.lessonReads);
   const latest = latestPasses(facts.passes);
   const modules = moduleSlugs.map((slug): ModuleStanding => {
@@ -53,7 +58,10 @@ export function athleteStanding(moduleSlugs: readonly string[], requiredModules:
     const mine = facts.assessments.filter((assessment) => assessment.moduleSlug === slug);
     const openRequest = mine.some((assessment) => assessment.status === "waiting");
     const decided = mine
-      .filter((assessment) => (assessment.status === "passed" || assessment.status === "not-yet") && assessment.assessedAt)
+      .filter(
+        (assessment) =>
+          (assessment.status === "passed" || assessment.status === "not-yet") && assessment.assessedAt,
+      )
       .sort((a, b) => b.assessedAt!.getTime() - a.assessedAt!.getTime())[0];
     const latestDecision = decided
       ? { outcome: decided.status as "passed" | "not-yet", decidedOn: isoDateOf(decided.assessedAt!) }
@@ -68,6 +76,11 @@ export function athleteStanding(moduleSlugs: readonly string[], requiredModules:
       requestProblem: signOffRequestProblem({ quizPassed: progress.passed, openRequest, latestPass, today }),
     };
   });
-  const clearance = clearanceFor({ requiredModules, passes: [...latest.values()], suspension: facts.suspension, today });
+  const clearance = clearanceFor({
+    requiredModules,
+    passes: [...latest.values()],
+    suspension: facts.suspension,
+    today,
+  });
   return { modules, clearance };
 }

@@ -39,7 +39,12 @@ export const rosterFilterLabels: Record<RosterFilter, string> = {
 };
 
 /** Whether a row passes the roster's filter and name search (case- and accent-insensitive). */
-export function rosterRowMatches(row: RosterRow, filter: RosterFilter, search: string, today: string): boolean {
+export function rosterRowMatches(
+  row: RosterRow,
+  filter: RosterFilter,
+  search: string,
+  today: string,
+): boolean {
   const needle = fold(search.trim());
   if (needle && !fold(row.name).includes(needle) && !fold(row.email).includes(needle)) return false;
   switch (filter) {
@@ -52,10 +57,29 @@ export function rosterRowMatches(row: RosterRow, filter: RosterFilter, search: s
     case "waiting-for-me":
       return row.waitingForMe > 0;
     case "expiring-soon":
-      return row.clearance.state === "cleared" && row.clearance.expiresOn !== null && daysUntil(today, row.clearance.expiresOn) <= expiringSoonDays;
+      return (
+        row.clearance.state === "cleared" &&
+        row.clearance.expiresOn !== null &&
+        daysUntil(today, row.clearance.expiresOn) <= expiringSoonDays
+      );
   }
 }
 
 function fold(text: string): string {
-  return text.normalize("NFD").replace(/\p{Diacritic}/gu, "").toLowerCase();
+  return text
+    .normalize("NFD")
+    .replace(/\p{Diacritic}/gu, "")
+    .toLowerCase();
 }
+
+/** Short words for the roster's narrow cells (the full words are in moduleStatusLabels). */
+export const rosterCellLabels: Record<ModuleStatus, string> = {
+  "not-started": "Not started",
+  "lesson-read": "Reading",
+  "quiz-failed": "Quiz again",
+  "ready-for-sign-off": "Practical due",
+  "waiting-for-sign-off": "Waiting",
+  "not-yet": "Not yet",
+  passed: "Passed",
+  expired: "Expired",
+};

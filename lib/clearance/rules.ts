@@ -143,11 +143,20 @@ export interface ModuleStatusInput {
  * Otherwise: waiting when a sign-off is asked for, "not yet" after the coach's latest verdict, expired
  * when an old pass ran out, else the quiz stage.
  */
-export function moduleStatus({ quizStage, latestPass, openRequest, latestDecision, today }: ModuleStatusInput): ModuleStatus {
+export function moduleStatus({
+  quizStage,
+  latestPass,
+  openRequest,
+  latestDecision,
+  today,
+}: ModuleStatusInput): ModuleStatus {
   const quizPassed = quizStage === "quiz-passed";
   if (quizPassed && latestPass && isPassCurrent(latestPass, today)) return "passed";
   if (openRequest) return "waiting-for-sign-off";
-  if (latestDecision?.outcome === "not-yet" && (!latestPass || latestDecision.decidedOn >= latestPass.signedOffOn)) {
+  if (
+    latestDecision?.outcome === "not-yet" &&
+    (!latestPass || latestDecision.decidedOn >= latestPass.signedOffOn)
+  ) {
     return "not-yet";
   }
   if (latestPass && quizPassed) return "expired";
@@ -165,10 +174,19 @@ export interface SignOffRequestCheck {
 }
 
 /** Why the athlete may not ask for a sign-off now, or null when they may. */
-export function signOffRequestProblem({ quizPassed, openRequest, latestPass, today }: SignOffRequestCheck): string | null {
+export function signOffRequestProblem({
+  quizPassed,
+  openRequest,
+  latestPass,
+  today,
+}: SignOffRequestCheck): string | null {
   if (!quizPassed) return "Pass the module's quiz first, then ask a coach to watch you.";
   if (openRequest) return "You have already asked; a coach will watch you soon.";
-  if (latestPass && isPassCurrent(latestPass, today) && daysUntil(today, latestPass.expiresOn) > renewalWindowDays) {
+  if (
+    latestPass &&
+    isPassCurrent(latestPass, today) &&
+    daysUntil(today, latestPass.expiresOn) > renewalWindowDays
+  ) {
     return "You have passed this module; you can renew it in the last 30 days before it expires.";
   }
   return null;

@@ -66,7 +66,12 @@ export async function issueCertificate(input: IssueInput, transaction: Transacti
       action: "certificate.issued",
       subjectType: "certificate",
       subjectId: certificate.id,
-      details: { athleteId: input.athlete.id, serial: certificate.serial, kind: input.kind, moduleSlug: input.moduleSlug },
+      details: {
+        athleteId: input.athlete.id,
+        serial: certificate.serial,
+        kind: input.kind,
+        moduleSlug: input.moduleSlug,
+      },
     },
     transaction,
   );
@@ -79,13 +84,24 @@ export async function issueCertificate(input: IssueInput, transaction: Transacti
  * expires with the first required module pass to run out.
  */
 export async function issueClearanceIfNewlyHeld(
-  input: { context: ClubCertificationContext; athlete: { id: number; name: string }; signedOffBy: { id: number | null; name: string }; today: string; now: Date },
+  input: {
+    context: ClubCertificationContext;
+    athlete: { id: number; name: string };
+    signedOffBy: { id: number | null; name: string };
+    today: string;
+    now: Date;
+  },
   transaction: Transaction,
 ): Promise<Certificate | null> {
   const standing = await standingOf(input.athlete.id, input.context, input.today, transaction);
   if (!standing.clearance.cleared || !standing.clearance.expiresOn) return null;
   const current = await Certificate.findOne({
-    where: { athleteId: input.athlete.id, kind: "clearance", revokedAt: null, expiresOn: { [Op.gt]: input.today } },
+    where: {
+      athleteId: input.athlete.id,
+      kind: "clearance",
+      revokedAt: null,
+      expiresOn: { [Op.gt]: input.today },
+    },
     transaction,
   });
   if (current) return null;

@@ -4,7 +4,13 @@ import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { recordAudit } from "@/lib/data/audit";
 import { readClubLogo } from "@/lib/data/club-logo";
-import { assertAllowed, assertVisible, canManageClub, canViewAthlete, type Actor } from "@/lib/auth/permissions";
+import {
+  assertAllowed,
+  assertVisible,
+  canManageClub,
+  canViewAthlete,
+  type Actor,
+} from "@/lib/auth/permissions";
 import { ConflictError } from "@/lib/http/errors";
 import { publicBaseUrl } from "@/lib/env";
 import { getModule } from "@/lib/content/modules";
@@ -42,7 +48,10 @@ export function verifyUrlFor(code: string): string {
 /** Athletes whose clearance a coach has suspended and not lifted, among `athleteIds`. */
 export async function suspendedAthletes(athleteIds: readonly number[]): Promise<Set<number>> {
   if (athleteIds.length === 0) return new Set();
-  const active = await ClearanceSuspension.findAll({ where: { athleteId: [...new Set(athleteIds)], liftedAt: null }, attributes: ["athleteId"] });
+  const active = await ClearanceSuspension.findAll({
+    where: { athleteId: [...new Set(athleteIds)], liftedAt: null },
+    attributes: ["athleteId"],
+  });
   return new Set(active.map((suspension) => suspension.athleteId));
 }
 
@@ -59,7 +68,11 @@ export function summarise(certificate: Certificate, today: string, suspended: bo
     signedOffByName: certificate.signedOffByName,
     issuedOn: certificate.issuedOn,
     expiresOn: certificate.expiresOn,
-    status: certificateStatus({ kind: certificate.kind, expiresOn: certificate.expiresOn, revoked: certificate.revokedAt !== null }, today, suspended),
+    status: certificateStatus(
+      { kind: certificate.kind, expiresOn: certificate.expiresOn, revoked: certificate.revokedAt !== null },
+      today,
+      suspended,
+    ),
     revokedAt: certificate.revokedAt?.toISOString() ?? null,
     revokeReason: certificate.revokeReason,
     verifyUrl: verifyUrlFor(certificate.verificationCode),
@@ -72,7 +85,13 @@ export async function certificatesOfAthlete(actor: Actor, athleteId: number): Pr
   await databaseReady();
   const athlete = await User.findByPk(athleteId);
   assertVisible(!!athlete && canViewAthlete(actor, athlete));
-  const certificates = await Certificate.findAll({ where: { athleteId }, order: [["issuedAt", "DESC"], ["serialNumber", "DESC"]] });
+  const certificates = await Certificate.findAll({
+    where: { athleteId },
+    order: [
+      ["issuedAt", "DESC"],
+      ["serialNumber", "DESC"],
+    ],
+  });
   const suspended = (await suspendedAthletes([athleteId])).has(athleteId);
   const today = isoDateOf(new Date());
   return certificates.map((certificate) => summarise(certificate, today, suspended));
@@ -80,10 +99,16 @@ export async function certificatesOfAthlete(actor: Actor, athleteId: number): Pr
 
 /** Internal: renders a stored certificate to PDF (called after the issuing transaction has committed). */
 export async function renderStoredCertificate(certificate: Certificate): Promise<Uint8Array> {
-  const [club, logo, fonts] = await Promise.all([Club.findByPk(certificate.clubId), readClubLogo(certificate.clubId), pdfFonts()]);
+  const [club, logo, fonts] = await Promise.all([
+    Club.findByPk(certificate.clubId),
+    readClubLogo(certificate.clubId),
+    pdfFonts(),
+  ]);
   let lines: string[];
   if (certificate.kind === "module") {
-    const assessment = certificate.assessmentId ? await PracticalAssessment.findByPk(certificate.assessmentId) : null;
+    const assessment = certificate.assessmentId
+      ? await PracticalAssessment.findByPk(certificate.assessmentId)
+      : null;
     const checklist = assessment?.checklist ?? getModule(certificate.moduleSlug ?? "")?.meta.checklist ?? [];
     lines = checklist.map((item) => item.label);
   } else {
@@ -113,7 +138,10 @@ export function certificateFileName(certificate: { serial: string }): string {
 }
 
 /** The PDF of one certificate, for its athlete and for coaches and admins of their club (404 otherwise). */
-export async function certificatePdfFor(actor: Actor, certificateId: string): Promise<{ bytes: Uint8Array; fileName: string }> {
+export async function certificatePdfFor(
+  actor: Actor,
+  certificateId: string,
+): Promise<{ bytes: Uint8Array; fileName: string }> {
   await databaseReady();
   const certificate = await Certificate.findByPk(certificateId);
   const athlete = certificate ? await User.findByPk(certificate.athleteId) : null;
@@ -122,7 +150,10 @@ export async function certificatePdfFor(actor: Actor, certificateId: string): Pr
 }
 
 /** One certificate for an admin of its club, with who revoked it and why. */
-export async function certificateForAdmin(actor: Actor, certificateId: string): Promise<CertificateSummary & { revokedByName: string | null }> {
+export async function certificateForAdmin(
+  actor: Actor,
+  certificateId: string,
+): Promise<CertificateSummary & { revokedByName: string | null }> {
   await databaseReady();
   const certificate = await Certificate.findByPk(certificateId);
   assertVisible(!!certificate && canManageClub(actor, certificate.clubId));
@@ -130,14 +161,21 @@ export async function certificateForAdmin(actor: Actor, certificateId: string): 
     suspendedAthletes([certificate.athleteId]),
     certificate.revokedById ? User.findByPk(certificate.revokedById) : null,
   ]);
-  return { ...summarise(certificate, isoDateOf(new Date()), suspended.has(certificate.athleteId)), revokedByName: revoker?.name ?? null };
+  return {
+    ...summarise(certificate, isoDateOf(new Date()), suspended.has(certificate.athleteId)),
+    revokedByName: revoker?.name ?? null,
+  };
 }
 
 /**
  * An admin revokes a certificate with a reason (audited). A revoked module certificate no longer counts
  * as a pass, so a current clearance certificate standing on that module is revoked with it.
  */
-export async function revokeCertificate(actor: Actor, certificateId: string, reason: string): Promise<{ revoked: string[] }> {
+export async function revokeCertificate(
+  actor: Actor,
+  certificateId: string,
+  reason: string,
+): Promise<{ revoked: string[] }> {
   await databaseReady();
   const existing = await Certificate.findByPk(certificateId);
   assertVisible(!!existing && existing.clubId === actor.clubId);
@@ -147,18 +185,30 @@ export async function revokeCertificate(actor: Actor, certificateId: string, rea
   return writeTransaction(async (transaction) => {
     const certificate = await Certificate.findByPk(certificateId, { transaction });
     if (!certificate) throw new ConflictError("The certificate is gone.");
-    if (certificate.revokedAt) throw new ConflictError(`Certificate ${certificate.serial} is already revoked.`);
+    if (certificate.revokedAt)
+      throw new ConflictError(`Certificate ${certificate.serial} is already revoked.`);
     const revoked = [certificate];
     if (certificate.kind === "module" && certificate.moduleSlug) {
       const clearances = await Certificate.findAll({
-        where: { athleteId: certificate.athleteId, kind: "clearance", revokedAt: null, expiresOn: { [Op.gt]: today } },
+        where: {
+          athleteId: certificate.athleteId,
+          kind: "clearance",
+          revokedAt: null,
+          expiresOn: { [Op.gt]: today },
+        },
         transaction,
       });
-      revoked.push(...clearances.filter((clearance) => clearance.coveredModules.includes(certificate.moduleSlug!)));
+      revoked.push(
+        ...clearances.filter((clearance) => clearance.coveredModules.includes(certificate.moduleSlug!)),
+      );
     }
     for (const entry of revoked) {
-      const entryReason = entry === certificate ? reason : `Module certificate ${certificate.serial} was revoked: ${reason}`;
-      await entry.update({ revokedAt: now, revokedById: actor.id, revokeReason: entryReason }, { transaction });
+      const entryReason =
+        entry === certificate ? reason : `Module certificate ${certificate.serial} was revoked: ${reason}`;
+      await entry.update(
+        { revokedAt: now, revokedById: actor.id, revokeReason: entryReason },
+        { transaction },
+      );
       await recordAudit(
         {
           clubId: actor.clubId,
@@ -197,10 +247,17 @@ export async function verifyCode(code: string): Promise<PublicVerification | nul
   await databaseReady();
   const certificate = await Certificate.findOne({ where: { verificationCode: code } });
   if (!certificate || certificate.verificationCode !== code) return null;
-  const [suspended, club] = await Promise.all([suspendedAthletes([certificate.athleteId]), Club.findByPk(certificate.clubId)]);
+  const [suspended, club] = await Promise.all([
+    suspendedAthletes([certificate.athleteId]),
+    Club.findByPk(certificate.clubId),
+  ]);
   const today = isoDateOf(new Date());
   return {
-    status: certificateStatus({ kind: certificate.kind, expiresOn: certificate.expiresOn, revoked: certificate.revokedAt !== null }, today, suspended.has(certificate.athleteId)),
+    status: certificateStatus(
+      { kind: certificate.kind, expiresOn: certificate.expiresOn, revoked: certificate.revokedAt !== null },
+      today,
+      suspended.has(certificate.athleteId),
+    ),
     kind: certificate.kind,
     athleteName: certificate.athleteName,
     title: certificate.title,

@@ -34,13 +34,18 @@ export async function clubSettingsForAdmin(actor: Actor): Promise<ClubSettingsPa
  * not know (other features' settings) are kept as stored. Past results are never rewritten: attempts
  * keep their own pass mark and certificates their own dates.
  */
-export async function updateClubSettings(actor: Actor, form: ClubSettingsForm): Promise<{ changed: string[] }> {
+export async function updateClubSettings(
+  actor: Actor,
+  form: ClubSettingsForm,
+): Promise<{ changed: string[] }> {
   await databaseReady();
   assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators change the club's settings.");
   const known = new Set(listModules().map((meta) => meta.slug));
   const unknown = form.clearanceModules.filter((slug) => !known.has(slug));
   if (unknown.length > 0) {
-    throw new ValidationError(`clearanceModules: no module is called ${unknown.join(", ")}`, { clearanceModules: ["choose modules of the course"] });
+    throw new ValidationError(`clearanceModules: no module is called ${unknown.join(", ")}`, {
+      clearanceModules: ["choose modules of the course"],
+    });
   }
   return writeTransaction(async (transaction) => {
     const club = await Club.findByPk(actor.clubId, { transaction });
@@ -48,10 +53,19 @@ export async function updateClubSettings(actor: Actor, form: ClubSettingsForm): 
     const stored = (club.settings ?? {}) as Record<string, unknown>;
     const before = readClubSettings(stored);
     const after = formToSettings(form, before);
-    const changed = (Object.keys(after) as (keyof typeof after)[]).filter((key) => JSON.stringify(before[key]) !== JSON.stringify(after[key]));
+    const changed = (Object.keys(after) as (keyof typeof after)[]).filter(
+      (key) => JSON.stringify(before[key]) !== JSON.stringify(after[key]),
+    );
     await club.update({ settings: { ...stored, ...after } }, { transaction });
     await recordAudit(
-      { clubId: actor.clubId, actorId: actor.id, action: "club.settings-changed", subjectType: "club", subjectId: actor.clubId, details: { changed } },
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action: "club.settings-changed",
+        subjectType: "club",
+        subjectId: actor.clubId,
+        details: { changed },
+      },
       transaction,
     );
     return { changed };

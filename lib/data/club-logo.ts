@@ -26,7 +26,9 @@ function logoPath(fileName: string): string | null {
  * The club's logo for certificates and pages, or null when there is none (or the file is missing or
  * not a PNG or JPEG: the type is sniffed from the bytes, whatever the name says).
  */
-export async function readClubLogo(clubId: number): Promise<{ bytes: Uint8Array; type: ClubLogoType } | null> {
+export async function readClubLogo(
+  clubId: number,
+): Promise<{ bytes: Uint8Array; type: ClubLogoType } | null> {
   await databaseReady();
   const club = await Club.findByPk(clubId, { attributes: ["id", "logoFile"] });
   const file = club?.logoFile ? logoPath(club.logoFile) : null;
@@ -56,7 +58,14 @@ export async function storeClubLogo(actor: Actor, bytes: Uint8Array, type: ClubL
       previous = club.logoFile ?? null;
       await club.update({ logoFile: fileName }, { transaction });
       await recordAudit(
-        { clubId: actor.clubId, actorId: actor.id, action: "club.logo-changed", subjectType: "club", subjectId: actor.clubId, details: { type, bytes: bytes.byteLength } },
+        {
+          clubId: actor.clubId,
+          actorId: actor.id,
+          action: "club.logo-changed",
+          subjectType: "club",
+          subjectId: actor.clubId,
+          details: { type, bytes: bytes.byteLength },
+        },
         transaction,
       );
     });
@@ -77,7 +86,16 @@ export async function removeClubLogo(actor: Actor): Promise<void> {
     previous = club?.logoFile ?? null;
     if (!club || !previous) return;
     await club.update({ logoFile: null }, { transaction });
-    await recordAudit({ clubId: actor.clubId, actorId: actor.id, action: "club.logo-removed", subjectType: "club", subjectId: actor.clubId }, transaction);
+    await recordAudit(
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action: "club.logo-removed",
+        subjectType: "club",
+        subjectId: actor.clubId,
+      },
+      transaction,
+    );
   });
   await removeLogoFile(previous);
 }

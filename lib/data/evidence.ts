@@ -30,14 +30,20 @@ export async function assertCanAddEvidence(actor: Actor, assessmentId: string): 
   assertAllowed(canSignOff(actor, athlete), "Only a coach of the club can add evidence to a sign-off.");
   if (assessment.status !== "waiting") throw new ConflictError("This sign-off has already been recorded.");
   const count = await EvidencePhoto.count({ where: { assessmentId } });
-  if (count >= maxEvidencePhotos) throw new ConflictError(`A sign-off keeps at most ${maxEvidencePhotos} photos.`);
+  if (count >= maxEvidencePhotos)
+    throw new ConflictError(`A sign-off keeps at most ${maxEvidencePhotos} photos.`);
 }
 
 /**
  * Stores a photo whose type was sniffed from its bytes, under a random name in uploadsDir()/evidence
  * (outside public/); the uploader's file name never reaches the file system.
  */
-export async function addEvidencePhoto(actor: Actor, assessmentId: string, bytes: Uint8Array, mediaType: EvidenceMediaType): Promise<{ id: string; url: string; storedName: string }> {
+export async function addEvidencePhoto(
+  actor: Actor,
+  assessmentId: string,
+  bytes: Uint8Array,
+  mediaType: EvidenceMediaType,
+): Promise<{ id: string; url: string; storedName: string }> {
   await assertCanAddEvidence(actor, assessmentId);
   const assessment = (await PracticalAssessment.findByPk(assessmentId))!;
   const id = randomUUID();
@@ -48,9 +54,19 @@ export async function addEvidencePhoto(actor: Actor, assessmentId: string, bytes
   try {
     await writeTransaction(async (transaction) => {
       const count = await EvidencePhoto.count({ where: { assessmentId }, transaction });
-      if (count >= maxEvidencePhotos) throw new ConflictError(`A sign-off keeps at most ${maxEvidencePhotos} photos.`);
+      if (count >= maxEvidencePhotos)
+        throw new ConflictError(`A sign-off keeps at most ${maxEvidencePhotos} photos.`);
       await EvidencePhoto.create(
-        { id, clubId: assessment.clubId, athleteId: assessment.athleteId, assessmentId, uploadedById: actor.id, storedName, mediaType, byteSize: bytes.byteLength },
+        {
+          id,
+          clubId: assessment.clubId,
+          athleteId: assessment.athleteId,
+          assessmentId,
+          uploadedById: actor.id,
+          storedName,
+          mediaType,
+          byteSize: bytes.byteLength,
+        },
         { transaction },
       );
     });
@@ -62,14 +78,23 @@ export async function addEvidencePhoto(actor: Actor, assessmentId: string, bytes
 }
 
 /** A photo for its athlete and for coaches and admins of their club; anyone else gets 404. */
-export async function readEvidencePhoto(actor: Actor, photoId: string): Promise<{ bytes: Uint8Array; mediaType: EvidenceMediaType; fileName: string }> {
+export async function readEvidencePhoto(
+  actor: Actor,
+  photoId: string,
+): Promise<{ bytes: Uint8Array; mediaType: EvidenceMediaType; fileName: string }> {
   await databaseReady();
   const photo = /^[0-9a-f-]{36}$/.test(photoId) ? await EvidencePhoto.findByPk(photoId) : null;
   const athlete = photo ? await User.findByPk(photo.athleteId) : null;
   assertVisible(!!photo && !!athlete && canViewAthlete(actor, athlete));
   try {
-    const bytes = new Uint8Array(await fs.readFile(path.join(evidenceDir(), path.basename(photo.storedName))));
-    return { bytes, mediaType: photo.mediaType, fileName: `evidence-${photo.id}.${fileExtensions[photo.mediaType]}` };
+    const bytes = new Uint8Array(
+      await fs.readFile(path.join(evidenceDir(), path.basename(photo.storedName))),
+    );
+    return {
+      bytes,
+      mediaType: photo.mediaType,
+      fileName: `evidence-${photo.id}.${fileExtensions[photo.mediaType]}`,
+    };
   } catch {
     throw new NotFoundError();
   }

@@ -33,9 +33,17 @@ export async function registerFor(actor: Actor, filter: RegisterFilter): Promise
   if (filter.module) conditions.push({ moduleSlug: filter.module });
   const [club, certificates] = await Promise.all([
     Club.findByPk(actor.clubId),
-    Certificate.findAll({ where: { [Op.and]: conditions }, order: [["serialYear", "ASC"], ["serialNumber", "ASC"]] }),
+    Certificate.findAll({
+      where: { [Op.and]: conditions },
+      order: [
+        ["serialYear", "ASC"],
+        ["serialNumber", "ASC"],
+      ],
+    }),
   ]);
-  const suspended = await suspendedAthletes(certificates.filter((entry) => entry.kind === "clearance").map((entry) => entry.athleteId));
+  const suspended = await suspendedAthletes(
+    certificates.filter((entry) => entry.kind === "clearance").map((entry) => entry.athleteId),
+  );
   const today = isoDateOf(new Date());
   const entries = certificates
     .map((certificate) => summarise(certificate, today, suspended.has(certificate.athleteId)))
@@ -45,10 +53,20 @@ export async function registerFor(actor: Actor, filter: RegisterFilter): Promise
 
 /** The filters in words, printed on every page of the register. */
 export function registerFilterSummary(filter: RegisterFilter): string {
-  const title = filter.module ? (listModules().find((meta) => meta.slug === filter.module)?.title ?? filter.module) : "All modules";
-  const kind = { all: "module and clearance certificates", module: "module certificates", clearance: "clearance certificates" }[filter.kind];
-  const status = filter.status === "all" ? "any status" : certificateStatusLabels[filter.status].label.toLowerCase();
-  const dates = filter.from || filter.to ? `issued ${filter.from || "from the start"} to ${filter.to || "today"}` : "all dates";
+  const title = filter.module
+    ? (listModules().find((meta) => meta.slug === filter.module)?.title ?? filter.module)
+    : "All modules";
+  const kind = {
+    all: "module and clearance certificates",
+    module: "module certificates",
+    clearance: "clearance certificates",
+  }[filter.kind];
+  const status =
+    filter.status === "all" ? "any status" : certificateStatusLabels[filter.status].label.toLowerCase();
+  const dates =
+    filter.from || filter.to
+      ? `issued ${filter.from || "from the start"} to ${filter.to || "today"}`
+      : "all dates";
   return `${title} · ${kind} · ${status} · ${dates}`;
 }
 

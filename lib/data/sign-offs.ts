@@ -44,7 +44,10 @@ export interface CoachOption {
 
 /** Coaches (not admins) of the club who can be asked for a sign-off, by name. */
 async function coachesOf(clubId: number, exceptId: number): Promise<CoachOption[]> {
-  const coaches = await User.findAll({ where: { clubId, role: "coach", status: "active", id: { [Op.ne]: exceptId } }, order: [["name", "ASC"]] });
+  const coaches = await User.findAll({
+    where: { clubId, role: "coach", status: "active", id: { [Op.ne]: exceptId } },
+    order: [["name", "ASC"]],
+  });
   return coaches.map((coach) => ({ id: coach.id, name: coach.name }));
 }
 
@@ -56,28 +59,42 @@ export interface PracticalView {
   /** Why the athlete cannot ask now, or null when the request button should show. */
   requestProblem: string | null;
   openRequest: { id: string; requestedAt: string; coachName: string | null } | null;
-  latestDecision: { outcome: AssessmentOutcome; note: string; assessedAt: string; assessorName: string } | null;
+  latestDecision: {
+    outcome: AssessmentOutcome;
+    note: string;
+    assessedAt: string;
+    assessorName: string;
+  } | null;
   currentPass: { signedOffOn: string; expiresOn: string } | null;
   certificate: { id: string; serial: string; pdfUrl: string; verifyUrl: string } | null;
   coaches: CoachOption[];
 }
 
 /** One module's practical for the athlete (or a coach of their club): status, checklist, coach's last word. */
-export async function practicalViewFor(actor: Actor, slug: string, athleteId = actor.id): Promise<PracticalView> {
+export async function practicalViewFor(
+  actor: Actor,
+  slug: string,
+  athleteId = actor.id,
+): Promise<PracticalView> {
   await databaseReady();
   const meta = requireModule(slug);
   const athlete = await User.findByPk(athleteId);
   assertVisible(!!athlete && canViewAthlete(actor, athlete));
   const today = isoDateOf(new Date());
   const context = await clubCertificationContext(athlete.clubId);
-  const standing = (await standingOf(athlete.id, context, today)).modules.find((entry) => entry.slug === slug)!;
+  const standing = (await standingOf(athlete.id, context, today)).modules.find(
+    (entry) => entry.slug === slug,
+  )!;
   const [open, decided, certificate, coaches] = await Promise.all([
     PracticalAssessment.findOne({ where: { athleteId, moduleSlug: slug, status: "waiting" } }),
     PracticalAssessment.findOne({
       where: { athleteId, moduleSlug: slug, status: ["passed", "not-yet"] },
       order: [["assessedAt", "DESC"]],
     }),
-    Certificate.findOne({ where: { athleteId, kind: "module", moduleSlug: slug, revokedAt: null }, order: [["expiresOn", "DESC"]] }),
+    Certificate.findOne({
+      where: { athleteId, kind: "module", moduleSlug: slug, revokedAt: null },
+      order: [["expiresOn", "DESC"]],
+    }),
     coachesOf(athlete.clubId, athlete.id),
   ]);
   const names = await namesOf([open?.coachId, decided?.assessorId]);
@@ -88,7 +105,11 @@ export async function practicalViewFor(actor: Actor, slug: string, athleteId = a
     statusLabel: moduleStatusLabels[standing.status].label,
     requestProblem: standing.requestProblem,
     openRequest: open
-      ? { id: open.id, requestedAt: open.requestedAt.toISOString(), coachName: open.coachId ? (names.get(open.coachId) ?? null) : null }
+      ? {
+          id: open.id,
+          requestedAt: open.requestedAt.toISOString(),
+          coachName: open.coachId ? (names.get(open.coachId) ?? null) : null,
+        }
       : null,
     latestDecision:
       decided && decided.assessedAt
@@ -99,9 +120,17 @@ export async function practicalViewFor(actor: Actor, slug: string, athleteId = a
             assessorName: names.get(decided.assessorId ?? 0) ?? "a coach",
           }
         : null,
-    currentPass: standing.status === "passed" && standing.latestPass ? { signedOffOn: standing.latestPass.signedOffOn, expiresOn: standing.latestPass.expiresOn } : null,
+    currentPass:
+      standing.status === "passed" && standing.latestPass
+        ? { signedOffOn: standing.latestPass.signedOffOn, expiresOn: standing.latestPass.expiresOn }
+        : null,
     certificate: certificate
-      ? { id: certificate.id, serial: certificate.serial, pdfUrl: `/api/certificates/${certificate.id}/pdf`, verifyUrl: verifyUrlFor(certificate.verificationCode) }
+      ? {
+          id: certificate.id,
+          serial: certificate.serial,
+          pdfUrl: `/api/certificates/${certificate.id}/pdf`,
+          verifyUrl: verifyUrlFor(certificate.verificationCode),
+        }
       : null,
     coaches,
   };
@@ -118,23 +147,39 @@ async function namesOf(ids: readonly (number | null | undefined)[]): Promise<Map
  * An athlete who passed a module's quiz asks for the practical sign-off, of one coach or of any coach;
  * the coach (or every coach of the club) gets an e-mail with a link to the sign-off form.
  */
-export async function requestSignOff(actor: Actor, input: { moduleSlug: string; coachId: number | null }): Promise<{ assessmentId: string }> {
+export async function requestSignOff(
+  actor: Actor,
+  input: { moduleSlug: string; coachId: number | null },
+): Promise<{ assessmentId: string }> {
   await databaseReady();
   const meta = requireModule(input.moduleSlug);
   const athlete = await User.findByPk(actor.id);
-  assertAllowed(!!athlete && canRequestSignOff(actor, athlete), "Only the athlete can ask for their own sign-off.");
+  assertAllowed(
+    !!athlete && canRequestSignOff(actor, athlete),
+    "Only the athlete can ask for their own sign-off.",
+  );
   let chosenCoach: User | null = null;
   if (input.coachId !== null) {
     chosenCoach = await User.findByPk(input.coachId);
-    if (!chosenCoach || chosenCoach.clubId !== actor.clubId || chosenCoach.role === "athlete" || chosenCoach.status !== "active" || chosenCoach.id === actor.id) {
-      throw new ValidationError("coachId: choose a coach of your club", { coachId: ["choose a coach of your club"] });
+    if (
+      !chosenCoach ||
+      chosenCoach.clubId !== actor.clubId ||
+      chosenCoach.role === "athlete" ||
+      chosenCoach.status !== "active" ||
+      chosenCoach.id === actor.id
+    ) {
+      throw new ValidationError("coachId: choose a coach of your club", {
+        coachId: ["choose a coach of your club"],
+      });
     }
   }
   const now = new Date();
   const today = isoDateOf(now);
   const context = await clubCertificationContext(actor.clubId);
   const assessmentId = await writeTransaction(async (transaction) => {
-    const standing = (await standingOf(actor.id, context, today, transaction)).modules.find((entry) => entry.slug === meta.slug)!;
+    const standing = (await standingOf(actor.id, context, today, transaction)).modules.find(
+      (entry) => entry.slug === meta.slug,
+    )!;
     if (standing.requestProblem) throw new ConflictError(standing.requestProblem);
     const created = await PracticalAssessment.create(
       {
@@ -149,12 +194,21 @@ export async function requestSignOff(actor: Actor, input: { moduleSlug: string; 
       { transaction },
     );
     await recordAudit(
-      { clubId: actor.clubId, actorId: actor.id, action: "practical.requested", subjectType: "practical-assessment", subjectId: created.id, details: { moduleSlug: meta.slug, coachId: chosenCoach?.id ?? null } },
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action: "practical.requested",
+        subjectType: "practical-assessment",
+        subjectId: created.id,
+        details: { moduleSlug: meta.slug, coachId: chosenCoach?.id ?? null },
+      },
       transaction,
     );
     return created.id;
   });
-  const recipients = chosenCoach ? [chosenCoach] : await User.findAll({ where: { clubId: actor.clubId, role: "coach", status: "active" } });
+  const recipients = chosenCoach
+    ? [chosenCoach]
+    : await User.findAll({ where: { clubId: actor.clubId, role: "coach", status: "active" } });
   for (const coach of recipients) {
     await sendMailSafely({
       to: coach.email,
@@ -239,11 +293,19 @@ export interface AssessmentDetail {
 }
 
 function evidenceSummary(photo: EvidencePhoto): EvidenceSummary {
-  return { id: photo.id, url: `/api/evidence/${photo.id}`, mediaType: photo.mediaType, byteSize: photo.byteSize };
+  return {
+    id: photo.id,
+    url: `/api/evidence/${photo.id}`,
+    mediaType: photo.mediaType,
+    byteSize: photo.byteSize,
+  };
 }
 
 /** Loads an assessment the actor may see (404 otherwise) together with its athlete. */
-async function visibleAssessment(actor: Actor, assessmentId: string): Promise<{ assessment: PracticalAssessment; athlete: User }> {
+async function visibleAssessment(
+  actor: Actor,
+  assessmentId: string,
+): Promise<{ assessment: PracticalAssessment; athlete: User }> {
   const assessment = await PracticalAssessment.findByPk(assessmentId);
   const athlete = assessment ? await User.findByPk(assessment.athleteId) : null;
   assertVisible(!!assessment && !!athlete && canViewAthlete(actor, athlete));
@@ -254,12 +316,17 @@ async function visibleAssessment(actor: Actor, assessmentId: string): Promise<{ 
 export async function assessmentForCoach(actor: Actor, assessmentId: string): Promise<AssessmentDetail> {
   await databaseReady();
   const { assessment, athlete } = await visibleAssessment(actor, assessmentId);
-  assertAllowed(canSignOff(actor, athlete), "Only a coach of the club can assess a practical, and never their own.");
+  assertAllowed(
+    canSignOff(actor, athlete),
+    "Only a coach of the club can assess a practical, and never their own.",
+  );
   const meta = getModule(assessment.moduleSlug)?.meta;
   const [photos, names, best] = await Promise.all([
     EvidencePhoto.findAll({ where: { assessmentId }, order: [["createdAt", "ASC"]] }),
     namesOf([assessment.coachId, assessment.assessorId]),
-    QuizAttempt.max<number | null, QuizAttempt>("score", { where: { userId: athlete.id, moduleSlug: assessment.moduleSlug, submittedAt: { [Op.ne]: null } } }),
+    QuizAttempt.max<number | null, QuizAttempt>("score", {
+      where: { userId: athlete.id, moduleSlug: assessment.moduleSlug, submittedAt: { [Op.ne]: null } },
+    }),
   ]);
   return {
     id: assessment.id,
@@ -290,10 +357,17 @@ export interface RecordedAssessment {
  * the clearance certificate too; the athlete gets them by e-mail. Anything not yet met → the athlete is
  * sent back with the note. Photos uploaded to this sign-off but not kept in the form are deleted.
  */
-export async function recordAssessment(actor: Actor, assessmentId: string, input: unknown): Promise<RecordedAssessment> {
+export async function recordAssessment(
+  actor: Actor,
+  assessmentId: string,
+  input: unknown,
+): Promise<RecordedAssessment> {
   await databaseReady();
   const { assessment: found, athlete } = await visibleAssessment(actor, assessmentId);
-  assertAllowed(canSignOff(actor, athlete), "Only a coach of the club can sign off a practical, and never their own.");
+  assertAllowed(
+    canSignOff(actor, athlete),
+    "Only a coach of the club can sign off a practical, and never their own.",
+  );
   const meta = requireModule(found.moduleSlug);
   const parsed = assessmentSchemaFor(meta.checklist).safeParse(input);
   if (!parsed.success) throw validationErrorFrom(parsed.error);
@@ -312,17 +386,29 @@ export async function recordAssessment(actor: Actor, assessmentId: string, input
     const keep = new Set(parsed.data.evidenceIds);
     for (const id of keep) {
       if (!photos.some((photo) => photo.id === id)) {
-        throw new ValidationError("evidenceIds: a photo does not belong to this sign-off", { evidenceIds: ["a photo does not belong to this sign-off"] });
+        throw new ValidationError("evidenceIds: a photo does not belong to this sign-off", {
+          evidenceIds: ["a photo does not belong to this sign-off"],
+        });
       }
     }
     const dropped = photos.filter((photo) => !keep.has(photo.id));
     for (const photo of dropped) await photo.destroy({ transaction });
     if (outcome === "passed") {
-      const quizPassed = await QuizAttempt.count({ where: { userId: athlete.id, moduleSlug: meta.slug, passed: true }, transaction });
+      const quizPassed = await QuizAttempt.count({
+        where: { userId: athlete.id, moduleSlug: meta.slug, passed: true },
+        transaction,
+      });
       if (quizPassed === 0) throw new ConflictError("The athlete has not passed this module's quiz yet.");
     }
     await assessment.update(
-      { status: outcome, assessorId: actor.id, assessedAt: now, checklist: meta.checklist, verdicts, note: parsed.data.note },
+      {
+        status: outcome,
+        assessorId: actor.id,
+        assessedAt: now,
+        checklist: meta.checklist,
+        verdicts,
+        note: parsed.data.note,
+      },
       { transaction },
     );
     await recordAudit(
@@ -357,33 +443,64 @@ export async function recordAssessment(actor: Actor, assessmentId: string, input
           transaction,
         ),
       );
-      const clearance = await issueClearanceIfNewlyHeld({ context, athlete: { id: athlete.id, name: athlete.name }, signedOffBy, today, now }, transaction);
+      const clearance = await issueClearanceIfNewlyHeld(
+        { context, athlete: { id: athlete.id, name: athlete.name }, signedOffBy, today, now },
+        transaction,
+      );
       if (clearance) certificates.push(clearance);
     }
     return { issued: certificates, discarded: dropped.map((photo) => photo.storedName) };
   });
 
-  await Promise.all(discarded.map((name) => fs.rm(path.join(uploadsDir(), "evidence", name), { force: true })));
-  const mailed = outcome === "passed" ? await mailCertificates(athlete, meta, issued, actor.name) : await mailNotYet(athlete, meta, parsed.data.note, actor.name);
-  return { outcome, certificates: issued.map((certificate) => ({ id: certificate.id, serial: certificate.serial, kind: certificate.kind })), mailed };
+  await Promise.all(
+    discarded.map((name) => fs.rm(path.join(uploadsDir(), "evidence", name), { force: true })),
+  );
+  const mailed =
+    outcome === "passed"
+      ? await mailCertificates(athlete, meta, issued, actor.name)
+      : await mailNotYet(athlete, meta, parsed.data.note, actor.name);
+  return {
+    outcome,
+    certificates: issued.map((certificate) => ({
+      id: certificate.id,
+      serial: certificate.serial,
+      kind: certificate.kind,
+    })),
+    mailed,
+  };
 }
 
-async function mailCertificates(athlete: User, meta: ModuleMeta, certificates: Certificate[], coachName: string): Promise<boolean> {
+async function mailCertificates(
+  athlete: User,
+  meta: ModuleMeta,
+  certificates: Certificate[],
+  coachName: string,
+): Promise<boolean> {
   const attachments = [];
   for (const certificate of certificates) {
-    attachments.push({ filename: certificateFileName(certificate), content: Buffer.from(await renderStoredCertificate(certificate)), contentType: "application/pdf" });
+    attachments.push({
+      filename: certificateFileName(certificate),
+      content: Buffer.from(await renderStoredCertificate(certificate)),
+      contentType: "application/pdf",
+    });
   }
   const clearance = certificates.find((certificate) => certificate.kind === "clearance");
   const moduleCertificate = certificates.find((certificate) => certificate.kind === "module");
   return sendMailSafely({
     to: athlete.email,
-    subject: clearance ? `You may now rig unsupervised: ${meta.title} signed off` : `Signed off: ${meta.title}`,
+    subject: clearance
+      ? `You may now rig unsupervised: ${meta.title} signed off`
+      : `Signed off: ${meta.title}`,
     text: [
       `Hello ${athlete.name},`,
       "",
       `${coachName} watched your practical for "${meta.title}" and signed it off.`,
-      moduleCertificate ? `Your certificate ${moduleCertificate.serial} is attached; it expires on ${formatLongDate(moduleCertificate.expiresOn)}.` : "",
-      moduleCertificate ? `Anyone can check it here: ${verifyUrlFor(moduleCertificate.verificationCode)}` : "",
+      moduleCertificate
+        ? `Your certificate ${moduleCertificate.serial} is attached; it expires on ${formatLongDate(moduleCertificate.expiresOn)}.`
+        : "",
+      moduleCertificate
+        ? `Anyone can check it here: ${verifyUrlFor(moduleCertificate.verificationCode)}`
+        : "",
       ...(clearance
         ? [
             "",
@@ -398,7 +515,12 @@ async function mailCertificates(athlete: User, meta: ModuleMeta, certificates: C
   });
 }
 
-async function mailNotYet(athlete: User, meta: ModuleMeta, note: string, coachName: string): Promise<boolean> {
+async function mailNotYet(
+  athlete: User,
+  meta: ModuleMeta,
+  note: string,
+  coachName: string,
+): Promise<boolean> {
   return sendMailSafely({
     to: athlete.email,
     subject: `Not yet: ${meta.title}`,

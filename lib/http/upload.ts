@@ -45,7 +45,10 @@ export async function readBodyWithin(request: Request, maxBytes: number): Promis
  * The bytes of one file sent as multipart/form-data under `field`, at most `maxBytes`. The file name
  * and type the browser sent are ignored: callers sniff the type from the bytes and choose the name.
  */
-export async function readUploadedFile(request: Request, { maxBytes, field = "file" }: { maxBytes: number; field?: string }): Promise<Uint8Array> {
+export async function readUploadedFile(
+  request: Request,
+  { maxBytes, field = "file" }: { maxBytes: number; field?: string },
+): Promise<Uint8Array> {
   const contentType = request.headers.get("content-type") ?? "";
   if (!contentType.toLowerCase().startsWith("multipart/form-data")) {
     throw new UnsupportedMediaError("Send the file as multipart/form-data.");
@@ -55,18 +58,25 @@ export async function readUploadedFile(request: Request, { maxBytes, field = "fi
   try {
     form = await new Response(body, { headers: { "content-type": contentType } }).formData();
   } catch {
-    throw new ValidationError(`${field}: the upload could not be read`, { [field]: ["the upload could not be read"] });
+    throw new ValidationError(`${field}: the upload could not be read`, {
+      [field]: ["the upload could not be read"],
+    });
   }
   const file = form.get(field);
   if (!(file instanceof Blob) || file.size === 0) {
     throw new ValidationError(`${field}: choose a file`, { [field]: ["choose a file"] });
   }
-  if (file.size > maxBytes) throw new PayloadTooLargeError(`The upload is larger than ${megabytes(maxBytes)}.`);
+  if (file.size > maxBytes)
+    throw new PayloadTooLargeError(`The upload is larger than ${megabytes(maxBytes)}.`);
   return new Uint8Array(await file.arrayBuffer());
 }
 
 /** The image type read from the bytes themselves; 415 unless it is one of `allowed`. */
-export async function sniffImageType<T extends string>(bytes: Uint8Array, allowed: readonly T[], what: string): Promise<T> {
+export async function sniffImageType<T extends string>(
+  bytes: Uint8Array,
+  allowed: readonly T[],
+  what: string,
+): Promise<T> {
   const detected = await fileTypeFromBuffer(bytes);
   const mime = detected?.mime as string | undefined;
   if (!mime || !(allowed as readonly string[]).includes(mime)) {
@@ -82,4 +92,8 @@ function describeTypes(types: readonly string[]): string {
   return names.length > 1 ? `${names.slice(0, -1).join(", ")} or ${names.at(-1)}` : (names[0] ?? "");
 }
 
-export const fileExtensions: Record<string, string> = { "image/jpeg": "jpg", "image/png": "png", "image/webp": "webp" };
+export const fileExtensions: Record<string, string> = {
+  "image/jpeg": "jpg",
+  "image/png": "png",
+  "image/webp": "webp",
+};

@@ -44,7 +44,9 @@ function centred(page: PDFPage, text: string, font: PDFFont, size: number, y: nu
 async function embedLogo(document: PDFDocument, logo: LogoImage | null): Promise<PDFImage | null> {
   if (!logo) return null;
   try {
-    return logo.type === "image/png" ? await document.embedPng(logo.bytes) : await document.embedJpg(logo.bytes);
+    return logo.type === "image/png"
+      ? await document.embedPng(logo.bytes)
+      : await document.embedJpg(logo.bytes);
   } catch {
     // A logo pdf-lib cannot read (e.g. an exotic PNG) must not stop a certificate from being issued.
     return null;
@@ -55,12 +57,16 @@ async function embedLogo(document: PDFDocument, logo: LogoImage | null): Promise
  * Slipway's certificate: one A4 page with the club (and logo), the athlete, what was certified, who
  * signed it off, the dates, the serial, and a QR code to the public verification page.
  */
-export async function renderCertificatePdf(input: CertificatePdfInput, fonts: FontBytes): Promise<Uint8Array> {
+export async function renderCertificatePdf(
+  input: CertificatePdfInput,
+  fonts: FontBytes,
+): Promise<Uint8Array> {
   const document = await PDFDocument.create();
   document.registerFontkit(fontkit);
   const regular = await embedPlainFont(document, fonts.regular);
   const bold = await embedPlainFont(document, fonts.bold);
-  const kindLabel = input.kind === "module" ? "Practical sign-off certificate" : "Rigging clearance certificate";
+  const kindLabel =
+    input.kind === "module" ? "Practical sign-off certificate" : "Rigging clearance certificate";
   document.setTitle(`${kindLabel} ${input.serial}: ${input.athleteName}`);
   document.setAuthor(input.clubName);
   document.setCreator("Slipway");
@@ -75,7 +81,14 @@ export async function renderCertificatePdf(input: CertificatePdfInput, fonts: Fo
   // The slipway motif: a deep band at the top with a thin reed line, and a frame.
   page.drawRectangle({ x: 0, y: height - 18, width, height: 18, color: river });
   page.drawRectangle({ x: 0, y: height - 22, width, height: 2, color: reed });
-  page.drawRectangle({ x: 28, y: 28, width: width - 56, height: height - 72, borderColor: river, borderWidth: 1 });
+  page.drawRectangle({
+    x: 28,
+    y: 28,
+    width: width - 56,
+    height: height - 72,
+    borderColor: river,
+    borderWidth: 1,
+  });
 
   // Club and logo.
   let headerX = left;
@@ -87,8 +100,20 @@ export async function renderCertificatePdf(input: CertificatePdfInput, fonts: Fo
     page.drawImage(logo, { x: left, y: height - 56 - logoHeight, width: logoWidth, height: logoHeight });
     headerX = left + logoWidth + 14;
   }
-  page.drawText(fitText(bold, input.clubName, 16, right - headerX), { x: headerX, y: height - 80, size: 16, font: bold, color: river });
-  page.drawText("Oar rigging and care course", { x: headerX, y: height - 97, size: 10, font: regular, color: muted });
+  page.drawText(fitText(bold, input.clubName, 16, right - headerX), {
+    x: headerX,
+    y: height - 80,
+    size: 16,
+    font: bold,
+    color: river,
+  });
+  page.drawText("Oar rigging and care course", {
+    x: headerX,
+    y: height - 97,
+    size: 10,
+    font: regular,
+    color: muted,
+  });
 
   let y = height - 190;
   centred(page, kindLabel.toUpperCase(), bold, 13, y, river);
@@ -113,7 +138,13 @@ export async function renderCertificatePdf(input: CertificatePdfInput, fonts: Fo
 
   // What was observed (module) or what the clearance stands on (clearance).
   y -= 12;
-  page.drawText(input.kind === "module" ? "Observed and met:" : "Modules:", { x: left + 20, y, size: 10.5, font: bold, color: river });
+  page.drawText(input.kind === "module" ? "Observed and met:" : "Modules:", {
+    x: left + 20,
+    y,
+    size: 10.5,
+    font: bold,
+    color: river,
+  });
   y -= 17;
   for (const item of input.lines.slice(0, 8)) {
     const wrapped = wrapText(regular, item, 10.5, right - left - 60);
@@ -137,32 +168,59 @@ export async function renderCertificatePdf(input: CertificatePdfInput, fonts: Fo
   details.forEach(([label, value], index) => {
     const x = left + (index % 2) * (boxWidth + 12);
     const top = boxTop - Math.floor(index / 2) * 54;
-    page.drawRectangle({ x, y: top - 46, width: boxWidth, height: 46, borderColor: rgb(0.8, 0.84, 0.87), borderWidth: 0.75 });
+    page.drawRectangle({
+      x,
+      y: top - 46,
+      width: boxWidth,
+      height: 46,
+      borderColor: rgb(0.8, 0.84, 0.87),
+      borderWidth: 0.75,
+    });
     page.drawText(label, { x: x + 10, y: top - 16, size: 8.5, font: regular, color: muted });
-    page.drawText(fitText(bold, value, 13, boxWidth - 20), { x: x + 10, y: top - 35, size: 13, font: bold, color: ink });
+    page.drawText(fitText(bold, value, 13, boxWidth - 20), {
+      x: x + 10,
+      y: top - 35,
+      size: 13,
+      font: bold,
+      color: ink,
+    });
   });
 
   // QR code and address of the public check.
-  const qrPng = await QRCode.toBuffer(input.verifyUrl, { type: "png", errorCorrectionLevel: "M", margin: 1, width: 360 });
+  const qrPng = await QRCode.toBuffer(input.verifyUrl, {
+    type: "png",
+    errorCorrectionLevel: "M",
+    margin: 1,
+    width: 360,
+  });
   const qr = await document.embedPng(qrPng);
   const qrSize = 104;
   const qrY = 92;
   page.drawImage(qr, { x: left, y: qrY, width: qrSize, height: qrSize });
   const textX = left + qrSize + 16;
-  page.drawText("Check that this certificate is still valid:", { x: textX, y: qrY + qrSize - 14, size: 10.5, font: bold, color: river });
+  page.drawText("Check that this certificate is still valid:", {
+    x: textX,
+    y: qrY + qrSize - 14,
+    size: 10.5,
+    font: bold,
+    color: river,
+  });
   let urlY = qrY + qrSize - 32;
   for (const line of wrapCharacters(regular, input.verifyUrl, 9.5, right - textX)) {
     page.drawText(line, { x: textX, y: urlY, size: 9.5, font: regular, color: ink });
     urlY -= 13;
   }
-  page.drawText("Scan the code or type the address. The page shows whether it is valid, expired or revoked.", {
-    x: textX,
-    y: urlY - 6,
-    size: 8,
-    font: regular,
-    color: muted,
-    maxWidth: right - textX,
-  });
+  page.drawText(
+    "Scan the code or type the address. The page shows whether it is valid, expired or revoked.",
+    {
+      x: textX,
+      y: urlY - 6,
+      size: 8,
+      font: regular,
+      color: muted,
+      maxWidth: right - textX,
+    },
+  );
 
   const caution =
     "This certificate records what a coach saw on the day. The coach on duty and the club's own rules decide who goes afloat. " +

@@ -52,7 +52,8 @@ const columns: Column[] = [
   { header: "Expires", width: 62, value: (row) => row.expiresOn },
   { header: "Status", width: 56, value: (row) => row.status },
 ];
-const signatureWidth = a4Landscape.width - margin.left - margin.right - columns.reduce((sum, column) => sum + column.width, 0);
+const signatureWidth =
+  a4Landscape.width - margin.left - margin.right - columns.reduce((sum, column) => sum + column.width, 0);
 
 /** Rows that fit on every page under the repeated title block and column header. */
 export const registerRowsPerPage = rowsPerPage({
@@ -66,13 +67,37 @@ export const registerRowsPerPage = rowsPerPage({
 function drawHeader(page: PDFPage, input: RegisterPdfInput, regular: PDFFont, bold: PDFFont): number {
   const { width, height } = a4Landscape;
   let y = height - margin.top - 14;
-  page.drawText(fitText(bold, `${input.clubName}: induction register`, 14, 520), { x: margin.left, y, size: 14, font: bold, color: river });
+  page.drawText(fitText(bold, `${input.clubName}: induction register`, 14, 520), {
+    x: margin.left,
+    y,
+    size: 14,
+    font: bold,
+    color: river,
+  });
   const printed = `Printed ${input.generatedOn}`;
-  page.drawText(printed, { x: width - margin.right - textWidth(regular, printed, 9), y: y + 2, size: 9, font: regular, color: muted });
+  page.drawText(printed, {
+    x: width - margin.right - textWidth(regular, printed, 9),
+    y: y + 2,
+    size: 9,
+    font: regular,
+    color: muted,
+  });
   y -= 16;
-  page.drawText(fitText(regular, input.filterSummary, 9, width - margin.left - margin.right), { x: margin.left, y, size: 9, font: regular, color: muted });
+  page.drawText(fitText(regular, input.filterSummary, 9, width - margin.left - margin.right), {
+    x: margin.left,
+    y,
+    size: 9,
+    font: regular,
+    color: muted,
+  });
   y = height - margin.top - titleBlockHeight;
-  page.drawRectangle({ x: margin.left, y: y - columnHeaderHeight, width: width - margin.left - margin.right, height: columnHeaderHeight, color: river });
+  page.drawRectangle({
+    x: margin.left,
+    y: y - columnHeaderHeight,
+    width: width - margin.left - margin.right,
+    height: columnHeaderHeight,
+    color: river,
+  });
   let x = margin.left;
   for (const column of [...columns, { header: "Signature", width: signatureWidth }]) {
     page.drawText(column.header, { x: x + 4, y: y - 13.5, size: 8.5, font: bold, color: rgb(1, 1, 1) });
@@ -101,18 +126,47 @@ export async function renderRegisterPdf(input: RegisterPdfInput, fonts: FontByte
     const page = document.addPage([a4Landscape.width, a4Landscape.height]);
     let y = drawHeader(page, input, regular, bold);
     if (input.rows.length === 0) {
-      page.drawText("No certificates match these filters.", { x: margin.left + 4, y: y - 15, size: 10, font: regular, color: muted });
+      page.drawText("No certificates match these filters.", {
+        x: margin.left + 4,
+        y: y - 15,
+        size: 10,
+        font: regular,
+        color: muted,
+      });
     }
     for (let index = slice.start; index < slice.end; index += 1) {
       const row = input.rows[index]!;
-      if ((index - slice.start) % 2 === 1) page.drawRectangle({ x: margin.left, y: y - rowHeight, width: tableWidth, height: rowHeight, color: stripe });
+      if ((index - slice.start) % 2 === 1)
+        page.drawRectangle({
+          x: margin.left,
+          y: y - rowHeight,
+          width: tableWidth,
+          height: rowHeight,
+          color: stripe,
+        });
       let x = margin.left;
       for (const column of columns) {
-        page.drawText(fitText(regular, column.value(row), cellSize, column.width - 8), { x: x + 4, y: y - 14.5, size: cellSize, font: regular, color: ink });
+        page.drawText(fitText(regular, column.value(row), cellSize, column.width - 8), {
+          x: x + 4,
+          y: y - 14.5,
+          size: cellSize,
+          font: regular,
+          color: ink,
+        });
         x += column.width;
       }
-      page.drawLine({ start: { x: x + 6, y: y - 16 }, end: { x: x + signatureWidth - 6, y: y - 16 }, thickness: 0.5, color: rule });
-      page.drawLine({ start: { x: margin.left, y: y - rowHeight }, end: { x: margin.left + tableWidth, y: y - rowHeight }, thickness: 0.5, color: rule });
+      page.drawLine({
+        start: { x: x + 6, y: y - 16 },
+        end: { x: x + signatureWidth - 6, y: y - 16 },
+        thickness: 0.5,
+        color: rule,
+      });
+      page.drawLine({
+        start: { x: margin.left, y: y - rowHeight },
+        end: { x: margin.left + tableWidth, y: y - rowHeight },
+        thickness: 0.5,
+        color: rule,
+      });
       y -= rowHeight;
     }
     const label = pageLabel(slice.pageNumber, pages.length);
@@ -123,7 +177,13 @@ export async function renderRegisterPdf(input: RegisterPdfInput, fonts: FontByte
       font: regular,
       color: muted,
     });
-    page.drawText("Signature: the athlete signs on the line to confirm the entry.", { x: margin.left, y: margin.bottom - 20, size: 8, font: regular, color: muted });
+    page.drawText("Signature: the athlete signs on the line to confirm the entry.", {
+      x: margin.left,
+      y: margin.bottom - 20,
+      size: 8,
+      font: regular,
+      color: muted,
+    });
   }
   // objectsPerTick: no pauses for the event loop between objects; a register is written in one go.
   return document.save({ objectsPerTick: Number.POSITIVE_INFINITY });

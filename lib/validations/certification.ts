@@ -24,13 +24,23 @@ export function assessmentSchemaFor(checklist: readonly ChecklistItem[]) {
   return z
     .strictObject({
       items,
-      note: z.string().trim().max(maxNoteLength, { error: `At most ${maxNoteLength} characters` }),
-      evidenceIds: z.array(z.uuid()).max(maxEvidencePhotos, { error: `At most ${maxEvidencePhotos} photos` }).default([]),
+      note: z
+        .string()
+        .trim()
+        .max(maxNoteLength, { error: `At most ${maxNoteLength} characters` }),
+      evidenceIds: z
+        .array(z.uuid())
+        .max(maxEvidencePhotos, { error: `At most ${maxEvidencePhotos} photos` })
+        .default([]),
     })
     .superRefine((value, context) => {
       const verdicts = Object.values(value.items as Record<string, string>);
       if (verdicts.includes("not-yet") && value.note.length < 3) {
-        context.addIssue({ code: "custom", path: ["note"], message: "Say what to practise before the next try" });
+        context.addIssue({
+          code: "custom",
+          path: ["note"],
+          message: "Say what to practise before the next try",
+        });
       }
     });
 }
@@ -72,7 +82,9 @@ export const registerFilterSchema = z.object({
 export type RegisterFilter = z.output<typeof registerFilterSchema>;
 
 /** Plain-object query parameters for the lenient schemas above. */
-export function queryObject(params: URLSearchParams | Record<string, string | string[] | undefined>): Record<string, string> {
+export function queryObject(
+  params: URLSearchParams | Record<string, string | string[] | undefined>,
+): Record<string, string> {
   const entries = params instanceof URLSearchParams ? [...params.entries()] : Object.entries(params);
   const result: Record<string, string> = {};
   for (const [key, value] of entries) {

@@ -18,10 +18,18 @@ const oarLimitsSchema = z
   })
   .superRefine((limits, context) => {
     if (limits.minLengthCm > limits.maxLengthCm) {
-      context.addIssue({ code: "custom", path: ["maxLengthCm"], message: "Must not be below the minimum length" });
+      context.addIssue({
+        code: "custom",
+        path: ["maxLengthCm"],
+        message: "Must not be below the minimum length",
+      });
     }
     if (limits.minInboardCm > limits.maxInboardCm) {
-      context.addIssue({ code: "custom", path: ["maxInboardCm"], message: "Must not be below the minimum inboard" });
+      context.addIssue({
+        code: "custom",
+        path: ["maxInboardCm"],
+        message: "Must not be below the minimum inboard",
+      });
     }
   });
 

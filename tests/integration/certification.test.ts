@@ -72,7 +72,10 @@ function allMet(slug: string): Record<string, "met"> {
 }
 
 function pdfText(bytes: Uint8Array): string {
-  const file = path.join(os.tmpdir(), `slipway-test-${Date.now()}-${Math.random().toString(36).slice(2)}.pdf`);
+  const file = path.join(
+    os.tmpdir(),
+    `slipway-test-${Date.now()}-${Math.random().toString(36).slice(2)}.pdf`,
+  );
   fs.writeFileSync(file, bytes);
   return execFileSync("pdftotext", ["-layout", file, "-"], { encoding: "utf8" });
 }
@@ -82,7 +85,18 @@ function inkedShareOfFirstPage(bytes: Uint8Array): number {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), "slipway-png-"));
   const file = path.join(dir, "in.pdf");
   fs.writeFileSync(file, bytes);
-  execFileSync("pdftoppm", ["-r", "30", "-gray", "-f", "1", "-l", "1", "-singlefile", file, path.join(dir, "page")]);
+  execFileSync("pdftoppm", [
+    "-r",
+    "30",
+    "-gray",
+    "-f",
+    "1",
+    "-l",
+    "1",
+    "-singlefile",
+    file,
+    path.join(dir, "page"),
+  ]);
   const pgm = fs.readFileSync(path.join(dir, "page.pgm"));
   const header = /^P5\s+(\d+)\s+(\d+)\s+255\s/.exec(pgm.subarray(0, 40).toString("latin1"));
   expect(header).not.toBeNull();
@@ -90,21 +104,42 @@ function inkedShareOfFirstPage(bytes: Uint8Array): number {
   let inked = 0;
   for (const value of pixels) if (value < 200) inked += 1;
   // Also render a PNG, as the README promises, so a broken font shows to whoever opens it.
-  execFileSync("pdftoppm", ["-r", "30", "-png", "-f", "1", "-l", "1", "-singlefile", file, path.join(dir, "page")]);
+  execFileSync("pdftoppm", [
+    "-r",
+    "30",
+    "-png",
+    "-f",
+    "1",
+    "-l",
+    "1",
+    "-singlefile",
+    file,
+    path.join(dir, "page"),
+  ]);
   expect(fs.statSync(path.join(dir, "page.png")).size).toBeGreaterThan(1000);
   return inked / pixels.length;
 }
 
 function multipart(bytes: Buffer | string, fileName: string, type: string): { body: FormData } {
   const form = new FormData();
-  form.append("file", new File([typeof bytes === "string" ? bytes : new Uint8Array(bytes)], fileName, { type }));
+  form.append(
+    "file",
+    new File([typeof bytes === "string" ? bytes : new Uint8Array(bytes)], fileName, { type }),
+  );
   return { body: form };
 }
 
 async function signOffAll(athlete: Actor, coach: Actor, slug: string, evidenceIds: string[] = []) {
   session.actor = athlete;
   const { assessmentId } = await signOffs.requestSignOff(athlete, { moduleSlug: slug, coachId: null });
-  return { assessmentId, recorded: await signOffs.recordAssessment(coach, assessmentId, { items: allMet(slug), note: "Tidy and careful.", evidenceIds }) };
+  return {
+    assessmentId,
+    recorded: await signOffs.recordAssessment(coach, assessmentId, {
+      items: allMet(slug),
+      note: "Tidy and careful.",
+      evidenceIds,
+    }),
+  };
 }
 
 let admin: Actor;
@@ -121,8 +156,14 @@ beforeAll(async () => {
   carys = await actorFor("carys@lantern-reach.example");
   dev = await actorFor("dev@lantern-reach.example");
   const other = await writeTransaction(async (transaction) => {
-    const club = await Club.create({ name: "Heron Bend Sculling Club", slug: "heron-bend", settings: {} }, { transaction });
-    return User.create({ clubId: club.id, email: "coach@heron-bend.example", name: "Other Coach", role: "coach" }, { transaction });
+    const club = await Club.create(
+      { name: "Heron Bend Sculling Club", slug: "heron-bend", settings: {} },
+      { transaction },
+    );
+    return User.create(
+      { clubId: club.id, email: "coach@heron-bend.example", name: "Other Coach", role: "coach" },
+      { transaction },
+    );
   });
   foreignCoach = { id: other.id, clubId: other.clubId, role: "coach", name: other.name, email: other.email };
 });
@@ -135,20 +176,33 @@ describe("practical sign-off", () => {
   let assessmentId = "";
 
   it("is refused before the module's quiz is passed", async () => {
-    await expect(signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: null })).rejects.toBeInstanceOf(ConflictError);
-    await expect(signOffs.requestSignOff(carys, { moduleSlug: "no-such-module", coachId: null })).rejects.toBeInstanceOf(NotFoundError);
+    await expect(
+      signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: null }),
+    ).rejects.toBeInstanceOf(ConflictError);
+    await expect(
+      signOffs.requestSignOff(carys, { moduleSlug: "no-such-module", coachId: null }),
+    ).rejects.toBeInstanceOf(NotFoundError);
   });
 
   it("is asked for after the quiz, mails the chosen coach and appears in the queue", async () => {
     await passQuiz(carys, "overall-length");
-    await expect(signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: dev.id })).rejects.toBeInstanceOf(ValidationError);
-    ({ assessmentId } = await signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: coach.id }));
-    await expect(signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: null })).rejects.toThrow(/already asked/);
+    await expect(
+      signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: dev.id }),
+    ).rejects.toBeInstanceOf(ValidationError);
+    ({ assessmentId } = await signOffs.requestSignOff(carys, {
+      moduleSlug: "overall-length",
+      coachId: coach.id,
+    }));
+    await expect(
+      signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: null }),
+    ).rejects.toThrow(/already asked/);
     const [mail] = await listOutbox();
     expect(mail?.to).toBe(coach.email);
     expect(mail?.text).toContain(`/roster/sign-offs/${assessmentId}`);
     const queue = await signOffs.signOffQueue(coach);
-    expect(queue).toEqual([expect.objectContaining({ id: assessmentId, athleteName: "Carys Penhallow", forMe: true })]);
+    expect(queue).toEqual([
+      expect.objectContaining({ id: assessmentId, athleteName: "Carys Penhallow", forMe: true }),
+    ]);
     const ines = await actorFor("coach.ines@lantern-reach.example");
     expect((await signOffs.signOffQueue(ines))[0]?.forMe).toBe(false);
     expect((await signOffs.practicalViewFor(carys, "overall-length")).status).toBe("waiting-for-sign-off");
@@ -156,40 +210,74 @@ describe("practical sign-off", () => {
 
   it("can only be assessed by a coach of the athlete's club", async () => {
     const input = { items: allMet("overall-length"), note: "" };
-    await expect(signOffs.recordAssessment(carys, assessmentId, input)).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(signOffs.recordAssessment(carys, assessmentId, input)).rejects.toBeInstanceOf(
+      ForbiddenError,
+    );
     await expect(signOffs.recordAssessment(dev, assessmentId, input)).rejects.toBeInstanceOf(NotFoundError);
-    await expect(signOffs.recordAssessment(foreignCoach, assessmentId, input)).rejects.toBeInstanceOf(NotFoundError);
-    await expect(signOffs.assessmentForCoach(foreignCoach, assessmentId)).rejects.toBeInstanceOf(NotFoundError);
+    await expect(signOffs.recordAssessment(foreignCoach, assessmentId, input)).rejects.toBeInstanceOf(
+      NotFoundError,
+    );
+    await expect(signOffs.assessmentForCoach(foreignCoach, assessmentId)).rejects.toBeInstanceOf(
+      NotFoundError,
+    );
     await expect(signOffs.signOffQueue(carys)).rejects.toBeInstanceOf(ForbiddenError);
   });
 
   it("checks the form on the server with the module's checklist", async () => {
-    await expect(signOffs.recordAssessment(coach, assessmentId, { items: { "measures-tip-to-end": "met" }, note: "" })).rejects.toBeInstanceOf(ValidationError);
-    const items = { ...allMet("overall-length"), "moves-handle": "not-yet" };
-    await expect(signOffs.recordAssessment(coach, assessmentId, { items, note: "" })).rejects.toThrow(/practise/);
     await expect(
-      signOffs.recordAssessment(coach, assessmentId, { items: allMet("overall-length"), note: "", evidenceIds: ["8c0a3f8e-6b0e-4d0a-9c55-2f1f1d7f6a11"] }),
+      signOffs.recordAssessment(coach, assessmentId, { items: { "measures-tip-to-end": "met" }, note: "" }),
+    ).rejects.toBeInstanceOf(ValidationError);
+    const items = { ...allMet("overall-length"), "moves-handle": "not-yet" };
+    await expect(signOffs.recordAssessment(coach, assessmentId, { items, note: "" })).rejects.toThrow(
+      /practise/,
+    );
+    await expect(
+      signOffs.recordAssessment(coach, assessmentId, {
+        items: allMet("overall-length"),
+        note: "",
+        evidenceIds: ["8c0a3f8e-6b0e-4d0a-9c55-2f1f1d7f6a11"],
+      }),
     ).rejects.toThrow(/does not belong/);
   });
 
   it("'not yet' sends the athlete back with the note, by e-mail and on their page", async () => {
     const items = { ...allMet("overall-length"), "moves-handle": "not-yet" };
-    const recorded = await signOffs.recordAssessment(coach, assessmentId, { items, note: "Loosen the handle clamp fully before sliding it." });
+    const recorded = await signOffs.recordAssessment(coach, assessmentId, {
+      items,
+      note: "Loosen the handle clamp fully before sliding it.",
+    });
     expect(recorded).toMatchObject({ outcome: "not-yet", certificates: [], mailed: true });
-    await expect(signOffs.recordAssessment(coach, assessmentId, { items: allMet("overall-length"), note: "" })).rejects.toBeInstanceOf(ConflictError);
+    await expect(
+      signOffs.recordAssessment(coach, assessmentId, { items: allMet("overall-length"), note: "" }),
+    ).rejects.toBeInstanceOf(ConflictError);
     const view = await signOffs.practicalViewFor(carys, "overall-length");
-    expect(view).toMatchObject({ status: "not-yet", requestProblem: null, latestDecision: { outcome: "not-yet", note: "Loosen the handle clamp fully before sliding it." } });
+    expect(view).toMatchObject({
+      status: "not-yet",
+      requestProblem: null,
+      latestDecision: { outcome: "not-yet", note: "Loosen the handle clamp fully before sliding it." },
+    });
     const [mail] = await listOutbox();
-    expect(mail).toMatchObject({ to: carys.email, subject: "Not yet: Measuring and setting the overall length" });
+    expect(mail).toMatchObject({
+      to: carys.email,
+      subject: "Not yet: Measuring and setting the overall length",
+    });
     expect(mail?.text).toContain("Loosen the handle clamp fully");
   });
 
   it("all items met passes the module and issues a numbered certificate, mailed as a PDF", async () => {
     session.actor = carys;
-    ({ assessmentId } = await signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: null }));
-    const recorded = await signOffs.recordAssessment(coach, assessmentId, { items: allMet("overall-length"), note: "Careful and quick." });
+    ({ assessmentId } = await signOffs.requestSignOff(carys, {
+      moduleSlug: "overall-length",
+      coachId: null,
+    }));
+    const recorded = await signOffs.recordAssessment(coach, assessmentId, {
+      items: allMet("overall-length"),
+      note: "Careful and quick.",
+    });
     expect(recorded.outcome).toBe("passed");
-    expect(recorded.certificates).toEqual([expect.objectContaining({ kind: "module", serial: `LR-${year}-0001` })]);
+    expect(recorded.certificates).toEqual([
+      expect.objectContaining({ kind: "module", serial: `LR-${year}-0001` }),
+    ]);
     const view = await signOffs.practicalViewFor(carys, "overall-length");
     expect(view.status).toBe("passed");
     expect(view.currentPass).toEqual({ signedOffOn: today, expiresOn: passExpiresOn(today, 12) });
@@ -203,7 +291,9 @@ describe("practical sign-off", () => {
     await passQuiz(carys, "setting-inboard");
     const { recorded } = await signOffAll(carys, coach, "setting-inboard");
     expect(recorded.certificates.map((entry) => entry.serial)).toEqual([`LR-${year}-0002`]);
-    const serials = (await Certificate.findAll({ where: { clubId: carys.clubId } })).map((entry) => entry.serialNumber);
+    const serials = (await Certificate.findAll({ where: { clubId: carys.clubId } })).map(
+      (entry) => entry.serialNumber,
+    );
     expect(new Set(serials).size).toBe(serials.length);
   });
 });
@@ -241,10 +331,17 @@ describe("clearance, suspension, revocation and verification", () => {
     const row = matrix.athletes.find((entry) => entry.id === carys.id)!;
     expect(row.clearance.state).toBe("cleared");
     expect(rosterRowMatches(row, "cleared", "car", matrix.today)).toBe(true);
-    expect(matrix.athletes.filter((entry) => rosterRowMatches(entry, "cleared", "", matrix.today)).map((entry) => entry.name)).toEqual(["Carys Penhallow"]);
+    expect(
+      matrix.athletes
+        .filter((entry) => rosterRowMatches(entry, "cleared", "", matrix.today))
+        .map((entry) => entry.name),
+    ).toEqual(["Carys Penhallow"]);
     await expect(clearance.rosterMatrix(carys)).rejects.toBeInstanceOf(ForbiddenError);
     session.actor = coach;
-    const response = await matrixExportRoute.GET(new Request("http://test/api/roster/matrix/export?filter=cleared"), undefined);
+    const response = await matrixExportRoute.GET(
+      new Request("http://test/api/roster/matrix/export?filter=cleared"),
+      undefined,
+    );
     expect(response.status).toBe(200);
     const csv = await response.text();
     expect(csv.split("\r\n")).toHaveLength(2);
@@ -253,9 +350,15 @@ describe("clearance, suspension, revocation and verification", () => {
   });
 
   it("is suspended and lifted by a coach with a reason, audited", async () => {
-    await expect(clearance.suspendClearance(carys, carys.id, "Not allowed")).rejects.toBeInstanceOf(ForbiddenError);
-    await expect(clearance.suspendClearance(dev, carys.id, "Not allowed")).rejects.toBeInstanceOf(NotFoundError);
-    await expect(clearance.suspendClearance(foreignCoach, carys.id, "Not allowed")).rejects.toBeInstanceOf(NotFoundError);
+    await expect(clearance.suspendClearance(carys, carys.id, "Not allowed")).rejects.toBeInstanceOf(
+      ForbiddenError,
+    );
+    await expect(clearance.suspendClearance(dev, carys.id, "Not allowed")).rejects.toBeInstanceOf(
+      NotFoundError,
+    );
+    await expect(clearance.suspendClearance(foreignCoach, carys.id, "Not allowed")).rejects.toBeInstanceOf(
+      NotFoundError,
+    );
     await clearance.suspendClearance(coach, carys.id, "Collar found loose at launch");
     await expect(clearance.suspendClearance(coach, carys.id, "again")).rejects.toBeInstanceOf(ConflictError);
     expect((await clearance.clearanceOf(coach, carys.id)).standing.clearance.state).toBe("suspended");
@@ -263,32 +366,58 @@ describe("clearance, suspension, revocation and verification", () => {
     await clearance.liftSuspension(coach, carys.id, "Re-checked with her at the rack");
     expect((await clearance.clearanceOf(coach, carys.id)).standing.clearance.state).toBe("cleared");
     expect((await certificates.verifyCode(clearanceCode))?.status).toBe("valid");
-    expect(await AuditEvent.count({ where: { action: ["clearance.suspended", "clearance.lifted"] } })).toBe(2);
+    expect(await AuditEvent.count({ where: { action: ["clearance.suspended", "clearance.lifted"] } })).toBe(
+      2,
+    );
   });
 
   it("verifies a code publicly with only name, module and dates; unknown codes are just not found", async () => {
     const verification = await certificates.verifyCode(moduleCode);
-    expect(verification).toMatchObject({ status: "valid", athleteName: "Carys Penhallow", title: "Measuring and setting the overall length", issuedOn: today });
-    expect(await certificates.verifyCode(`${moduleCode.slice(0, -1)}${moduleCode.endsWith("A") ? "B" : "A"}`)).toBeNull();
+    expect(verification).toMatchObject({
+      status: "valid",
+      athleteName: "Carys Penhallow",
+      title: "Measuring and setting the overall length",
+      issuedOn: today,
+    });
+    expect(
+      await certificates.verifyCode(`${moduleCode.slice(0, -1)}${moduleCode.endsWith("A") ? "B" : "A"}`),
+    ).toBeNull();
     expect(await certificates.verifyCode("../../etc/passwd")).toBeNull();
-    const response = await verifyRoute.GET(new Request(`http://test/api/verify/${moduleCode}`), { params: Promise.resolve({ code: moduleCode }) });
+    const response = await verifyRoute.GET(new Request(`http://test/api/verify/${moduleCode}`), {
+      params: Promise.resolve({ code: moduleCode }),
+    });
     const badge = (await response.json()) as Record<string, unknown>;
-    expect(badge).toMatchObject({ type: ["VerifiableCredential", "OpenBadgeCredential"], validFrom: `${today}T00:00:00Z` });
+    expect(badge).toMatchObject({
+      type: ["VerifiableCredential", "OpenBadgeCredential"],
+      validFrom: `${today}T00:00:00Z`,
+    });
     expect((badge["@context"] as string[])[0]).toBe("https://www.w3.org/ns/credentials/v2");
-    const unknown = await verifyRoute.GET(new Request("http://test/api/verify/x"), { params: Promise.resolve({ code: "AAAAAAAAAAAAAAAAAAAAAAAA" }) });
+    const unknown = await verifyRoute.GET(new Request("http://test/api/verify/x"), {
+      params: Promise.resolve({ code: "AAAAAAAAAAAAAAAAAAAAAAAA" }),
+    });
     expect(unknown.status).toBe(404);
   });
 
   it("lets only admins revoke, and a revoked module certificate takes the clearance certificate with it", async () => {
-    await expect(certificates.revokeCertificate(coach, moduleCertificateId, "Issued in error")).rejects.toBeInstanceOf(ForbiddenError);
-    const result = await certificates.revokeCertificate(admin, moduleCertificateId, "Signed off on the wrong athlete");
+    await expect(
+      certificates.revokeCertificate(coach, moduleCertificateId, "Issued in error"),
+    ).rejects.toBeInstanceOf(ForbiddenError);
+    const result = await certificates.revokeCertificate(
+      admin,
+      moduleCertificateId,
+      "Signed off on the wrong athlete",
+    );
     expect(result.revoked).toHaveLength(2);
     expect((await certificates.verifyCode(moduleCode))?.status).toBe("revoked");
     expect((await certificates.verifyCode(clearanceCode))?.status).toBe("revoked");
-    await expect(certificates.revokeCertificate(admin, moduleCertificateId, "again")).rejects.toBeInstanceOf(ConflictError);
+    await expect(certificates.revokeCertificate(admin, moduleCertificateId, "again")).rejects.toBeInstanceOf(
+      ConflictError,
+    );
     const standing = (await clearance.clearanceOf(carys)).standing;
     expect(standing.clearance.state).toBe("not-cleared");
-    expect(standing.modules.find((entry) => entry.slug === "overall-length")?.status).toBe("ready-for-sign-off");
+    expect(standing.modules.find((entry) => entry.slug === "overall-length")?.status).toBe(
+      "ready-for-sign-off",
+    );
   });
 });
 
@@ -297,7 +426,9 @@ describe("certificate and register PDFs", () => {
     const mine = await certificates.certificatesOfAthlete(carys, carys.id);
     const entry = mine.find((certificate) => certificate.serial === `LR-${year}-0002`)!;
     session.actor = carys;
-    const response = await pdfRoute.GET(new Request("http://test"), { params: Promise.resolve({ id: entry.id }) });
+    const response = await pdfRoute.GET(new Request("http://test"), {
+      params: Promise.resolve({ id: entry.id }),
+    });
     expect(response.status).toBe(200);
     expect(response.headers.get("content-type")).toBe("application/pdf");
     expect(response.headers.get("content-disposition")).toContain(`slipway-certificate-LR-${year}-0002.pdf`);
@@ -307,7 +438,14 @@ describe("certificate and register PDFs", () => {
     const { width, height } = document.getPage(0).getSize();
     expect([Math.round(width), Math.round(height)]).toEqual([595, 842]);
     const text = pdfText(bytes);
-    for (const expected of ["Carys Penhallow", "Setting the inboard with the collar", `LR-${year}-0002`, entry.verifyUrl, "Tobias Lindqvist", "Lantern Reach Rowing Club"]) {
+    for (const expected of [
+      "Carys Penhallow",
+      "Setting the inboard with the collar",
+      `LR-${year}-0002`,
+      entry.verifyUrl,
+      "Tobias Lindqvist",
+      "Lantern Reach Rowing Club",
+    ]) {
       expect(text).toContain(expected);
     }
     expect(inkedShareOfFirstPage(bytes)).toBeGreaterThan(0.02);
@@ -316,23 +454,55 @@ describe("certificate and register PDFs", () => {
   it("answers 404 for another athlete's certificate", async () => {
     const mine = await certificates.certificatesOfAthlete(carys, carys.id);
     session.actor = dev;
-    const response = await pdfRoute.GET(new Request("http://test"), { params: Promise.resolve({ id: mine[0]!.id }) });
+    const response = await pdfRoute.GET(new Request("http://test"), {
+      params: Promise.resolve({ id: mine[0]!.id }),
+    });
     expect(response.status).toBe(404);
     await expect(certificates.certificatesOfAthlete(dev, carys.id)).rejects.toBeInstanceOf(NotFoundError);
   });
 
   it("lists the register for admins only, filtered by module and status", async () => {
-    await expect(register.registerFor(coach, { module: "", kind: "all", status: "all", from: "", to: "" })).rejects.toBeInstanceOf(ForbiddenError);
-    const all = await register.registerFor(admin, { module: "", kind: "all", status: "all", from: "", to: "" });
-    expect(all.entries.map((entry) => entry.serial)).toEqual(Array.from({ length: 6 }, (_, index) => `LR-${year}-000${index + 1}`));
-    const revoked = await register.registerFor(admin, { module: "", kind: "all", status: "revoked", from: "", to: "" });
+    await expect(
+      register.registerFor(coach, { module: "", kind: "all", status: "all", from: "", to: "" }),
+    ).rejects.toBeInstanceOf(ForbiddenError);
+    const all = await register.registerFor(admin, {
+      module: "",
+      kind: "all",
+      status: "all",
+      from: "",
+      to: "",
+    });
+    expect(all.entries.map((entry) => entry.serial)).toEqual(
+      Array.from({ length: 6 }, (_, index) => `LR-${year}-000${index + 1}`),
+    );
+    const revoked = await register.registerFor(admin, {
+      module: "",
+      kind: "all",
+      status: "revoked",
+      from: "",
+      to: "",
+    });
     expect(revoked.entries).toHaveLength(2);
-    const inboard = await register.registerFor(admin, { module: "setting-inboard", kind: "all", status: "all", from: "", to: "" });
+    const inboard = await register.registerFor(admin, {
+      module: "setting-inboard",
+      kind: "all",
+      status: "all",
+      from: "",
+      to: "",
+    });
     expect(inboard.entries.map((entry) => entry.title)).toEqual(["Setting the inboard with the collar"]);
-    const future = await register.registerFor(admin, { module: "", kind: "all", status: "all", from: `${year + 1}-01-01`, to: "" });
+    const future = await register.registerFor(admin, {
+      module: "",
+      kind: "all",
+      status: "all",
+      from: `${year + 1}-01-01`,
+      to: "",
+    });
     expect(future.entries).toHaveLength(0);
     const csv = register.registerCsv(all);
-    expect(csv.split("\r\n")[0]).toBe("Serial,Kind,Athlete,Certificate,Signed off by,Issued,Expires,Status,Revocation reason,Verification address");
+    expect(csv.split("\r\n")[0]).toBe(
+      "Serial,Kind,Athlete,Certificate,Signed off by,Issued,Expires,Status,Revocation reason,Verification address",
+    );
     const bytes = await register.registerPdf(all);
     const text = pdfText(bytes);
     expect(text).toContain("Page 1 of 1");
@@ -352,7 +522,10 @@ describe("certificate and register PDFs", () => {
       status: "Valid",
     }));
     const started = performance.now();
-    const bytes = await renderRegisterPdf({ clubName: "Lantern Reach Rowing Club", filterSummary: "All modules", generatedOn: today, rows }, fonts);
+    const bytes = await renderRegisterPdf(
+      { clubName: "Lantern Reach Rowing Club", filterSummary: "All modules", generatedOn: today, rows },
+      fonts,
+    );
     const elapsedMs = performance.now() - started;
     expect(elapsedMs).toBeLessThan(2000);
     const document = await PDFDocument.load(bytes);
@@ -395,7 +568,10 @@ describe("upload route handlers", () => {
     });
     const request = new Request("http://test/upload", {
       method: "POST",
-      headers: { "content-type": "multipart/form-data; boundary=x", "content-length": String(9 * 1024 * 1024) },
+      headers: {
+        "content-type": "multipart/form-data; boundary=x",
+        "content-length": String(9 * 1024 * 1024),
+      },
       body,
       duplex: "half",
     } as RequestInit);
@@ -430,24 +606,64 @@ describe("upload route handlers", () => {
 
   it("refuses bytes that are not an image even with an image name and type (415)", async () => {
     session.actor = coach;
-    const response = await evidenceRoute.POST(new Request("http://test/upload", { method: "POST", ...multipart("just some text, honestly", "photo.jpg", "image/jpeg") }), context());
+    const response = await evidenceRoute.POST(
+      new Request("http://test/upload", {
+        method: "POST",
+        ...multipart("just some text, honestly", "photo.jpg", "image/jpeg"),
+      }),
+      context(),
+    );
     expect(response.status).toBe(415);
     const gif = Buffer.from("R0lGODlhAQABAAAAACw=", "base64");
-    expect((await evidenceRoute.POST(new Request("http://test/upload", { method: "POST", ...multipart(gif, "photo.png", "image/png") }), context())).status).toBe(415);
+    expect(
+      (
+        await evidenceRoute.POST(
+          new Request("http://test/upload", { method: "POST", ...multipart(gif, "photo.png", "image/png") }),
+          context(),
+        )
+      ).status,
+    ).toBe(415);
   });
 
   it("refuses athletes and other clubs' coaches before reading", async () => {
     session.actor = dev;
-    expect((await evidenceRoute.POST(new Request("http://test/upload", { method: "POST", ...multipart(tinyPng, "a.png", "image/png") }), context())).status).toBe(403);
+    expect(
+      (
+        await evidenceRoute.POST(
+          new Request("http://test/upload", { method: "POST", ...multipart(tinyPng, "a.png", "image/png") }),
+          context(),
+        )
+      ).status,
+    ).toBe(403);
     session.actor = foreignCoach;
-    expect((await evidenceRoute.POST(new Request("http://test/upload", { method: "POST", ...multipart(tinyPng, "a.png", "image/png") }), context())).status).toBe(404);
+    expect(
+      (
+        await evidenceRoute.POST(
+          new Request("http://test/upload", { method: "POST", ...multipart(tinyPng, "a.png", "image/png") }),
+          context(),
+        )
+      ).status,
+    ).toBe(404);
     session.actor = null;
-    expect((await evidenceRoute.POST(new Request("http://test/upload", { method: "POST", ...multipart(tinyPng, "a.png", "image/png") }), context())).status).toBe(401);
+    expect(
+      (
+        await evidenceRoute.POST(
+          new Request("http://test/upload", { method: "POST", ...multipart(tinyPng, "a.png", "image/png") }),
+          context(),
+        )
+      ).status,
+    ).toBe(401);
   });
 
   it("stores an image under a random name, serves it to the athlete and coaches, and 404s other athletes", async () => {
     session.actor = coach;
-    const response = await evidenceRoute.POST(new Request("http://test/upload", { method: "POST", ...multipart(tinyPng, "../../../evil name.png", "text/plain") }), context());
+    const response = await evidenceRoute.POST(
+      new Request("http://test/upload", {
+        method: "POST",
+        ...multipart(tinyPng, "../../../evil name.png", "text/plain"),
+      }),
+      context(),
+    );
     expect(response.status).toBe(201);
     const { id, url } = (await response.json()) as { id: string; url: string };
     expect(url).toBe(`/api/evidence/${id}`);
@@ -465,26 +681,66 @@ describe("upload route handlers", () => {
     expect(own.headers.get("content-disposition")).toMatch(/^inline; filename="evidence-[0-9a-f-]+\.png"$/);
     expect(Buffer.from(await own.arrayBuffer()).equals(tinyPng)).toBe(true);
     session.actor = admin;
-    expect((await evidenceFileRoute.GET(new Request("http://test"), { params: Promise.resolve({ id }) })).status).toBe(200);
+    expect(
+      (await evidenceFileRoute.GET(new Request("http://test"), { params: Promise.resolve({ id }) })).status,
+    ).toBe(200);
     session.actor = carys;
-    expect((await evidenceFileRoute.GET(new Request("http://test"), { params: Promise.resolve({ id }) })).status).toBe(404);
+    expect(
+      (await evidenceFileRoute.GET(new Request("http://test"), { params: Promise.resolve({ id }) })).status,
+    ).toBe(404);
     session.actor = foreignCoach;
-    expect((await evidenceFileRoute.GET(new Request("http://test"), { params: Promise.resolve({ id }) })).status).toBe(404);
+    expect(
+      (await evidenceFileRoute.GET(new Request("http://test"), { params: Promise.resolve({ id }) })).status,
+    ).toBe(404);
 
-    const recorded = await signOffs.recordAssessment(coach, assessmentId, { items: allMet("overall-length"), note: "", evidenceIds: [id] });
+    const recorded = await signOffs.recordAssessment(coach, assessmentId, {
+      items: allMet("overall-length"),
+      note: "",
+      evidenceIds: [id],
+    });
     expect(recorded.outcome).toBe("passed");
-    expect((await signOffs.assessmentForCoach(coach, assessmentId)).photos.map((photo) => photo.id)).toEqual([id]);
+    expect((await signOffs.assessmentForCoach(coach, assessmentId)).photos.map((photo) => photo.id)).toEqual([
+      id,
+    ]);
   });
 
   it("accepts a PNG or JPEG club logo up to 2 MB from admins only, and puts it on certificates", async () => {
     session.actor = coach;
-    expect((await logoRoute.POST(new Request("http://test/logo", { method: "POST", ...multipart(tinyPng, "logo.png", "image/png") }), undefined)).status).toBe(403);
+    expect(
+      (
+        await logoRoute.POST(
+          new Request("http://test/logo", { method: "POST", ...multipart(tinyPng, "logo.png", "image/png") }),
+          undefined,
+        )
+      ).status,
+    ).toBe(403);
     session.actor = admin;
     const webp = Buffer.from("UklGRhoAAABXRUJQVlA4TA0AAAAvAAAAEAcQERGIiP4HAA==", "base64");
-    expect((await logoRoute.POST(new Request("http://test/logo", { method: "POST", ...multipart(webp, "logo.png", "image/png") }), undefined)).status).toBe(415);
-    const huge = new Request("http://test/logo", { method: "POST", headers: { "content-type": "multipart/form-data; boundary=x", "content-length": String(3 * 1024 * 1024) }, body: "x" });
+    expect(
+      (
+        await logoRoute.POST(
+          new Request("http://test/logo", { method: "POST", ...multipart(webp, "logo.png", "image/png") }),
+          undefined,
+        )
+      ).status,
+    ).toBe(415);
+    const huge = new Request("http://test/logo", {
+      method: "POST",
+      headers: {
+        "content-type": "multipart/form-data; boundary=x",
+        "content-length": String(3 * 1024 * 1024),
+      },
+      body: "x",
+    });
     expect((await logoRoute.POST(huge, undefined)).status).toBe(413);
-    expect((await logoRoute.POST(new Request("http://test/logo", { method: "POST", ...multipart(tinyPng, "logo.png", "image/png") }), undefined)).status).toBe(201);
+    expect(
+      (
+        await logoRoute.POST(
+          new Request("http://test/logo", { method: "POST", ...multipart(tinyPng, "logo.png", "image/png") }),
+          undefined,
+        )
+      ).status,
+    ).toBe(201);
     const club = await Club.findByPk(admin.clubId);
     expect(club?.logoFile).toMatch(/^logo-[0-9a-f-]{36}\.png$/);
     const { readClubLogo } = await import("@/lib/data/club-logo");

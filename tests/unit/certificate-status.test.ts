@@ -10,8 +10,12 @@ describe("certificate status", () => {
     expect(certificateStatus(moduleCertificate, "2027-03-14", false)).toBe("expired");
     expect(certificateStatus({ ...moduleCertificate, revoked: true }, "2026-01-01", false)).toBe("revoked");
     expect(certificateStatus(moduleCertificate, "2026-06-01", true)).toBe("valid");
-    expect(certificateStatus({ ...moduleCertificate, kind: "clearance" }, "2026-06-01", true)).toBe("suspended");
-    expect(certificateStatus({ ...moduleCertificate, kind: "clearance", revoked: true }, "2026-06-01", true)).toBe("revoked");
+    expect(certificateStatus({ ...moduleCertificate, kind: "clearance" }, "2026-06-01", true)).toBe(
+      "suspended",
+    );
+    expect(
+      certificateStatus({ ...moduleCertificate, kind: "clearance", revoked: true }, "2026-06-01", true),
+    ).toBe("revoked");
   });
 });
 
@@ -41,7 +45,11 @@ describe("Open Badges 3.0 credential", () => {
       validUntil: "2027-03-14T00:00:00Z",
       credentialSubject: {
         type: ["AchievementSubject"],
-        achievement: { type: ["Achievement"], name: "Setting the inboard with the collar", criteria: { narrative: expect.any(String) } },
+        achievement: {
+          type: ["Achievement"],
+          name: "Setting the inboard with the collar",
+          criteria: { narrative: expect.any(String) },
+        },
       },
     });
   });
@@ -62,7 +70,14 @@ describe("roster filters", () => {
     expect(rosterRowMatches(row({}), "cleared", "ines", "2026-06-01")).toBe(true);
     expect(rosterRowMatches(row({}), "expiring-soon", "", "2026-06-01")).toBe(true);
     expect(rosterRowMatches(row({}), "expiring-soon", "", "2026-05-31")).toBe(false);
-    expect(rosterRowMatches(row({ clearance: { state: "suspended", expiresOn: null, suspendedReason: "x" } }), "not-cleared", "", "2026-06-01")).toBe(true);
+    expect(
+      rosterRowMatches(
+        row({ clearance: { state: "suspended", expiresOn: null, suspendedReason: "x" } }),
+        "not-cleared",
+        "",
+        "2026-06-01",
+      ),
+    ).toBe(true);
     expect(rosterRowMatches(row({ waitingForMe: 1 }), "waiting-for-me", "BARR", "2026-06-01")).toBe(true);
     expect(rosterRowMatches(row({}), "waiting-for-me", "", "2026-06-01")).toBe(false);
     expect(rosterRowMatches(row({}), "all", "nobody", "2026-06-01")).toBe(false);

@@ -53,7 +53,11 @@ describe("a module pass", () => {
   });
 
   it("keeps the longest-lasting pass of each module", () => {
-    const latest = latestPasses([pass("overall-length", "2025-01-01"), pass("overall-length", "2026-02-01"), pass("setting-inboard", "2025-06-01")]);
+    const latest = latestPasses([
+      pass("overall-length", "2025-01-01"),
+      pass("overall-length", "2026-02-01"),
+      pass("setting-inboard", "2025-06-01"),
+    ]);
     expect(latest.get("overall-length")?.signedOffOn).toBe("2026-02-01");
     expect(latest.get("setting-inboard")?.signedOffOn).toBe("2025-06-01");
   });
@@ -63,14 +67,37 @@ describe("clearance to rig unsupervised", () => {
   const passes = [pass("overall-length", "2026-03-14"), pass("setting-inboard", "2026-05-02")];
 
   it("holds when every required module has a current pass, and expires with the first pass to run out", () => {
-    const clearance = clearanceFor({ requiredModules: required, passes, suspension: null, today: "2026-06-01" });
-    expect(clearance).toMatchObject({ state: "cleared", cleared: true, expiresOn: "2027-03-14", missingModules: [], expiredModules: [] });
+    const clearance = clearanceFor({
+      requiredModules: required,
+      passes,
+      suspension: null,
+      today: "2026-06-01",
+    });
+    expect(clearance).toMatchObject({
+      state: "cleared",
+      cleared: true,
+      expiresOn: "2027-03-14",
+      missingModules: [],
+      expiredModules: [],
+    });
   });
 
   it("holds on the day before the first expiry and not on the expiry day itself", () => {
-    expect(clearanceFor({ requiredModules: required, passes, suspension: null, today: "2027-03-13" }).cleared).toBe(true);
-    const onTheDay = clearanceFor({ requiredModules: required, passes, suspension: null, today: "2027-03-14" });
-    expect(onTheDay).toMatchObject({ state: "expired", cleared: false, expiredModules: ["overall-length"], expiresOn: null });
+    expect(
+      clearanceFor({ requiredModules: required, passes, suspension: null, today: "2027-03-13" }).cleared,
+    ).toBe(true);
+    const onTheDay = clearanceFor({
+      requiredModules: required,
+      passes,
+      suspension: null,
+      today: "2027-03-14",
+    });
+    expect(onTheDay).toMatchObject({
+      state: "expired",
+      cleared: false,
+      expiredModules: ["overall-length"],
+      expiresOn: null,
+    });
   });
 
   it("does not hold while a required module is missing, whatever else is passed", () => {
@@ -84,7 +111,12 @@ describe("clearance to rig unsupervised", () => {
   });
 
   it("ignores passes of modules the club does not require", () => {
-    const clearance = clearanceFor({ requiredModules: ["setting-inboard"], passes, suspension: null, today: "2027-04-01" });
+    const clearance = clearanceFor({
+      requiredModules: ["setting-inboard"],
+      passes,
+      suspension: null,
+      today: "2027-04-01",
+    });
     expect(clearance).toMatchObject({ state: "cleared", expiresOn: "2027-05-02" });
   });
 
@@ -95,17 +127,32 @@ describe("clearance to rig unsupervised", () => {
   });
 
   it("clears nobody when the club requires no modules", () => {
-    expect(clearanceFor({ requiredModules: [], passes, suspension: null, today: "2026-06-01" }).state).toBe("not-cleared");
+    expect(clearanceFor({ requiredModules: [], passes, suspension: null, today: "2026-06-01" }).state).toBe(
+      "not-cleared",
+    );
   });
 
   it("counts a pass signed off in the future as missing (clock skew never clears early)", () => {
-    expect(clearanceFor({ requiredModules: required, passes, suspension: null, today: "2026-04-01" }).missingModules).toEqual(["setting-inboard"]);
+    expect(
+      clearanceFor({ requiredModules: required, passes, suspension: null, today: "2026-04-01" })
+        .missingModules,
+    ).toEqual(["setting-inboard"]);
   });
 
   it("says when it runs out within a window, counting the last day", () => {
-    const clearance = clearanceFor({ requiredModules: required, passes, suspension: null, today: "2027-02-12" });
+    const clearance = clearanceFor({
+      requiredModules: required,
+      passes,
+      suspension: null,
+      today: "2027-02-12",
+    });
     expect(expiresWithin(clearance, "2027-02-12", 30)).toBe(true);
-    const earlier = clearanceFor({ requiredModules: required, passes, suspension: null, today: "2027-02-11" });
+    const earlier = clearanceFor({
+      requiredModules: required,
+      passes,
+      suspension: null,
+      today: "2027-02-11",
+    });
     expect(expiresWithin(earlier, "2027-02-11", 30)).toBe(false);
   });
 });
@@ -123,29 +170,45 @@ describe("module status", () => {
   it("is passed only with the quiz passed and a current sign-off", () => {
     const latestPass = pass("overall-length", "2026-02-01");
     expect(moduleStatus({ ...base, quizStage: "quiz-passed", latestPass })).toBe("passed");
-    expect(moduleStatus({ ...base, quizStage: "quiz-passed", latestPass, today: "2027-02-01" })).toBe("expired");
-    expect(moduleStatus({ ...base, quizStage: "quiz-passed", openRequest: true })).toBe("waiting-for-sign-off");
+    expect(moduleStatus({ ...base, quizStage: "quiz-passed", latestPass, today: "2027-02-01" })).toBe(
+      "expired",
+    );
+    expect(moduleStatus({ ...base, quizStage: "quiz-passed", openRequest: true })).toBe(
+      "waiting-for-sign-off",
+    );
   });
 
   it("shows the coach's 'not yet' until a later pass", () => {
     const notYet = { outcome: "not-yet" as const, decidedOn: "2026-05-20" };
     expect(moduleStatus({ ...base, quizStage: "quiz-passed", latestDecision: notYet })).toBe("not-yet");
-    expect(moduleStatus({ ...base, quizStage: "quiz-passed", latestDecision: notYet, openRequest: true })).toBe("waiting-for-sign-off");
+    expect(
+      moduleStatus({ ...base, quizStage: "quiz-passed", latestDecision: notYet, openRequest: true }),
+    ).toBe("waiting-for-sign-off");
   });
 });
 
 describe("asking for a sign-off", () => {
   const today = "2026-06-01";
   it("needs a passed quiz and no open request", () => {
-    expect(signOffRequestProblem({ quizPassed: false, openRequest: false, latestPass: null, today })).toMatch(/quiz first/);
-    expect(signOffRequestProblem({ quizPassed: true, openRequest: true, latestPass: null, today })).toMatch(/already asked/);
-    expect(signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass: null, today })).toBeNull();
+    expect(signOffRequestProblem({ quizPassed: false, openRequest: false, latestPass: null, today })).toMatch(
+      /quiz first/,
+    );
+    expect(signOffRequestProblem({ quizPassed: true, openRequest: true, latestPass: null, today })).toMatch(
+      /already asked/,
+    );
+    expect(
+      signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass: null, today }),
+    ).toBeNull();
   });
 
   it("allows a renewal only in the last 30 days of a pass", () => {
     const latestPass = pass("overall-length", "2025-07-01");
-    expect(signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass, today: "2026-05-31" })).toMatch(/renew/);
-    expect(signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass, today: "2026-06-01" })).toBeNull();
+    expect(
+      signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass, today: "2026-05-31" }),
+    ).toMatch(/renew/);
+    expect(
+      signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass, today: "2026-06-01" }),
+    ).toBeNull();
   });
 });
 

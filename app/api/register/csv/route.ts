@@ -11,5 +11,7 @@ export const GET = route(async (request) => {
   const actor = await requireActor();
   const filter = registerFilterSchema.parse(queryObject(new URL(request.url).searchParams));
   const register = await registerFor(actor, filter);
-  return new Response(registerCsv(register), { headers: csvDownloadHeaders(`induction-register-${new Date().toISOString().slice(0, 10)}.csv`) });
+  return new Response(registerCsv(register), {
+    headers: csvDownloadHeaders(`induction-register-${new Date().toISOString().slice(0, 10)}.csv`),
+  });
 });

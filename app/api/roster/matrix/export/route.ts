@@ -25,10 +25,14 @@ export const GET = route(async (request) => {
       value: (row) => {
         const cell = row.modules[module.slug];
         if (!cell) return "";
-        return cell.expiresOn ? `${moduleStatusLabels[cell.status].label} (expires ${cell.expiresOn})` : moduleStatusLabels[cell.status].label;
+        return cell.expiresOn
+          ? `${moduleStatusLabels[cell.status].label} (expires ${cell.expiresOn})`
+          : moduleStatusLabels[cell.status].label;
       },
     })),
     { header: "Waiting for my sign-off", value: (row) => row.waitingForMe },
   ];
-  return new Response(toCsv(rows, columns), { headers: csvDownloadHeaders(`roster-${query.filter}-${matrix.today}.csv`) });
+  return new Response(toCsv(rows, columns), {
+    headers: csvDownloadHeaders(`roster-${query.filter}-${matrix.today}.csv`),
+  });
 });
