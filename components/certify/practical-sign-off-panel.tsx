@@ -94,12 +94,12 @@ export async function PracticalSignOffPanel({
         </p>
       )}
 
-      {view.requestProblem === null ? (
-        <RequestSignOffForm moduleSlug={moduleSlug} coaches={view.coaches} />
-      ) : (
-        !view.openRequest && !view.currentPass && <p className="text-slate-700">{view.requestProblem}</p>
-      )}
-      {view.currentPass && view.requestProblem && (
+      <RequestSignOffForm
+        moduleSlug={moduleSlug}
+        coaches={view.coaches}
+        canRequest={view.requestProblem === null}
+      />
+      {view.requestProblem && !view.openRequest && (
         <p className="text-sm text-slate-700">{view.requestProblem}</p>
       )}
 

@@ -14,7 +14,15 @@ interface CoachOption {
  * "Ask a coach to watch me": posts to /api/sign-offs (the same schema checks it there) and refreshes
  * the page, so the panel around it shows the waiting state.
  */
-export function RequestSignOffForm({ moduleSlug, coaches }: { moduleSlug: string; coaches: CoachOption[] }) {
+export function RequestSignOffForm({
+  moduleSlug,
+  coaches,
+  canRequest = true,
+}: {
+  moduleSlug: string;
+  coaches: CoachOption[];
+  canRequest?: boolean;
+}) {
   const router = useRouter();
   const selectId = useId();
   const [coachId, setCoachId] = useState("");
@@ -49,33 +57,38 @@ export function RequestSignOffForm({ moduleSlug, coaches }: { moduleSlug: string
   }
 
   return (
-    <form onSubmit={submit} className="space-y-3" data-testid="request-sign-off">
-      <div className="flex flex-col gap-3 sm:flex-row sm:items-end">
-        <div className="flex flex-col gap-1 sm:flex-1">
-          <label htmlFor={selectId} className="font-semibold text-slate-900">
-            Which coach?
-          </label>
-          <select
-            id={selectId}
-            value={coachId}
-            onChange={(event) => setCoachId(event.target.value)}
-            className="min-h-11 w-full rounded-md border border-slate-500 bg-white px-3 py-2 text-base"
-          >
-            <option value="">Any coach</option>
-            {coaches.map((coach) => (
-              <option key={coach.id} value={coach.id}>
-                {coach.name}
-              </option>
-            ))}
-          </select>
-        </div>
-        <Button type="submit" pending={pending} pendingLabel="Asking…">
-          Ask for a sign-off
-        </Button>
-      </div>
+    <div className="space-y-3">
+      {canRequest && (
+        <form onSubmit={submit} data-testid="request-sign-off">
+          <div className="flex flex-col gap-3 sm:flex-row sm:items-end">
+            <div className="flex flex-col gap-1 sm:flex-1">
+              <label htmlFor={selectId} className="font-semibold text-slate-900">
+                Which coach?
+              </label>
+              <select
+                id={selectId}
+                value={coachId}
+                onChange={(event) => setCoachId(event.target.value)}
+                className="min-h-11 w-full rounded-md border border-slate-500 bg-white px-3 py-2 text-base"
+              >
+                <option value="">Any coach</option>
+                {coaches.map((coach) => (
+                  <option key={coach.id} value={coach.id}>
+                    {coach.name}
+                  </option>
+                ))}
+              </select>
+            </div>
+            <Button type="submit" pending={pending} pendingLabel="Asking…">
+              Ask for a sign-off
+            </Button>
+          </div>
+        </form>
+      )}
+      {/* Outside the form, so the message survives the refresh that hides the form once asked. */}
       <LiveStatus testId="request-sign-off-status">
         {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
       </LiveStatus>
-    </form>
+    </div>
   );
 }

@@ -1,6 +1,5 @@
 "use server";
 
-import { revalidatePath } from "next/cache";
 import { requireActor } from "@/lib/auth/session";
 import { revokeCertificate } from "@/lib/data/certificates";
 import { revokeCertificateSchema } from "@/lib/validations/certification";
@@ -19,7 +18,6 @@ export async function revokeCertificateAction(certificateId: string, input: unkn
         fieldErrors: fieldErrorsFrom(parsed.error),
       };
     const { revoked } = await revokeCertificate(actor, String(certificateId), parsed.data.reason);
-    revalidatePath("/club/register");
     return {
       ok: true,
       message:

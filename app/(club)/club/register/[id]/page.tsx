@@ -55,14 +55,17 @@ export default async function CertificatePage({ params }: { params: Promise<{ id
           Public check page
         </a>
       </p>
-      {!certificate.revokedAt && (
-        <section aria-labelledby="revoke-heading" className="space-y-3 rounded-lg bg-white p-4 shadow-sm">
-          <h2 id="revoke-heading" className="text-lg font-semibold">
-            Revoke
-          </h2>
-          <RevokeCertificateForm certificateId={certificate.id} kind={certificate.kind} />
-        </section>
-      )}
+      <section aria-labelledby="revoke-heading" className="space-y-3 rounded-lg bg-white p-4 shadow-sm">
+        <h2 id="revoke-heading" className="text-lg font-semibold">
+          {certificate.revokedAt ? "Revoked" : "Revoke"}
+        </h2>
+        {certificate.revokedAt && <p>The public check page says this certificate is revoked.</p>}
+        <RevokeCertificateForm
+          certificateId={certificate.id}
+          kind={certificate.kind}
+          revoked={certificate.revokedAt !== null}
+        />
+      </section>
       <p>
         <Link href="/club/register" className="underline">
           Back to the register

@@ -1,6 +1,5 @@
 "use server";
 
-import { revalidatePath } from "next/cache";
 import { requireActor } from "@/lib/auth/session";
 import { liftSuspension, suspendClearance } from "@/lib/data/clearance";
 import { liftSuspensionSchema, suspendClearanceSchema } from "@/lib/validations/certification";
@@ -26,7 +25,6 @@ export async function suspendClearanceAction(athleteId: number, input: unknown):
       };
     }
     await suspendClearance(actor, id, parsed.data.reason);
-    revalidatePath(`/roster/athletes/${id}`);
     return { ok: true, message: "Clearance suspended. The athlete rigs with a coach until you lift it." };
   } catch (error) {
     return actionFailure(error);
@@ -47,7 +45,6 @@ export async function liftSuspensionAction(athleteId: number, input: unknown): P
       };
     }
     await liftSuspension(actor, id, parsed.data.note);
-    revalidatePath(`/roster/athletes/${id}`);
     return { ok: true, message: "Suspension lifted." };
   } catch (error) {
     return actionFailure(error);

@@ -6,7 +6,7 @@ import { CertificateStatusBadge, ClearanceBadge, ModuleStatusBadge } from "@/com
 import { requirePageActor } from "@/lib/auth/session";
 import { athleteRecordFor } from "@/lib/data/clearance";
 import { formatLongDate, isoDateOf } from "@/lib/clearance/dates";
-import { LiftSuspensionForm, SuspendClearanceForm } from "./_components/suspension-forms";
+import { SuspensionControl } from "./_components/suspension-forms";
 
 export const metadata: Metadata = { title: "Athlete" };
 
@@ -73,12 +73,9 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
             {formatLongDate(isoDateOf(new Date(activeSuspension.suspendedAt)))}: {activeSuspension.reason}
           </p>
         )}
-        {record.viewer.canSuspend &&
-          (activeSuspension ? (
-            <LiftSuspensionForm athleteId={record.athlete.id} />
-          ) : (
-            <SuspendClearanceForm athleteId={record.athlete.id} />
-          ))}
+        {record.viewer.canSuspend && (
+          <SuspensionControl athleteId={record.athlete.id} suspended={!!activeSuspension} />
+        )}
       </section>
 
       <section aria-labelledby="modules-heading" className={sectionClasses}>

@@ -1,13 +1,15 @@
 "use server";
 
-import { revalidatePath } from "next/cache";
 import { requireActor } from "@/lib/auth/session";
 import { assessmentForCoach, recordAssessment } from "@/lib/data/sign-offs";
 import { assessmentSchemaFor } from "@/lib/validations/certification";
 import { fieldErrorsFrom } from "@/lib/validations/issues";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
 
-/** A coach records the observed assessment; the module's checklist gives the schema. */
+/**
+ * A coach records the observed assessment; the module's checklist gives the schema. No revalidatePath:
+ * the pages render per request, and refreshing this one would replace the form before its message shows.
+ */
 export async function recordAssessmentAction(
   assessmentId: string,
   input: unknown,
@@ -24,7 +26,6 @@ export async function recordAssessmentAction(
       };
     }
     const recorded = await recordAssessment(actor, detail.id, parsed.data);
-    revalidatePath("/roster");
     const serials = recorded.certificates.map((certificate) => certificate.serial);
     const message =
       recorded.outcome === "passed"

@@ -15,9 +15,11 @@ import { revokeCertificateAction } from "../actions";
 export function RevokeCertificateForm({
   certificateId,
   kind,
+  revoked,
 }: {
   certificateId: string;
   kind: "module" | "clearance";
+  revoked: boolean;
 }) {
   const router = useRouter();
   const [result, setResult] = useState<{ ok: boolean; message?: string } | null>(null);
@@ -35,25 +37,38 @@ export function RevokeCertificateForm({
     if (outcome.ok) router.refresh();
     else if (outcome.fieldErrors.reason) form.setError("reason", { message: outcome.fieldErrors.reason[0] });
   });
+  const status = (
+    <LiveStatus testId="revoke-status">
+      {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
+    </LiveStatus>
+  );
+  // The live region stays mounted after the refresh that marks the certificate revoked, so the message stays too.
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-3" data-testid="revoke-form">
-      <p className="text-sm text-slate-700">
-        {kind === "module"
-          ? "Revoking withdraws this module's pass: the athlete needs a new practical sign-off, and a rigging clearance certificate that stands on it is revoked too."
-          : "Revoking withdraws this document. To stop someone rigging without a coach, a coach suspends their clearance on the athlete's page."}
-      </p>
-      <TextField
-        label="Reason for revoking"
-        hint="Kept in the register and the audit log; not shown on the public check page."
-        error={form.formState.errors.reason?.message}
-        {...form.register("reason")}
-      />
-      <Button type="submit" variant="danger" pending={form.formState.isSubmitting} pendingLabel="Revoking…">
-        Revoke certificate
-      </Button>
-      <LiveStatus testId="revoke-status">
-        {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
-      </LiveStatus>
-    </form>
+    <>
+      {!revoked && (
+        <form onSubmit={onSubmit} noValidate className="space-y-3" data-testid="revoke-form">
+          <p className="text-sm text-slate-700">
+            {kind === "module"
+              ? "Revoking withdraws this module's pass: the athlete needs a new practical sign-off, and a rigging clearance certificate that stands on it is revoked too."
+              : "Revoking withdraws this document. To stop someone rigging without a coach, a coach suspends their clearance on the athlete's page."}
+          </p>
+          <TextField
+            label="Reason for revoking"
+            hint="Kept in the register and the audit log; not shown on the public check page."
+            error={form.formState.errors.reason?.message}
+            {...form.register("reason")}
+          />
+          <Button
+            type="submit"
+            variant="danger"
+            pending={form.formState.isSubmitting}
+            pendingLabel="Revoking…"
+          >
+            Revoke certificate
+          </Button>
+        </form>
+      )}
+      {status}
+    </>
   );
 }

@@ -13,10 +13,34 @@ import { liftSuspensionAction, suspendClearanceAction } from "../actions";
 
 type Outcome = { ok: boolean; message?: string } | null;
 
-/** Suspend an athlete's clearance: the reason is required and shown to the athlete. */
-export function SuspendClearanceForm({ athleteId }: { athleteId: number }) {
-  const router = useRouter();
+/**
+ * Suspend or lift an athlete's clearance. One component for both, so the status message survives the
+ * refresh that swaps one form for the other.
+ */
+export function SuspensionControl({ athleteId, suspended }: { athleteId: number; suspended: boolean }) {
   const [result, setResult] = useState<Outcome>(null);
+  return (
+    <div className="space-y-3">
+      {suspended ? (
+        <LiftSuspensionForm athleteId={athleteId} onDone={setResult} />
+      ) : (
+        <SuspendClearanceForm athleteId={athleteId} onDone={setResult} />
+      )}
+      <LiveStatus testId="suspension-status">
+        {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
+      </LiveStatus>
+    </div>
+  );
+}
+
+function SuspendClearanceForm({
+  athleteId,
+  onDone,
+}: {
+  athleteId: number;
+  onDone: (outcome: Outcome) => void;
+}) {
+  const router = useRouter();
   const form = useForm<
     z.input<typeof suspendClearanceSchema>,
     unknown,
@@ -27,12 +51,9 @@ export function SuspendClearanceForm({ athleteId }: { athleteId: number }) {
   });
   const onSubmit = form.handleSubmit(async (values) => {
     const outcome = await suspendClearanceAction(athleteId, values);
-    setResult(outcome);
-    if (outcome.ok) {
-      form.reset();
-      router.refresh();
-    } else if (outcome.fieldErrors.reason)
-      form.setError("reason", { message: outcome.fieldErrors.reason[0] });
+    onDone(outcome);
+    if (outcome.ok) router.refresh();
+    else if (outcome.fieldErrors.reason) form.setError("reason", { message: outcome.fieldErrors.reason[0] });
   });
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-3" data-testid="suspend-form">
@@ -45,24 +66,25 @@ export function SuspendClearanceForm({ athleteId }: { athleteId: number }) {
       <Button type="submit" variant="danger" pending={form.formState.isSubmitting} pendingLabel="Suspending…">
         Suspend clearance
       </Button>
-      <LiveStatus testId="suspend-status">
-        {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
-      </LiveStatus>
     </form>
   );
 }
 
-/** Lift a suspension, with an optional note for the record. */
-export function LiftSuspensionForm({ athleteId }: { athleteId: number }) {
+function LiftSuspensionForm({
+  athleteId,
+  onDone,
+}: {
+  athleteId: number;
+  onDone: (outcome: Outcome) => void;
+}) {
   const router = useRouter();
-  const [result, setResult] = useState<Outcome>(null);
   const form = useForm<z.input<typeof liftSuspensionSchema>, unknown, z.output<typeof liftSuspensionSchema>>({
     resolver: zodResolver(liftSuspensionSchema),
     defaultValues: { note: "" },
   });
   const onSubmit = form.handleSubmit(async (values) => {
     const outcome = await liftSuspensionAction(athleteId, values);
-    setResult(outcome);
+    onDone(outcome);
     if (outcome.ok) router.refresh();
   });
   return (
@@ -75,9 +97,6 @@ export function LiftSuspensionForm({ athleteId }: { athleteId: number }) {
       <Button type="submit" pending={form.formState.isSubmitting} pendingLabel="Lifting…">
         Lift the suspension
       </Button>
-      <LiveStatus testId="lift-status">
-        {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
-      </LiveStatus>
     </form>
   );
 }
