@@ -64,7 +64,7 @@ export async function PracticalSignOffPanel({
 
       {view.openRequest && (
         <p>
-          <span aria-hidden="true">⏳ </span>
+          <span aria-hidden="true">◔ </span>
           You asked {view.openRequest.coachName ?? "any coach"} on{" "}
           {formatLongDate(isoDateOf(new Date(view.openRequest.requestedAt)))}. Bring your oars to the rack;
           the coach records what they see on a tablet.

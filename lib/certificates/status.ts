@@ -3,9 +3,9 @@ export type CertificateStatus = "valid" | "expired" | "revoked" | "suspended";
 
 export const certificateStatusLabels: Record<CertificateStatus, { label: string; icon: string }> = {
   valid: { label: "Valid", icon: "✓" },
-  expired: { label: "Expired", icon: "⌛" },
+  expired: { label: "Expired", icon: "◷" },
   revoked: { label: "Revoked", icon: "✕" },
-  suspended: { label: "Suspended", icon: "⏸" },
+  suspended: { label: "Suspended", icon: "⊘" },
 };
 
 /**

@@ -102,8 +102,8 @@ export function expiresWithin(clearance: Clearance, today: string, days: number)
 
 export const clearanceStateLabels: Record<ClearanceState, { label: string; icon: string }> = {
   cleared: { label: "May rig unsupervised", icon: "✓" },
-  suspended: { label: "Suspended by a coach", icon: "⏸" },
-  expired: { label: "Clearance expired", icon: "⌛" },
+  suspended: { label: "Suspended by a coach", icon: "⊘" },
+  expired: { label: "Clearance expired", icon: "◷" },
   "not-cleared": { label: "Rig with a coach", icon: "○" },
 };
 
@@ -123,10 +123,10 @@ export const moduleStatusLabels: Record<ModuleStatus, { label: string; icon: str
   "lesson-read": { label: "Lesson read", icon: "…" },
   "quiz-failed": { label: "Quiz not passed yet", icon: "↻" },
   "ready-for-sign-off": { label: "Quiz passed, practical to do", icon: "◐" },
-  "waiting-for-sign-off": { label: "Waiting for sign-off", icon: "⏳" },
+  "waiting-for-sign-off": { label: "Waiting for sign-off", icon: "◔" },
   "not-yet": { label: "Practical: not yet", icon: "✕" },
   passed: { label: "Passed", icon: "✓" },
-  expired: { label: "Pass expired", icon: "⌛" },
+  expired: { label: "Pass expired", icon: "◷" },
 };
 
 export interface ModuleStatusInput {

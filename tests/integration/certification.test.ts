@@ -747,3 +747,25 @@ describe("upload route handlers", () => {
     expect((await readClubLogo(admin.clubId))?.type).toBe("image/png");
   });
 });
+
+describe("club settings", () => {
+  it("are saved by admins only, keep keys the form does not show, and never rewrite past certificates", async () => {
+    const { clubSettingsForAdmin, updateClubSettings } = await import("@/lib/data/club-admin-settings");
+    await writeTransaction(async (transaction) => {
+      const club = await Club.findByPk(admin.clubId, { transaction });
+      await club!.update({ settings: { ...club!.settings, raceDays: ["2027-05-01"], fleetNote: "kept" } }, { transaction });
+    });
+    const before = await Certificate.findAll({ where: { clubId: admin.clubId }, order: [["serialNumber", "ASC"]] });
+    const { form } = await clubSettingsForAdmin(admin);
+    await expect(updateClubSettings(coach, form)).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(updateClubSettings(admin, { ...form, clearanceModules: ["no-such-module"] })).rejects.toBeInstanceOf(ValidationError);
+    const { changed } = await updateClubSettings(admin, { ...form, clearanceMonths: 6, passMarkPercent: 90, clearanceModules: ["overall-length"] });
+    expect(changed.sort()).toEqual(["clearanceModules", "clearanceMonths", "passMark"]);
+    const club = await Club.findByPk(admin.clubId);
+    expect(club!.settings).toMatchObject({ clearanceMonths: 6, passMark: 0.9, raceDays: ["2027-05-01"], fleetNote: "kept" });
+    const after = await Certificate.findAll({ where: { clubId: admin.clubId }, order: [["serialNumber", "ASC"]] });
+    expect(after.map((entry) => entry.expiresOn)).toEqual(before.map((entry) => entry.expiresOn));
+    expect(await QuizAttempt.count({ where: { passMark: 0.9 } })).toBe(0);
+    expect(await AuditEvent.count({ where: { action: "club.settings-changed" } })).toBe(1);
+  });
+});

@@ -23,7 +23,7 @@ export default async function RosterPage() {
           className="inline-flex min-h-11 items-center font-semibold text-river-700 underline"
           data-testid="sign-off-queue-link"
         >
-          <span aria-hidden="true">⏳&nbsp;</span>Sign-offs waiting for you: {forMe}
+          <span aria-hidden="true">◔&nbsp;</span>Sign-offs waiting for you: {forMe}
         </Link>
       </p>
       <RosterMatrixView />

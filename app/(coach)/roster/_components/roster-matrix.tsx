@@ -128,7 +128,7 @@ export function RosterMatrixView() {
           return (
             <span className="flex flex-col items-start gap-1">
               <ClearanceBadge state={clearance.state} />
-              {clearance.expiresOn && (
+              {clearance.state === "cleared" && clearance.expiresOn && (
                 <span className="text-xs text-slate-700">until {shortDate(clearance.expiresOn)}</span>
               )}
               {clearance.suspendedReason && (
@@ -172,7 +172,7 @@ export function RosterMatrixView() {
         cell: (info) =>
           info.getValue() > 0 ? (
             <Link href="/roster/sign-offs" className="font-semibold text-river-700 underline">
-              <span aria-hidden="true">⏳ </span>
+              <span aria-hidden="true">◔ </span>
               {info.getValue()} waiting
             </Link>
           ) : (

@@ -53,7 +53,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
           </h2>
           <ClearanceBadge state={clearance.state} testId="athlete-clearance-state" />
         </div>
-        {clearance.expiresOn && (
+        {clearance.state === "cleared" && clearance.expiresOn && (
           <p>Cleared until {formatLongDate(clearance.expiresOn)} (when the first required pass expires).</p>
         )}
         {clearance.missingModules.length > 0 && (
@@ -139,7 +139,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
                   </Link>
                   {": "}
                   {entry.status === "waiting"
-                    ? "⏳ waiting"
+                    ? "◔ waiting"
                     : entry.status === "passed"
                       ? "✓ signed off"
                       : entry.status === "not-yet"
