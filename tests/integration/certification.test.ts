@@ -745,6 +745,18 @@ describe("upload route handlers", () => {
     expect(club?.logoFile).toMatch(/^logo-[0-9a-f-]{36}\.png$/);
     const { readClubLogo } = await import("@/lib/data/club-logo");
     expect((await readClubLogo(admin.clubId))?.type).toBe("image/png");
+    const [first] = await certificates.certificatesOfAthlete(admin, carys.id);
+    const { bytes } = await certificates.certificatePdfFor(admin, first!.id);
+    const file = path.join(os.tmpdir(), `slipway-logo-${Date.now()}.pdf`);
+    fs.writeFileSync(file, bytes);
+    // Two images now (not counting the logo's alpha mask): the logo, 1 × 1 pixels, and the QR code.
+    const images = execFileSync("pdfimages", ["-list", file], { encoding: "utf8" })
+      .trim()
+      .split("\n")
+      .slice(2)
+      .map((line) => line.trim().split(/\s+/))
+      .filter((columns) => columns[2] === "image");
+    expect(images.map((columns) => columns[3])).toEqual(["1", "360"]);
   });
 });
 
@@ -753,17 +765,38 @@ describe("club settings", () => {
     const { clubSettingsForAdmin, updateClubSettings } = await import("@/lib/data/club-admin-settings");
     await writeTransaction(async (transaction) => {
       const club = await Club.findByPk(admin.clubId, { transaction });
-      await club!.update({ settings: { ...club!.settings, raceDays: ["2027-05-01"], fleetNote: "kept" } }, { transaction });
+      await club!.update(
+        { settings: { ...club!.settings, raceDays: ["2027-05-01"], fleetNote: "kept" } },
+        { transaction },
+      );
     });
-    const before = await Certificate.findAll({ where: { clubId: admin.clubId }, order: [["serialNumber", "ASC"]] });
+    const before = await Certificate.findAll({
+      where: { clubId: admin.clubId },
+      order: [["serialNumber", "ASC"]],
+    });
     const { form } = await clubSettingsForAdmin(admin);
     await expect(updateClubSettings(coach, form)).rejects.toBeInstanceOf(ForbiddenError);
-    await expect(updateClubSettings(admin, { ...form, clearanceModules: ["no-such-module"] })).rejects.toBeInstanceOf(ValidationError);
-    const { changed } = await updateClubSettings(admin, { ...form, clearanceMonths: 6, passMarkPercent: 90, clearanceModules: ["overall-length"] });
+    await expect(
+      updateClubSettings(admin, { ...form, clearanceModules: ["no-such-module"] }),
+    ).rejects.toBeInstanceOf(ValidationError);
+    const { changed } = await updateClubSettings(admin, {
+      ...form,
+      clearanceMonths: 6,
+      passMarkPercent: 90,
+      clearanceModules: ["overall-length"],
+    });
     expect(changed.sort()).toEqual(["clearanceModules", "clearanceMonths", "passMark"]);
     const club = await Club.findByPk(admin.clubId);
-    expect(club!.settings).toMatchObject({ clearanceMonths: 6, passMark: 0.9, raceDays: ["2027-05-01"], fleetNote: "kept" });
-    const after = await Certificate.findAll({ where: { clubId: admin.clubId }, order: [["serialNumber", "ASC"]] });
+    expect(club!.settings).toMatchObject({
+      clearanceMonths: 6,
+      passMark: 0.9,
+      raceDays: ["2027-05-01"],
+      fleetNote: "kept",
+    });
+    const after = await Certificate.findAll({
+      where: { clubId: admin.clubId },
+      order: [["serialNumber", "ASC"]],
+    });
     expect(after.map((entry) => entry.expiresOn)).toEqual(before.map((entry) => entry.expiresOn));
     expect(await QuizAttempt.count({ where: { passMark: 0.9 } })).toBe(0);
     expect(await AuditEvent.count({ where: { action: "club.settings-changed" } })).toBe(1);
