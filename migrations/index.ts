@@ -1,6 +1,7 @@
 import * as createFoundation from "@/migrations/20261202-0001-create-foundation";
 import * as createLearning from "@/migrations/20261202-0002-create-learning";
 import * as createFleet from "@/migrations/20261202-0003-create-fleet";
+import * as createCertification from "@/migrations/20261202-0004-create-certification";
 
 export interface MigrationModule {
   up: typeof createFoundation.up;
@@ -12,4 +13,5 @@ export const migrationList: { name: string; module: MigrationModule }[] = [
   { name: "20261202-0001-create-foundation", module: createFoundation },
   { name: "20261202-0002-create-learning", module: createLearning },
   { name: "20261202-0003-create-fleet", module: createFleet },
+  { name: "20261202-0004-create-certification", module: createCertification },
 ];

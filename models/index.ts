@@ -1,8 +1,12 @@
 import type { Sequelize } from "sequelize";
 import { AuditEvent } from "@/models/AuditEvent";
+import { Certificate } from "@/models/Certificate";
+import { ClearanceSuspension } from "@/models/ClearanceSuspension";
 import { Club } from "@/models/Club";
+import { EvidencePhoto } from "@/models/EvidencePhoto";
 import { Invitation } from "@/models/Invitation";
 import { LessonRead } from "@/models/LessonRead";
+import { PracticalAssessment } from "@/models/PracticalAssessment";
 import { QuizAttempt } from "@/models/QuizAttempt";
 import { SignInLink } from "@/models/SignInLink";
 import { User } from "@/models/User";
@@ -15,6 +19,7 @@ import { RigPlan } from "@/models/RigPlan";
 
 export { AuditEvent, Club, Invitation, LessonRead, QuizAttempt, SignInLink, User };
 export { Boat, BoatOarSet, CleaningDigest, CleaningRecord, OarSet, RigPlan };
+export { Certificate, ClearanceSuspension, EvidencePhoto, PracticalAssessment };
 
 const initialised = new WeakSet<Sequelize>();
 
@@ -28,6 +33,10 @@ export function initModels(sequelize: Sequelize): void {
   AuditEvent.initModel(sequelize);
   LessonRead.initModel(sequelize);
   QuizAttempt.initModel(sequelize);
+  PracticalAssessment.initModel(sequelize);
+  EvidencePhoto.initModel(sequelize);
+  Certificate.initModel(sequelize);
+  ClearanceSuspension.initModel(sequelize);
 
   Club.hasMany(User, { foreignKey: "clubId" });
   User.belongsTo(Club, { foreignKey: "clubId" });
@@ -38,6 +47,10 @@ export function initModels(sequelize: Sequelize): void {
   QuizAttempt.belongsTo(User, { foreignKey: "userId" });
   User.hasMany(QuizAttempt, { foreignKey: "userId" });
   initFleetModels(sequelize);
+  PracticalAssessment.belongsTo(User, { foreignKey: "athleteId", as: "athlete" });
+  PracticalAssessment.hasMany(EvidencePhoto, { foreignKey: "assessmentId", as: "photos" });
+  Certificate.belongsTo(User, { foreignKey: "athleteId", as: "athlete" });
+  ClearanceSuspension.belongsTo(User, { foreignKey: "athleteId", as: "athlete" });
   initialised.add(sequelize);
 }
 

@@ -3,6 +3,7 @@ import { migrateToLatest } from "@/lib/migrate";
 import { seedDemoClub, demoClub } from "@/lib/seed/demo-club";
 import { seedSecondClub, secondClub } from "@/lib/seed/second-club";
 import { seedDemoFleet } from "@/lib/seed/demo-fleet";
+import { seedDemoCertification } from "@/lib/seed/demo-certification";
 import { databaseFile } from "@/lib/env";
 import { seedLoadAthletes } from "@/lib/seed/load-athletes";
 
@@ -20,6 +21,8 @@ async function main() {
   }
   const fleet = await seedDemoFleet(sequelize);
   console.log(`${demoClub.name}: ${fleet.boats} new boats and ${fleet.oarSets} new oar sets seeded.`);
+  const { staged } = await seedDemoCertification(sequelize);
+  console.log(`${demoClub.name}: ${staged} athletes staged with quizzes, sign-offs and certificates.`);
   await closeDatabase();
 }
 

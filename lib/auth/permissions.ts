@@ -69,6 +69,16 @@ export function canSignOff(actor: Actor, athlete: ClubMember): boolean {
   return isCoach(actor) && actor.clubId === athlete.clubId && actor.id !== athlete.id;
 }
 
+/** Athletes ask for their own practical sign-off; nobody asks on another's behalf. */
+export function canRequestSignOff(actor: Actor, athlete: ClubMember): boolean {
+  return actor.id === athlete.id && actor.clubId === athlete.clubId;
+}
+
+/** Coaches (and admins) of the athlete's club suspend and lift a clearance, never their own. */
+export function canSuspendClearance(actor: Actor, athlete: ClubMember): boolean {
+  return canSignOff(actor, athlete);
+}
+
 /** Admins manage members, settings, certificates and the register of their own club. */
 export function canManageClub(actor: Actor, clubId: number): boolean {
   return isAdmin(actor) && actor.clubId === clubId;

@@ -14,6 +14,14 @@ export default async function ClubPage() {
   return (
     <div className="space-y-8">
       <PageTitle lead="Members, invitations and the club's mail.">{club.name}</PageTitle>
+      <nav aria-label="Club administration" className="flex flex-wrap gap-3">
+        <Link href="/club/register" className="inline-flex min-h-11 items-center font-semibold text-river-700 underline">
+          Induction register
+        </Link>
+        <Link href="/club/settings" className="inline-flex min-h-11 items-center font-semibold text-river-700 underline">
+          Club settings
+        </Link>
+      </nav>
       <section aria-labelledby="invite-heading" className="rounded-lg bg-white p-4 shadow-sm">
         <h2 id="invite-heading" className="mb-3 text-lg font-semibold">
           Invite a member

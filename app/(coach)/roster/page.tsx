@@ -1,28 +1,32 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { PageTitle } from "@/components/ui/page-title";
 import { requirePageActor } from "@/lib/auth/session";
-import { clubOf, listClubMembers } from "@/lib/data/members";
+import { clubOf } from "@/lib/data/members";
+import { signOffQueue } from "@/lib/data/sign-offs";
+import { RosterMatrixView } from "./_components/roster-matrix";
 
 export const metadata: Metadata = { title: "Roster" };
 
 export default async function RosterPage() {
   const actor = await requirePageActor("coach", "/roster");
-  const [club, athletes] = await Promise.all([clubOf(actor), listClubMembers(actor, "athlete")]);
+  const [club, queue] = await Promise.all([clubOf(actor), signOffQueue(actor)]);
+  const forMe = queue.filter((entry) => entry.forMe).length;
   return (
-    <div>
-      <PageTitle lead={`${club.name}: ${athletes.length} athletes.`}>Roster</PageTitle>
-      {athletes.length === 0 ? (
-        <p>No athletes yet. A club administrator can invite them from the Club page.</p>
-      ) : (
-        <ul data-testid="roster-list" className="divide-y divide-slate-200 rounded-lg bg-white shadow-sm">
-          {athletes.map((athlete) => (
-            <li key={athlete.id} className="px-4 py-3">
-              <span className="font-semibold">{athlete.name}</span>{" "}
-              <span className="text-sm text-slate-700">{athlete.email}</span>
-            </li>
-          ))}
-        </ul>
-      )}
+    <div className="space-y-4">
+      <PageTitle lead={`${club.name}: who may rig unsupervised, and where everyone is with each module.`}>
+        Roster
+      </PageTitle>
+      <p>
+        <Link
+          href="/roster/sign-offs"
+          className="inline-flex min-h-11 items-center font-semibold text-river-700 underline"
+          data-testid="sign-off-queue-link"
+        >
+          <span aria-hidden="true">◔&nbsp;</span>Sign-offs waiting for you: {forMe}
+        </Link>
+      </p>
+      <RosterMatrixView />
     </div>
   );
 }

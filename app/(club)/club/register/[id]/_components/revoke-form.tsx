@@ -1,0 +1,74 @@
+"use client";
+
+import { useState } from "react";
+import { useRouter } from "next/navigation";
+import { useForm } from "react-hook-form";
+import { zodResolver } from "@hookform/resolvers/zod";
+import type { z } from "zod";
+import { Button } from "@/components/ui/button";
+import { TextField } from "@/components/ui/field";
+import { LiveStatus, Notice } from "@/components/ui/notice";
+import { revokeCertificateSchema } from "@/lib/validations/certification";
+import { revokeCertificateAction } from "../actions";
+
+/** Revoke a certificate: the reason is kept in the audit log and the register. */
+export function RevokeCertificateForm({
+  certificateId,
+  kind,
+  revoked,
+}: {
+  certificateId: string;
+  kind: "module" | "clearance";
+  revoked: boolean;
+}) {
+  const router = useRouter();
+  const [result, setResult] = useState<{ ok: boolean; message?: string } | null>(null);
+  const form = useForm<
+    z.input<typeof revokeCertificateSchema>,
+    unknown,
+    z.output<typeof revokeCertificateSchema>
+  >({
+    resolver: zodResolver(revokeCertificateSchema),
+    defaultValues: { reason: "" },
+  });
+  const onSubmit = form.handleSubmit(async (values) => {
+    const outcome = await revokeCertificateAction(certificateId, values);
+    setResult(outcome);
+    if (outcome.ok) router.refresh();
+    else if (outcome.fieldErrors.reason) form.setError("reason", { message: outcome.fieldErrors.reason[0] });
+  });
+  const status = (
+    <LiveStatus testId="revoke-status">
+      {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
+    </LiveStatus>
+  );
+  // The live region stays mounted after the refresh that marks the certificate revoked, so the message stays too.
+  return (
+    <>
+      {!revoked && (
+        <form onSubmit={onSubmit} noValidate className="space-y-3" data-testid="revoke-form">
+          <p className="text-sm text-slate-700">
+            {kind === "module"
+              ? "Revoking withdraws this module's pass: the athlete needs a new practical sign-off, and a rigging clearance certificate that stands on it is revoked too."
+              : "Revoking withdraws this document. To stop someone rigging without a coach, a coach suspends their clearance on the athlete's page."}
+          </p>
+          <TextField
+            label="Reason for revoking"
+            hint="Kept in the register and the audit log; not shown on the public check page."
+            error={form.formState.errors.reason?.message}
+            {...form.register("reason")}
+          />
+          <Button
+            type="submit"
+            variant="danger"
+            pending={form.formState.isSubmitting}
+            pendingLabel="Revoking…"
+          >
+            Revoke certificate
+          </Button>
+        </form>
+      )}
+      {status}
+    </>
+  );
+}

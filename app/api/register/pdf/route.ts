@@ -1,0 +1,22 @@
+import { NextResponse } from "next/server";
+import { requireActor } from "@/lib/auth/session";
+import { route } from "@/lib/http/route";
+import { registerFor, registerPdf } from "@/lib/data/register";
+import { queryObject, registerFilterSchema } from "@/lib/validations/certification";
+
+export const dynamic = "force-dynamic";
+
+/** Admins: the induction register as a print-ready A4 PDF, with the page's filters. */
+export const GET = route(async (request) => {
+  const actor = await requireActor();
+  const filter = registerFilterSchema.parse(queryObject(new URL(request.url).searchParams));
+  const bytes = await registerPdf(await registerFor(actor, filter));
+  return new NextResponse(Buffer.from(bytes), {
+    headers: {
+      "Content-Type": "application/pdf",
+      "Content-Disposition": `attachment; filename="induction-register-${new Date().toISOString().slice(0, 10)}.pdf"`,
+      "X-Content-Type-Options": "nosniff",
+      "Cache-Control": "private, no-store",
+    },
+  });
+});

@@ -1,0 +1,54 @@
+import Link from "next/link";
+import type { Actor } from "@/lib/auth/permissions";
+import { clearanceOf } from "@/lib/data/clearance";
+import { formatLongDate } from "@/lib/clearance/dates";
+import { ClearanceBadge } from "@/components/certify/status-badge";
+
+/** The athlete's "may rig unsupervised" state with what is still missing, for the learning page. */
+export async function ClearanceSummary({ actor }: { actor: Actor }) {
+  const { standing, requiredTitles } = await clearanceOf(actor);
+  const { clearance } = standing;
+  const remaining = standing.modules.filter(
+    (entry) => clearance.requiredModules.includes(entry.slug) && entry.status !== "passed",
+  ).length;
+  return (
+    <section
+      aria-labelledby="clearance-heading"
+      className="space-y-2 rounded-lg bg-white p-4 shadow-sm"
+      data-testid="clearance-summary"
+    >
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <h2 id="clearance-heading" className="text-lg font-semibold">
+          Rigging without a coach
+        </h2>
+        <ClearanceBadge state={clearance.state} testId="clearance-state" />
+      </div>
+      {clearance.state === "cleared" && clearance.expiresOn && (
+        <p>
+          You may rig your own oars within the club&apos;s limits until {formatLongDate(clearance.expiresOn)}.
+          Check every collar and screw before each outing.
+        </p>
+      )}
+      {clearance.state === "suspended" && (
+        <p>
+          A coach has suspended your clearance: {clearance.suspension?.reason}. Rig with a coach until they
+          lift it.
+        </p>
+      )}
+      {clearance.state === "expired" && (
+        <p>A module pass has run out. Ask a coach to sign it off again; until then rig with a coach.</p>
+      )}
+      {clearance.state === "not-cleared" && (
+        <p>
+          {remaining} of {requiredTitles.length} required modules still to pass (quiz and practical). Until
+          then, rig with a coach beside you.
+        </p>
+      )}
+      <p>
+        <Link href="/learn/certificates" className="font-semibold text-river-700 underline">
+          Your certificates
+        </Link>
+      </p>
+    </section>
+  );
+}

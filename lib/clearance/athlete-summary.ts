@@ -1,0 +1,86 @@
+import { moduleProgress, type AttemptSummary, type ModuleProgress } from "@/lib/learning/progress";
+import { isoDateOf } from "@/lib/clearance/dates";
+import {
+  clearanceFor,
+  latestPasses,
+  moduleStatus,
+  signOffRequestProblem,
+  type ActiveSuspension,
+  type Clearance,
+  type ModulePass,
+  type ModuleStatus,
+} from "@/lib/clearance/rules";
+
+/** A practical sign-off as the rules see it. */
+export interface AssessmentFact {
+  moduleSlug: string;
+  status: "waiting" | "passed" | "not-yet" | "withdrawn";
+  requestedAt: Date;
+  assessedAt: Date | null;
+}
+
+/** Everything recorded about one athlete that decides their modules and clearance. */
+export interface AthleteFacts {
+  lessonReads: readonly string[];
+  attempts: readonly AttemptSummary[];
+  assessments: readonly AssessmentFact[];
+  /** From the athlete's module certificates that are not revoked. */
+  passes: readonly ModulePass[];
+  suspension: ActiveSuspension | null;
+}
+
+export interface ModuleStanding {
+  slug: string;
+  status: ModuleStatus;
+  progress: ModuleProgress;
+  latestPass: ModulePass | null;
+  openRequest: boolean;
+  /** Why a sign-off cannot be asked for now, or null when it can. */
+  requestProblem: string | null;
+}
+
+export interface AthleteStanding {
+  modules: ModuleStanding[];
+  clearance: Clearance;
+}
+
+/** Each module's status (quiz and practical together) and the clearance, from the recorded facts. */
+export function athleteStanding(
+  moduleSlugs: readonly string[],
+  requiredModules: readonly string[],
+  facts: AthleteFacts,
+  today: string,
+): AthleteStanding {
+  const reads = new Set(facts.lessonReads);
+  const latest = latestPasses(facts.passes);
+  const modules = moduleSlugs.map((slug): ModuleStanding => {
+    const progress = moduleProgress(slug, reads.has(slug), facts.attempts);
+    const mine = facts.assessments.filter((assessment) => assessment.moduleSlug === slug);
+    const openRequest = mine.some((assessment) => assessment.status === "waiting");
+    const decided = mine
+      .filter(
+        (assessment) =>
+          (assessment.status === "passed" || assessment.status === "not-yet") && assessment.assessedAt,
+      )
+      .sort((a, b) => b.assessedAt!.getTime() - a.assessedAt!.getTime())[0];
+    const latestDecision = decided
+      ? { outcome: decided.status as "passed" | "not-yet", decidedOn: isoDateOf(decided.assessedAt!) }
+      : null;
+    const latestPass = latest.get(slug) ?? null;
+    return {
+      slug,
+      status: moduleStatus({ quizStage: progress.stage, latestPass, openRequest, latestDecision, today }),
+      progress,
+      latestPass,
+      openRequest,
+      requestProblem: signOffRequestProblem({ quizPassed: progress.passed, openRequest, latestPass, today }),
+    };
+  });
+  const clearance = clearanceFor({
+    requiredModules,
+    passes: [...latest.values()],
+    suspension: facts.suspension,
+    today,
+  });
+  return { modules, clearance };
+}

@@ -1,0 +1,40 @@
+import { daysBetweenIso, isoDateToDayNumber } from "@/lib/care/dates";
+
+/** The calendar date (UTC) of an instant, YYYY-MM-DD. Slipway keeps every certification date in UTC. */
+export function isoDateOf(instant: Date): string {
+  return instant.toISOString().slice(0, 10);
+}
+
+function daysInMonth(year: number, monthIndex: number): number {
+  return new Date(Date.UTC(year, monthIndex + 1, 0)).getUTCDate();
+}
+
+/**
+ * The same day `months` calendar months later; a day the target month lacks is clamped to its last day
+ * (31 January + 1 month = 28 or 29 February), so a pass never lasts longer than the months it promises.
+ */
+export function addMonthsIso(isoDate: string, months: number): string {
+  if (!Number.isInteger(months)) throw new RangeError(`months must be a whole number, got ${months}`);
+  isoDateToDayNumber(isoDate);
+  const [year, month, day] = isoDate.split("-").map(Number) as [number, number, number];
+  const total = year * 12 + (month - 1) + months;
+  const targetYear = Math.floor(total / 12);
+  const targetMonth = total - targetYear * 12;
+  const targetDay = Math.min(day, daysInMonth(targetYear, targetMonth));
+  return `${String(targetYear).padStart(4, "0")}-${String(targetMonth + 1).padStart(2, "0")}-${String(targetDay).padStart(2, "0")}`;
+}
+
+/** Whole days from `today` until `isoDate` (negative once it has passed). */
+export function daysUntil(today: string, isoDate: string): number {
+  return daysBetweenIso(today, isoDate);
+}
+
+/** A date for people: "14 March 2027". */
+export function formatLongDate(isoDate: string): string {
+  return new Date(`${isoDate}T00:00:00Z`).toLocaleDateString("en-GB", {
+    day: "numeric",
+    month: "long",
+    year: "numeric",
+    timeZone: "UTC",
+  });
+}

@@ -1,0 +1,99 @@
+import "server-only";
+import { fileTypeFromBuffer } from "file-type";
+import { PayloadTooLargeError, UnsupportedMediaError, ValidationError } from "@/lib/http/errors";
+
+/** Room for the multipart boundaries and part headers around the file itself. */
+const multipartOverheadBytes = 16 * 1024;
+
+function megabytes(bytes: number): string {
+  return `${Math.round((bytes / (1024 * 1024)) * 10) / 10} MB`;
+}
+
+/**
+ * Reads the body while counting bytes and stops (413) as soon as it passes the limit, so an oversized
+ * upload is never held in memory whole. A declared Content-Length over the limit is refused before a
+ * single byte is read.
+ */
+export async function readBodyWithin(request: Request, maxBytes: number): Promise<Uint8Array<ArrayBuffer>> {
+  const tooLarge = new PayloadTooLargeError(`The upload is larger than ${megabytes(maxBytes)}.`);
+  const declared = request.headers.get("content-length");
+  if (declared !== null && Number(declared) > maxBytes) throw tooLarge;
+  if (!request.body) return new Uint8Array(0);
+  const reader = request.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let received = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    received += value.byteLength;
+    if (received > maxBytes) {
+      await reader.cancel().catch(() => undefined);
+      throw tooLarge;
+    }
+    chunks.push(value);
+  }
+  const body = new Uint8Array(received);
+  let offset = 0;
+  for (const chunk of chunks) {
+    body.set(chunk, offset);
+    offset += chunk.byteLength;
+  }
+  return body;
+}
+
+/**
+ * The bytes of one file sent as multipart/form-data under `field`, at most `maxBytes`. The file name
+ * and type the browser sent are ignored: callers sniff the type from the bytes and choose the name.
+ */
+export async function readUploadedFile(
+  request: Request,
+  { maxBytes, field = "file" }: { maxBytes: number; field?: string },
+): Promise<Uint8Array> {
+  const contentType = request.headers.get("content-type") ?? "";
+  if (!contentType.toLowerCase().startsWith("multipart/form-data")) {
+    throw new UnsupportedMediaError("Send the file as multipart/form-data.");
+  }
+  const body = await readBodyWithin(request, maxBytes + multipartOverheadBytes);
+  let form: FormData;
+  try {
+    form = await new Response(body, { headers: { "content-type": contentType } }).formData();
+  } catch {
+    throw new ValidationError(`${field}: the upload could not be read`, {
+      [field]: ["the upload could not be read"],
+    });
+  }
+  const file = form.get(field);
+  if (!(file instanceof Blob) || file.size === 0) {
+    throw new ValidationError(`${field}: choose a file`, { [field]: ["choose a file"] });
+  }
+  if (file.size > maxBytes)
+    throw new PayloadTooLargeError(`The upload is larger than ${megabytes(maxBytes)}.`);
+  return new Uint8Array(await file.arrayBuffer());
+}
+
+/** The image type read from the bytes themselves; 415 unless it is one of `allowed`. */
+export async function sniffImageType<T extends string>(
+  bytes: Uint8Array,
+  allowed: readonly T[],
+  what: string,
+): Promise<T> {
+  const detected = await fileTypeFromBuffer(bytes);
+  const mime = detected?.mime as string | undefined;
+  if (!mime || !(allowed as readonly string[]).includes(mime)) {
+    throw new UnsupportedMediaError(`${what} must be ${describeTypes(allowed)}; this file is not.`);
+  }
+  return mime as T;
+}
+
+const typeNames: Record<string, string> = { "image/jpeg": "JPEG", "image/png": "PNG", "image/webp": "WebP" };
+
+function describeTypes(types: readonly string[]): string {
+  const names = types.map((type) => typeNames[type] ?? type);
+  return names.length > 1 ? `${names.slice(0, -1).join(", ")} or ${names.at(-1)}` : (names[0] ?? "");
+}
+
+export const fileExtensions: Record<string, string> = {
+  "image/jpeg": "jpg",
+  "image/png": "png",
+  "image/webp": "webp",
+};

@@ -1,0 +1,250 @@
+import { PDFDocument, degrees, rgb, type PDFFont, type PDFImage, type PDFPage } from "pdf-lib";
+import fontkit from "@pdf-lib/fontkit";
+import QRCode from "qrcode";
+import type { FontBytes } from "@/lib/pdf/fonts";
+import { embedPlainFont, fitText, textWidth, wrapCharacters, wrapText } from "@/lib/pdf/text";
+import { formatLongDate } from "@/lib/clearance/dates";
+
+/** A4 in PDF points. */
+export const a4Portrait = { width: 595.28, height: 841.89 } as const;
+
+const ink = rgb(0.09, 0.12, 0.16);
+const muted = rgb(0.28, 0.33, 0.39);
+const river = rgb(0.082, 0.259, 0.31);
+const reed = rgb(0.247, 0.478, 0.18);
+const alarm = rgb(0.7, 0.149, 0.118);
+
+export interface LogoImage {
+  bytes: Uint8Array;
+  type: "image/png" | "image/jpeg";
+}
+
+export interface CertificatePdfInput {
+  kind: "module" | "clearance";
+  clubName: string;
+  athleteName: string;
+  /** Module title, or the clearance's title. */
+  title: string;
+  /** Module: the checklist items observed as met. Clearance: the module titles it stands on. */
+  lines: string[];
+  coachName: string;
+  issuedOn: string;
+  expiresOn: string;
+  serial: string;
+  verifyUrl: string;
+  logo: LogoImage | null;
+  revoked: boolean;
+}
+
+function centred(page: PDFPage, text: string, font: PDFFont, size: number, y: number, color = ink): void {
+  const width = textWidth(font, text, size);
+  page.drawText(text, { x: (a4Portrait.width - width) / 2, y, size, font, color });
+}
+
+async function embedLogo(document: PDFDocument, logo: LogoImage | null): Promise<PDFImage | null> {
+  if (!logo) return null;
+  try {
+    return logo.type === "image/png"
+      ? await document.embedPng(logo.bytes)
+      : await document.embedJpg(logo.bytes);
+  } catch {
+    // A logo pdf-lib cannot read (e.g. an exotic PNG) must not stop a certificate from being issued.
+    return null;
+  }
+}
+
+/**
+ * Slipway's certificate: one A4 page with the club (and logo), the athlete, what was certified, who
+ * signed it off, the dates, the serial, and a QR code to the public verification page.
+ */
+export async function renderCertificatePdf(
+  input: CertificatePdfInput,
+  fonts: FontBytes,
+): Promise<Uint8Array> {
+  const document = await PDFDocument.create();
+  document.registerFontkit(fontkit);
+  const regular = await embedPlainFont(document, fonts.regular);
+  const bold = await embedPlainFont(document, fonts.bold);
+  const kindLabel =
+    input.kind === "module" ? "Practical sign-off certificate" : "Rigging clearance certificate";
+  document.setTitle(`${kindLabel} ${input.serial}: ${input.athleteName}`);
+  document.setAuthor(input.clubName);
+  document.setCreator("Slipway");
+  document.setProducer("Slipway (pdf-lib)");
+  document.setCreationDate(new Date(`${input.issuedOn}T12:00:00Z`));
+
+  const page = document.addPage([a4Portrait.width, a4Portrait.height]);
+  const { width, height } = a4Portrait;
+  const left = 56;
+  const right = width - 56;
+
+  // The slipway motif: a deep band at the top with a thin reed line, and a frame.
+  page.drawRectangle({ x: 0, y: height - 18, width, height: 18, color: river });
+  page.drawRectangle({ x: 0, y: height - 22, width, height: 2, color: reed });
+  page.drawRectangle({
+    x: 28,
+    y: 28,
+    width: width - 56,
+    height: height - 72,
+    borderColor: river,
+    borderWidth: 1,
+  });
+
+  // Club and logo.
+  let headerX = left;
+  const logo = await embedLogo(document, input.logo);
+  if (logo) {
+    const scale = Math.min(120 / logo.width, 56 / logo.height, 1);
+    const logoWidth = logo.width * scale;
+    const logoHeight = logo.height * scale;
+    page.drawImage(logo, { x: left, y: height - 56 - logoHeight, width: logoWidth, height: logoHeight });
+    headerX = left + logoWidth + 14;
+  }
+  page.drawText(fitText(bold, input.clubName, 16, right - headerX), {
+    x: headerX,
+    y: height - 80,
+    size: 16,
+    font: bold,
+    color: river,
+  });
+  page.drawText("Oar rigging and care course", {
+    x: headerX,
+    y: height - 97,
+    size: 10,
+    font: regular,
+    color: muted,
+  });
+
+  let y = height - 190;
+  centred(page, kindLabel.toUpperCase(), bold, 13, y, river);
+  y -= 52;
+  centred(page, "awarded to", regular, 12, y, muted);
+  y -= 40;
+  centred(page, fitText(bold, input.athleteName, 30, right - left), bold, 30, y);
+  y -= 38;
+  const statement =
+    input.kind === "module"
+      ? "who showed a coach, hands-on and unprompted, every step of the module"
+      : "who may rig their own oars without a coach standing by, within the club's limits, having passed";
+  for (const line of wrapText(regular, statement, 12, right - left)) {
+    centred(page, line, regular, 12, y, muted);
+    y -= 17;
+  }
+  y -= 10;
+  for (const line of wrapText(bold, input.title, 18, right - left)) {
+    centred(page, line, bold, 18, y, ink);
+    y -= 24;
+  }
+
+  // What was observed (module) or what the clearance stands on (clearance).
+  y -= 12;
+  page.drawText(input.kind === "module" ? "Observed and met:" : "Modules:", {
+    x: left + 20,
+    y,
+    size: 10.5,
+    font: bold,
+    color: river,
+  });
+  y -= 17;
+  for (const item of input.lines.slice(0, 8)) {
+    const wrapped = wrapText(regular, item, 10.5, right - left - 60);
+    page.drawText("✓", { x: left + 24, y, size: 10.5, font: bold, color: reed });
+    for (const line of wrapped) {
+      page.drawText(line, { x: left + 40, y, size: 10.5, font: regular, color: ink });
+      y -= 14.5;
+    }
+    y -= 2;
+  }
+
+  // Who and when, in four labelled boxes.
+  const boxTop = 318;
+  const boxWidth = (right - left - 12) / 2;
+  const details: [string, string][] = [
+    ["Signed off by", input.coachName],
+    ["Serial number", input.serial],
+    ["Signed off on", formatLongDate(input.issuedOn)],
+    ["Expires on", formatLongDate(input.expiresOn)],
+  ];
+  details.forEach(([label, value], index) => {
+    const x = left + (index % 2) * (boxWidth + 12);
+    const top = boxTop - Math.floor(index / 2) * 54;
+    page.drawRectangle({
+      x,
+      y: top - 46,
+      width: boxWidth,
+      height: 46,
+      borderColor: rgb(0.8, 0.84, 0.87),
+      borderWidth: 0.75,
+    });
+    page.drawText(label, { x: x + 10, y: top - 16, size: 8.5, font: regular, color: muted });
+    page.drawText(fitText(bold, value, 13, boxWidth - 20), {
+      x: x + 10,
+      y: top - 35,
+      size: 13,
+      font: bold,
+      color: ink,
+    });
+  });
+
+  // QR code and address of the public check.
+  const qrPng = await QRCode.toBuffer(input.verifyUrl, {
+    type: "png",
+    errorCorrectionLevel: "M",
+    margin: 1,
+    width: 360,
+  });
+  const qr = await document.embedPng(qrPng);
+  const qrSize = 104;
+  const qrY = 92;
+  page.drawImage(qr, { x: left, y: qrY, width: qrSize, height: qrSize });
+  const textX = left + qrSize + 16;
+  page.drawText("Check that this certificate is still valid:", {
+    x: textX,
+    y: qrY + qrSize - 14,
+    size: 10.5,
+    font: bold,
+    color: river,
+  });
+  let urlY = qrY + qrSize - 32;
+  for (const line of wrapCharacters(regular, input.verifyUrl, 9.5, right - textX)) {
+    page.drawText(line, { x: textX, y: urlY, size: 9.5, font: regular, color: ink });
+    urlY -= 13;
+  }
+  page.drawText(
+    "Scan the code or type the address. The page shows whether it is valid, expired or revoked.",
+    {
+      x: textX,
+      y: urlY - 6,
+      size: 8,
+      font: regular,
+      color: muted,
+      maxWidth: right - textX,
+    },
+  );
+
+  const caution =
+    "This certificate records what a coach saw on the day. The coach on duty and the club's own rules decide who goes afloat. " +
+    "Before every outing, check that each collar sits in a click and every screw is tight.";
+  let cautionY = 62;
+  for (const line of wrapText(regular, caution, 8, right - left)) {
+    page.drawText(line, { x: left, y: cautionY, size: 8, font: regular, color: muted });
+    cautionY -= 10.5;
+  }
+
+  if (input.revoked) {
+    const stamp = "REVOKED";
+    const size = 96;
+    page.drawText(stamp, {
+      x: width / 2 - textWidth(bold, stamp, size) / 2 + 40,
+      y: height / 2 - 160,
+      size,
+      font: bold,
+      color: alarm,
+      opacity: 0.28,
+      rotate: degrees(35),
+    });
+  }
+
+  // objectsPerTick: no pauses for the event loop between objects; a register is written in one go.
+  return document.save({ objectsPerTick: Number.POSITIVE_INFINITY });
+}

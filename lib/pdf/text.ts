@@ -1,0 +1,115 @@
+import { PDFHexString, type PDFDocument, type PDFFont } from "pdf-lib";
+
+/**
+ * OpenType features off: fontkit's full shaping of Inter (contextual alternates, ligatures, kerning)
+ * costs about 1 ms a string, which made a 500-row register take 15 s. Plain glyphs cost a tenth of that,
+ * and widths then add up exactly, so measuring can use a per-character cache.
+ */
+const plainFeatures = {
+  liga: false,
+  clig: false,
+  calt: false,
+  rlig: false,
+  rclt: false,
+  kern: false,
+  ccmp: false,
+  locl: false,
+  mark: false,
+  mkmk: false,
+  curs: false,
+};
+
+/**
+ * Embeds a TTF whole (subset: false: with subsetting, Inter silently loses letters in pdf-lib 1.17) and
+ * encodes text a character at a time from a cache. pdf-lib would lay out every string afresh and keep
+ * one glyph record per character drawn; with the cache each distinct character is laid out once, which
+ * makes a 500-row register several times faster and its width table small. Without features the
+ * glyphs are the same as a whole-string layout.
+ */
+export async function embedPlainFont(document: PDFDocument, bytes: Uint8Array): Promise<PDFFont> {
+  const font = await document.embedFont(bytes, { subset: false, features: plainFeatures });
+  const encodeOne = font.encodeText.bind(font);
+  const hexByCharacter = new Map<string, string>();
+  font.encodeText = (text: string) => {
+    let hex = "";
+    for (const character of text) {
+      let code = hexByCharacter.get(character);
+      if (code === undefined) {
+        code = encodeOne(character).asString();
+        hexByCharacter.set(character, code);
+      }
+      hex += code;
+    }
+    return PDFHexString.of(hex);
+  };
+  return font;
+}
+
+const widthCaches = new WeakMap<PDFFont, Map<string, number>>();
+
+/** Width of text at `size`, from cached widths of each character at size 1. */
+export function textWidth(font: PDFFont, text: string, size: number): number {
+  let cache = widthCaches.get(font);
+  if (!cache) {
+    cache = new Map();
+    widthCaches.set(font, cache);
+  }
+  let width = 0;
+  for (const character of text) {
+    let characterWidth = cache.get(character);
+    if (characterWidth === undefined) {
+      characterWidth = font.widthOfTextAtSize(character, 1);
+      cache.set(character, characterWidth);
+    }
+    width += characterWidth;
+  }
+  return width * size;
+}
+
+/** The text cut with an ellipsis so it fits `maxWidth` at `size`. */
+export function fitText(font: PDFFont, text: string, size: number, maxWidth: number): string {
+  if (textWidth(font, text, size) <= maxWidth) return text;
+  const ellipsis = "…";
+  const characters = [...text];
+  let low = 0;
+  let high = characters.length;
+  while (low < high) {
+    const middle = Math.ceil((low + high) / 2);
+    if (textWidth(font, characters.slice(0, middle).join("").trimEnd() + ellipsis, size) <= maxWidth)
+      low = middle;
+    else high = middle - 1;
+  }
+  return low === 0 ? ellipsis : characters.slice(0, low).join("").trimEnd() + ellipsis;
+}
+
+/** Words wrapped into lines no wider than `maxWidth`; a single over-long word is cut to fit. */
+export function wrapText(font: PDFFont, text: string, size: number, maxWidth: number): string[] {
+  const lines: string[] = [];
+  let line = "";
+  for (const word of text.split(/\s+/).filter(Boolean)) {
+    const candidate = line ? `${line} ${word}` : word;
+    if (textWidth(font, candidate, size) <= maxWidth) {
+      line = candidate;
+      continue;
+    }
+    if (line) lines.push(line);
+    line = textWidth(font, word, size) <= maxWidth ? word : fitText(font, word, size, maxWidth);
+  }
+  if (line) lines.push(line);
+  return lines;
+}
+
+/** A string with no spaces (a URL) cut into pieces that fit the line. */
+export function wrapCharacters(font: PDFFont, text: string, size: number, maxWidth: number): string[] {
+  const lines: string[] = [];
+  let line = "";
+  for (const character of text) {
+    if (line && textWidth(font, line + character, size) > maxWidth) {
+      lines.push(line);
+      line = "";
+    }
+    line += character;
+  }
+  if (line) lines.push(line);
+  return lines;
+}

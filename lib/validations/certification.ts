@@ -1,0 +1,95 @@
+import { z } from "zod";
+import { kebabCaseSchema, type ChecklistItem } from "@/lib/content/module-schema";
+import { checklistVerdicts } from "@/lib/clearance/checklist";
+
+/** An athlete asks for a practical sign-off; coachId null means "any coach of the club". */
+export const signOffRequestSchema = z.strictObject({
+  moduleSlug: kebabCaseSchema,
+  coachId: z.number().int().positive().nullable().default(null),
+});
+export type SignOffRequestInput = z.input<typeof signOffRequestSchema>;
+
+export const maxEvidencePhotos = 3;
+export const maxNoteLength = 2000;
+
+const verdictSchema = z.enum(checklistVerdicts, { error: "Choose met or not yet" });
+
+/**
+ * The coach's observed assessment for one module's checklist: a verdict for every item (and no others),
+ * a note, and the ids of photos already uploaded. The same schema runs in the form and on the server.
+ * A "not yet" needs a note: the athlete must learn what to practise.
+ */
+export function assessmentSchemaFor(checklist: readonly ChecklistItem[]) {
+  const items = z.strictObject(Object.fromEntries(checklist.map((item) => [item.id, verdictSchema])));
+  return z
+    .strictObject({
+      items,
+      note: z
+        .string()
+        .trim()
+        .max(maxNoteLength, { error: `At most ${maxNoteLength} characters` }),
+      evidenceIds: z
+        .array(z.uuid())
+        .max(maxEvidencePhotos, { error: `At most ${maxEvidencePhotos} photos` })
+        .default([]),
+    })
+    .superRefine((value, context) => {
+      const verdicts = Object.values(value.items as Record<string, string>);
+      if (verdicts.includes("not-yet") && value.note.length < 3) {
+        context.addIssue({
+          code: "custom",
+          path: ["note"],
+          message: "Say what to practise before the next try",
+        });
+      }
+    });
+}
+export type AssessmentInput = z.output<ReturnType<typeof assessmentSchemaFor>>;
+
+const reasonSchema = z
+  .string()
+  .trim()
+  .min(3, { error: "Give a reason of at least 3 characters" })
+  .max(500, { error: "At most 500 characters" });
+
+export const suspendClearanceSchema = z.strictObject({ reason: reasonSchema });
+export const liftSuspensionSchema = z.strictObject({
+  note: z.string().trim().max(500, { error: "At most 500 characters" }).default(""),
+});
+export const revokeCertificateSchema = z.strictObject({ reason: reasonSchema });
+
+export const rosterFilters = ["all", "cleared", "waiting-for-me", "expiring-soon", "not-cleared"] as const;
+export type RosterFilter = (typeof rosterFilters)[number];
+
+/** The roster view's query: one filter and a name search (lenient: bad values fall back). */
+export const rosterQuerySchema = z.object({
+  filter: z.enum(rosterFilters).catch("all"),
+  q: z.string().trim().max(100).catch(""),
+});
+
+export const registerStatuses = ["all", "valid", "expired", "revoked", "suspended"] as const;
+export const certificateKindFilters = ["all", "module", "clearance"] as const;
+const optionalDate = z.union([z.iso.date(), z.literal("")]).catch("");
+
+/** The induction register's filters from the query string (lenient: bad values fall back to "all"). */
+export const registerFilterSchema = z.object({
+  module: z.union([kebabCaseSchema, z.literal("")]).catch(""),
+  kind: z.enum(certificateKindFilters).catch("all"),
+  status: z.enum(registerStatuses).catch("all"),
+  from: optionalDate,
+  to: optionalDate,
+});
+export type RegisterFilter = z.output<typeof registerFilterSchema>;
+
+/** Plain-object query parameters for the lenient schemas above. */
+export function queryObject(
+  params: URLSearchParams | Record<string, string | string[] | undefined>,
+): Record<string, string> {
+  const entries = params instanceof URLSearchParams ? [...params.entries()] : Object.entries(params);
+  const result: Record<string, string> = {};
+  for (const [key, value] of entries) {
+    const first = Array.isArray(value) ? value[0] : value;
+    if (typeof first === "string" && !(key in result)) result[key] = first;
+  }
+  return result;
+}

@@ -1,0 +1,163 @@
+import { expect, test, type Browser, type Page } from "@playwright/test";
+import { demo, openNewestMailTo, signIn } from "./support/auth";
+
+/** Seeded by lib/seed/demo-certification.ts: every quiz passed, no sign-off yet. */
+const carys = "carys@lantern-reach.example";
+const tinyPng = Buffer.from(
+  "iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==",
+  "base64",
+);
+const modules = [
+  { slug: "overall-length", title: "Measuring and setting the overall length" },
+  { slug: "setting-inboard", title: "Setting the inboard with the collar" },
+  { slug: "changing-boats", title: "Changing boats, span and overlap" },
+  { slug: "secure-and-check", title: "Securing and checking before you go afloat" },
+  { slug: "grip-cleaning", title: "Cleaning the grips" },
+];
+
+async function pageAs(browser: Browser, email: string): Promise<Page> {
+  const context = await browser.newContext();
+  const page = await context.newPage();
+  await signIn(page, email);
+  return page;
+}
+
+/** The coach opens the athlete's waiting sign-off from the queue and marks every item met. */
+async function signOffFromQueue(coach: Page, title: string, photo = false): Promise<string | null> {
+  await coach.goto("/roster/sign-offs");
+  await coach.getByRole("link", { name: new RegExp(`Carys Penhallow: ${title}`) }).click();
+  const form = coach.getByTestId("assessment-form");
+  await expect(form).toBeVisible();
+  const items = form.locator("fieldset");
+  const count = await items.count();
+  expect(count).toBeGreaterThanOrEqual(3);
+  for (let index = 0; index < count; index += 1) {
+    await items.nth(index).getByRole("radio", { name: "Met", exact: true }).check();
+  }
+  let photoUrl: string | null = null;
+  if (photo) {
+    await coach
+      .getByLabel("Photo evidence (optional)")
+      .setInputFiles({ name: "at-the-rack.png", mimeType: "image/png", buffer: tinyPng });
+    await expect(coach.getByTestId("photo-status")).toContainText("Photo 1 added");
+    photoUrl = await coach.getByRole("img", { name: "Evidence photo 1" }).getAttribute("src");
+  }
+  await expect(coach.getByTestId("assessment-outcome")).toContainText("Every item met");
+  await coach.getByRole("button", { name: "Record the sign-off" }).click();
+  await expect(coach.getByTestId("assessment-status")).toContainText(
+    /Signed off\. Certificate [A-Z]+-\d{4}-\d{4}/,
+  );
+  return photoUrl;
+}
+
+test.describe.configure({ mode: "serial" });
+
+test.describe("certification", () => {
+  let verifyPath = "";
+  let pdfPath = "";
+  let serial = "";
+
+  test("an athlete asks, a coach signs off with a photo, the certificate downloads and verifies as valid", async ({
+    browser,
+  }) => {
+    const athlete = await pageAs(browser, carys);
+    await athlete.goto("/learn/overall-length/practical");
+    await expect(athlete.getByTestId("practical-status")).toContainText("Quiz passed, practical to do");
+    await athlete.getByLabel("Which coach?").selectOption({ label: "Tobias Lindqvist" });
+    await athlete.getByRole("button", { name: "Ask for a sign-off" }).click();
+    await expect(athlete.getByTestId("request-sign-off-status")).toContainText("Asked");
+    await expect(athlete.getByTestId("practical-status")).toContainText("Waiting for sign-off");
+
+    const coach = await pageAs(browser, demo.coach);
+    const photoUrl = await signOffFromQueue(coach, modules[0]!.title, true);
+    expect(photoUrl).toMatch(/^\/api\/evidence\/[0-9a-f-]{36}$/);
+
+    await athlete.reload();
+    await expect(athlete.getByTestId("practical-status")).toContainText("Passed");
+    const download = athlete.getByTestId("certificate-download");
+    await expect(download).toContainText(/Download certificate [A-Z]+-\d{4}-\d{4}/);
+    pdfPath = (await download.getAttribute("href"))!;
+    serial = /([A-Z]+-\d{4}-\d{4})/.exec((await download.textContent()) ?? "")![1]!;
+    const pdf = await athlete.request.get(pdfPath);
+    expect(pdf.status()).toBe(200);
+    expect(pdf.headers()["content-type"]).toBe("application/pdf");
+    expect((await pdf.body()).subarray(0, 5).toString()).toBe("%PDF-");
+    const ownPhoto = await athlete.request.get(photoUrl!);
+    expect(ownPhoto.status()).toBe(200);
+    expect(ownPhoto.headers()["x-content-type-options"]).toBe("nosniff");
+
+    const checkLink = athlete.getByRole("link", { name: "Public check page" });
+    verifyPath = new URL((await checkLink.getAttribute("href"))!).pathname;
+    const visitor = await browser.newContext();
+    const anonymous = await visitor.newPage();
+    await anonymous.goto(verifyPath);
+    await expect(anonymous.getByTestId("verify-status")).toContainText("Valid");
+    await expect(anonymous.getByTestId("verify-details")).toContainText("Carys Penhallow");
+    await expect(anonymous.getByTestId("verify-details")).toContainText(modules[0]!.title);
+    const unknown = await anonymous.goto("/verify/AAAAAAAAAAAAAAAAAAAAAAAA");
+    expect(unknown?.status()).toBe(404);
+    await expect(anonymous.getByRole("heading", { level: 1 })).toHaveText("Not found");
+
+    const other = await pageAs(browser, demo.secondAthlete);
+    expect((await other.request.get(pdfPath)).status()).toBe(404);
+    expect((await other.request.get(photoUrl!)).status()).toBe(404);
+  });
+
+  test("the roster shows the athlete as cleared once every required module is signed off", async ({
+    browser,
+  }) => {
+    const athlete = await pageAs(browser, carys);
+    const coach = await pageAs(browser, demo.coach);
+    for (const entry of modules.slice(1)) {
+      const asked = await athlete.request.post("/api/sign-offs", {
+        data: { moduleSlug: entry.slug, coachId: null },
+      });
+      expect(asked.status()).toBe(201);
+      await signOffFromQueue(coach, entry.title);
+    }
+    await coach.goto("/roster");
+    await expect(coach.getByTestId("roster-table")).toBeVisible();
+    await coach.getByLabel("Show").selectOption({ label: "Cleared to rig unsupervised" });
+    const table = coach.getByTestId("roster-table");
+    await expect(table.getByRole("link", { name: "Carys Penhallow" })).toBeVisible();
+    await coach.getByLabel("Search by name").fill("carys");
+    await expect(table.locator("tbody tr")).toHaveCount(1);
+    await expect(table.locator("tbody tr").first()).toContainText("May rig unsupervised");
+    const csv = await coach.request.get("/api/roster/matrix/export?filter=cleared&q=carys");
+    expect(csv.headers()["content-type"]).toContain("text/csv");
+    expect(await csv.text()).toContain("Carys Penhallow");
+
+    await athlete.goto("/learn/certificates");
+    await expect(athlete.getByTestId("clearance-state")).toContainText("May rig unsupervised");
+    await expect(athlete.getByTestId("my-certificates")).toContainText("Rigging clearance");
+  });
+
+  test("an admin revokes the certificate and the public page says so", async ({ browser }) => {
+    const admin = await pageAs(browser, demo.admin);
+    const mail = await openNewestMailTo(admin, demo.coach);
+    expect(mail).toMatch(/Carys Penhallow passed the quiz/);
+    await admin.goto("/club/register");
+    await admin.getByLabel("Module").selectOption({ label: modules[0]!.title });
+    await admin.getByRole("button", { name: "Show" }).click();
+    await expect(admin).toHaveURL(/module=overall-length/);
+    const register = admin.getByTestId("register-table");
+    await expect(register).toContainText("Carys Penhallow");
+    await register.getByRole("link", { name: serial }).click();
+    await expect(admin.getByTestId("certificate-status")).toContainText("Valid");
+    await admin.getByLabel("Reason for revoking").fill("Recorded against the wrong module");
+    await admin.getByRole("button", { name: "Revoke certificate" }).click();
+    await expect(admin.getByTestId("revoke-status")).toContainText("Revoked");
+
+    const visitor = await browser.newContext();
+    const anonymous = await visitor.newPage();
+    await anonymous.goto(verifyPath);
+    await expect(anonymous.getByTestId("verify-status")).toContainText("Revoked");
+    await expect(anonymous.getByTestId("verify-details")).toContainText("Carys Penhallow");
+
+    const coach = await pageAs(browser, demo.coach);
+    await coach.goto("/roster");
+    await coach.getByLabel("Show").selectOption({ label: "Cleared to rig unsupervised" });
+    await coach.getByLabel("Search by name").fill("carys");
+    await expect(coach.getByTestId("roster-empty")).toBeVisible();
+  });
+});

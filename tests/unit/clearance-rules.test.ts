@@ -1,0 +1,226 @@
+import { describe, expect, it } from "vitest";
+import { addMonthsIso, daysUntil, formatLongDate, isoDateOf } from "@/lib/clearance/dates";
+import {
+  clearanceFor,
+  expiresWithin,
+  isPassCurrent,
+  latestPasses,
+  moduleStatus,
+  passExpiresOn,
+  signOffRequestProblem,
+  type ModulePass,
+} from "@/lib/clearance/rules";
+import { assessmentOutcome } from "@/lib/clearance/checklist";
+
+const required = ["overall-length", "setting-inboard"];
+
+function pass(moduleSlug: string, signedOffOn: string, months = 12): ModulePass {
+  return { moduleSlug, signedOffOn, expiresOn: passExpiresOn(signedOffOn, months) };
+}
+
+describe("dates", () => {
+  it("adds calendar months, clamping to the end of a shorter month", () => {
+    expect(addMonthsIso("2026-03-14", 12)).toBe("2027-03-14");
+    expect(addMonthsIso("2026-01-31", 1)).toBe("2026-02-28");
+    expect(addMonthsIso("2027-01-31", 13)).toBe("2028-02-29");
+    expect(addMonthsIso("2026-11-30", 3)).toBe("2027-02-28");
+    expect(addMonthsIso("2026-12-15", 1)).toBe("2027-01-15");
+    expect(() => addMonthsIso("2026-02-30", 1)).toThrow(RangeError);
+    expect(() => addMonthsIso("2026-02-01", 1.5)).toThrow(RangeError);
+  });
+
+  it("counts days and formats dates in UTC", () => {
+    expect(daysUntil("2026-12-31", "2027-01-30")).toBe(30);
+    expect(isoDateOf(new Date("2026-06-30T23:59:59Z"))).toBe("2026-06-30");
+    expect(formatLongDate("2027-03-14")).toBe("14 March 2027");
+  });
+});
+
+describe("a module pass", () => {
+  it("expires clearanceMonths after its sign-off day", () => {
+    expect(passExpiresOn("2026-03-14", 12)).toBe("2027-03-14");
+    expect(passExpiresOn("2026-03-14", 6)).toBe("2026-09-14");
+    expect(() => passExpiresOn("2026-03-14", 0)).toThrow(RangeError);
+  });
+
+  it("still counts the day before it expires and no longer on the expiry day (the boundary)", () => {
+    const held = pass("overall-length", "2026-03-14");
+    expect(isPassCurrent(held, "2026-03-14")).toBe(true);
+    expect(isPassCurrent(held, "2027-03-13")).toBe(true);
+    expect(isPassCurrent(held, "2027-03-14")).toBe(false);
+    expect(isPassCurrent(held, "2027-03-15")).toBe(false);
+    expect(isPassCurrent(held, "2026-03-13")).toBe(false);
+  });
+
+  it("keeps the longest-lasting pass of each module", () => {
+    const latest = latestPasses([
+      pass("overall-length", "2025-01-01"),
+      pass("overall-length", "2026-02-01"),
+      pass("setting-inboard", "2025-06-01"),
+    ]);
+    expect(latest.get("overall-length")?.signedOffOn).toBe("2026-02-01");
+    expect(latest.get("setting-inboard")?.signedOffOn).toBe("2025-06-01");
+  });
+});
+
+describe("clearance to rig unsupervised", () => {
+  const passes = [pass("overall-length", "2026-03-14"), pass("setting-inboard", "2026-05-02")];
+
+  it("holds when every required module has a current pass, and expires with the first pass to run out", () => {
+    const clearance = clearanceFor({
+      requiredModules: required,
+      passes,
+      suspension: null,
+      today: "2026-06-01",
+    });
+    expect(clearance).toMatchObject({
+      state: "cleared",
+      cleared: true,
+      expiresOn: "2027-03-14",
+      missingModules: [],
+      expiredModules: [],
+    });
+  });
+
+  it("holds on the day before the first expiry and not on the expiry day itself", () => {
+    expect(
+      clearanceFor({ requiredModules: required, passes, suspension: null, today: "2027-03-13" }).cleared,
+    ).toBe(true);
+    const onTheDay = clearanceFor({
+      requiredModules: required,
+      passes,
+      suspension: null,
+      today: "2027-03-14",
+    });
+    expect(onTheDay).toMatchObject({
+      state: "expired",
+      cleared: false,
+      expiredModules: ["overall-length"],
+      expiresOn: null,
+    });
+  });
+
+  it("does not hold while a required module is missing, whatever else is passed", () => {
+    const clearance = clearanceFor({
+      requiredModules: [...required, "grip-cleaning"],
+      passes: [...passes, pass("changing-boats", "2026-05-02")],
+      suspension: null,
+      today: "2026-06-01",
+    });
+    expect(clearance).toMatchObject({ state: "not-cleared", missingModules: ["grip-cleaning"] });
+  });
+
+  it("ignores passes of modules the club does not require", () => {
+    const clearance = clearanceFor({
+      requiredModules: ["setting-inboard"],
+      passes,
+      suspension: null,
+      today: "2027-04-01",
+    });
+    expect(clearance).toMatchObject({ state: "cleared", expiresOn: "2027-05-02" });
+  });
+
+  it("is suspended by a coach whatever the passes say", () => {
+    const suspension = { reason: "Collar left loose on the water", since: "2026-06-01" };
+    const clearance = clearanceFor({ requiredModules: required, passes, suspension, today: "2026-06-02" });
+    expect(clearance).toMatchObject({ state: "suspended", cleared: false, suspension });
+  });
+
+  it("clears nobody when the club requires no modules", () => {
+    expect(clearanceFor({ requiredModules: [], passes, suspension: null, today: "2026-06-01" }).state).toBe(
+      "not-cleared",
+    );
+  });
+
+  it("counts a pass signed off in the future as missing (clock skew never clears early)", () => {
+    expect(
+      clearanceFor({ requiredModules: required, passes, suspension: null, today: "2026-04-01" })
+        .missingModules,
+    ).toEqual(["setting-inboard"]);
+  });
+
+  it("says when it runs out within a window, counting the last day", () => {
+    const clearance = clearanceFor({
+      requiredModules: required,
+      passes,
+      suspension: null,
+      today: "2027-02-12",
+    });
+    expect(expiresWithin(clearance, "2027-02-12", 30)).toBe(true);
+    const earlier = clearanceFor({
+      requiredModules: required,
+      passes,
+      suspension: null,
+      today: "2027-02-11",
+    });
+    expect(expiresWithin(earlier, "2027-02-11", 30)).toBe(false);
+  });
+});
+
+describe("module status", () => {
+  const today = "2026-06-01";
+  const base = { latestPass: null, openRequest: false, latestDecision: null, today };
+
+  it("follows the quiz until the practical starts", () => {
+    expect(moduleStatus({ ...base, quizStage: "not-started" })).toBe("not-started");
+    expect(moduleStatus({ ...base, quizStage: "quiz-failed" })).toBe("quiz-failed");
+    expect(moduleStatus({ ...base, quizStage: "quiz-passed" })).toBe("ready-for-sign-off");
+  });
+
+  it("is passed only with the quiz passed and a current sign-off", () => {
+    const latestPass = pass("overall-length", "2026-02-01");
+    expect(moduleStatus({ ...base, quizStage: "quiz-passed", latestPass })).toBe("passed");
+    expect(moduleStatus({ ...base, quizStage: "quiz-passed", latestPass, today: "2027-02-01" })).toBe(
+      "expired",
+    );
+    expect(moduleStatus({ ...base, quizStage: "quiz-passed", openRequest: true })).toBe(
+      "waiting-for-sign-off",
+    );
+  });
+
+  it("shows the coach's 'not yet' until a later pass", () => {
+    const notYet = { outcome: "not-yet" as const, decidedOn: "2026-05-20" };
+    expect(moduleStatus({ ...base, quizStage: "quiz-passed", latestDecision: notYet })).toBe("not-yet");
+    expect(
+      moduleStatus({ ...base, quizStage: "quiz-passed", latestDecision: notYet, openRequest: true }),
+    ).toBe("waiting-for-sign-off");
+  });
+});
+
+describe("asking for a sign-off", () => {
+  const today = "2026-06-01";
+  it("needs a passed quiz and no open request", () => {
+    expect(signOffRequestProblem({ quizPassed: false, openRequest: false, latestPass: null, today })).toMatch(
+      /quiz first/,
+    );
+    expect(signOffRequestProblem({ quizPassed: true, openRequest: true, latestPass: null, today })).toMatch(
+      /already asked/,
+    );
+    expect(
+      signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass: null, today }),
+    ).toBeNull();
+  });
+
+  it("allows a renewal only in the last 30 days of a pass", () => {
+    const latestPass = pass("overall-length", "2025-07-01");
+    expect(
+      signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass, today: "2026-05-31" }),
+    ).toMatch(/renew/);
+    expect(
+      signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass, today: "2026-06-01" }),
+    ).toBeNull();
+  });
+});
+
+describe("checklist outcome", () => {
+  const checklist = [
+    { id: "a", label: "A" },
+    { id: "b", label: "B" },
+  ];
+  it("passes only when every item was met", () => {
+    expect(assessmentOutcome(checklist, { a: "met", b: "met" })).toBe("passed");
+    expect(assessmentOutcome(checklist, { a: "met", b: "not-yet" })).toBe("not-yet");
+    expect(assessmentOutcome(checklist, { a: "met" })).toBe("not-yet");
+    expect(assessmentOutcome([], {})).toBe("not-yet");
+  });
+});
