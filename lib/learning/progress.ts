@@ -1,13 +1,6 @@
 /** How far an athlete is with one module. */
 export type ModuleStage = "not-started" | "lesson-read" | "quiz-failed" | "quiz-passed";
 
-export const moduleStageLabels: Record<ModuleStage, string> = {
-  "not-started": "Not started",
-  "lesson-read": "Lesson read, quiz to do",
-  "quiz-failed": "Quiz not passed yet",
-  "quiz-passed": "Quiz passed",
-};
-
 export interface AttemptSummary {
   moduleSlug: string;
   score: number | null;

@@ -19,46 +19,47 @@ test.describe("members admin", () => {
     await expect(adminRow).toContainText("Your own account");
     await expect(adminRow.getByRole("button")).toHaveCount(0);
 
-    await page.getByLabel("Search members").fill("penhallow");
+    // Kit is a demo athlete no other spec signs in as.
+    await page.getByLabel("Search members").fill("abernethy");
     await expect(page.getByTestId("members-count")).toContainText("Showing 1 of");
     await expect(table.getByRole("row")).toHaveCount(2);
-    await expect(page.getByTestId("member-row-carys@lantern-reach.example")).toContainText("Never");
+    await expect(page.getByTestId("member-row-kit@lantern-reach.example")).toContainText("Never");
     await page.getByLabel("Search members").fill("coach");
     await expect(page.getByTestId("members-count")).toContainText("Showing 2 of");
   });
 
   test("deactivating asks first, then the signed-in athlete's next page load goes to sign-in", async ({ page, browser }) => {
-    const athlete = await signedInContext(browser, "carys@lantern-reach.example");
+    const athlete = await signedInContext(browser, "dev@lantern-reach.example");
     await athlete.page.goto("/learn");
     await expect(athlete.page.getByTestId("learn-page")).toBeVisible();
 
     await signIn(page, demo.admin);
     await page.goto("/club/members");
-    const row = page.getByTestId("member-row-carys@lantern-reach.example");
-    await row.getByRole("button", { name: "Deactivate Carys Penhallow" }).click();
-    const dialog = page.getByRole("dialog", { name: "Deactivate Carys Penhallow?" });
+    const row = page.getByTestId("member-row-dev@lantern-reach.example");
+    await row.getByRole("button", { name: "Deactivate Dev Castellano" }).click();
+    const dialog = page.getByRole("dialog", { name: "Deactivate Dev Castellano?" });
     await expect(dialog).toBeVisible();
     await expect(dialog.getByRole("button", { name: "Keep active" })).toBeFocused();
     await dialog.getByRole("button", { name: "Keep active" }).click();
     await expect(dialog).toBeHidden();
     await expect(row).toContainText("Active");
 
-    await row.getByRole("button", { name: "Deactivate Carys Penhallow" }).click();
+    await row.getByRole("button", { name: "Deactivate Dev Castellano" }).click();
     await page.keyboard.press("Escape");
     await expect(dialog).toBeHidden();
-    await row.getByRole("button", { name: "Deactivate Carys Penhallow" }).click();
+    await row.getByRole("button", { name: "Deactivate Dev Castellano" }).click();
     await dialog.getByRole("button", { name: "Deactivate member" }).click();
-    await expect(page.getByTestId("members-status")).toContainText("Carys Penhallow is deactivated");
+    await expect(page.getByTestId("members-status")).toContainText("Dev Castellano is deactivated");
     await expect(row).toContainText("Deactivated");
 
     await athlete.page.reload();
     await expect(athlete.page).toHaveURL(/\/sign-in\?callbackUrl=%2Flearn/);
     expect((await athlete.page.request.get("/api/roster")).status()).toBe(401);
 
-    await row.getByRole("button", { name: "Reactivate Carys Penhallow" }).click();
-    await expect(page.getByTestId("members-status")).toContainText("Carys Penhallow is active again");
-    await signIn(athlete.page, "carys@lantern-reach.example");
-    await expect(athlete.page.getByTestId("signed-in-as")).toContainText("Carys");
+    await row.getByRole("button", { name: "Reactivate Dev Castellano" }).click();
+    await expect(page.getByTestId("members-status")).toContainText("Dev Castellano is active again");
+    await signIn(athlete.page, "dev@lantern-reach.example");
+    await expect(athlete.page.getByTestId("signed-in-as")).toContainText("Dev");
     await athlete.context.close();
   });
 
