@@ -96,6 +96,7 @@ async function main(): Promise<void> {
   const serverLog = fs.createWriteStream(path.join(outDir, "server.log"));
   cleanups.push(() => new Promise<void>((resolve) => serverLog.end(resolve)));
   const started = Date.now();
+  const loadAtStart = os.loadavg()[0]!;
 
   if (skipBuild) {
     if (!fs.existsSync(path.join(root, ".next", "BUILD_ID"))) throw new Error("--no-build needs an existing build (.next/BUILD_ID)");
@@ -184,7 +185,8 @@ async function main(): Promise<void> {
   const markdown = [
     `# Slipway benchmark, ${date}`,
     "",
-    `Commit ${commit()} · ${machine()}. Machine shared with other work while it ran: figures are indicative.`,
+    `Commit ${commit()} · ${machine()} · 1-minute load average ${loadAtStart.toFixed(1)} at the start, ${os.loadavg()[0]!.toFixed(1)} at the end ` +
+      `(above ${os.cpus().length} means other work shared the cores and the figures are lower than the machine can do).`,
     "",
     `Data: the demo club plus ${dataset.athletes} invented athletes with history in all ${dataset.modules.length} modules ` +
       `(${dataset.lessonReads} lesson reads, ${dataset.submittedAttempts} submitted attempts; generated in ${dataset.seconds.toFixed(1)} s). ` +
