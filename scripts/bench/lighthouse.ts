@@ -19,11 +19,27 @@ interface NetworkRequestItem {
   transferSize?: number;
 }
 
+export interface LighthouseRun extends PageFigures {
+  finalUrl: string;
+}
+
 export interface LighthouseSession {
-  /** Lighthouse mobile (its default config: emulated phone, simulated slow 4G and 4× CPU), `runs` runs, median of each figure. */
-  /** With `saveReportTo`, the last run's full report (JSON) is written there, for a closer look. */
-  measure(url: string, cookie: string, runs: number, saveReportTo?: string): Promise<PageFigures & { finalUrls: string[] }>;
+  /**
+   * One Lighthouse mobile run (its default config: emulated phone, simulated slow 4G and 4× CPU slowdown).
+   * With `saveReportTo`, the full report (JSON) is written there, for a closer look.
+   */
+  run(url: string, cookie: string, saveReportTo?: string): Promise<LighthouseRun>;
   close(): Promise<void>;
+}
+
+/** The median of each figure over several runs of one page. */
+export function medianFigures(runs: readonly PageFigures[]): PageFigures {
+  return {
+    lcpMs: median(runs.map((r) => r.lcpMs)),
+    tbtMs: median(runs.map((r) => r.tbtMs)),
+    cls: median(runs.map((r) => r.cls)),
+    scriptBytes: median(runs.map((r) => r.scriptBytes)),
+  };
 }
 
 /** Launches one headless Chromium (chrome-launcher, as Lighthouse ships it) for every Lighthouse run of the bench. */
@@ -34,7 +50,7 @@ export async function openLighthouse(): Promise<LighthouseSession> {
   const chrome = await chromeLauncher.launch({ chromePath, chromeFlags, logLevel: "silent", handleSIGINT: false });
 
   let closed = false;
-  const runOnce = async (url: string, cookie: string, saveReportTo?: string): Promise<PageFigures & { finalUrl: string }> => {
+  const runOnce = async (url: string, cookie: string, saveReportTo?: string): Promise<LighthouseRun> => {
     const result = await lighthouse(url, {
       port: chrome.port,
       output: "json",
@@ -65,17 +81,7 @@ export async function openLighthouse(): Promise<LighthouseSession> {
   };
 
   return {
-    async measure(url, cookie, runs, saveReportTo) {
-      const all: (PageFigures & { finalUrl: string })[] = [];
-      for (let run = 0; run < runs; run += 1) all.push(await runOnce(url, cookie, run === runs - 1 ? saveReportTo : undefined));
-      return {
-        lcpMs: median(all.map((r) => r.lcpMs)),
-        tbtMs: median(all.map((r) => r.tbtMs)),
-        cls: median(all.map((r) => r.cls)),
-        scriptBytes: median(all.map((r) => r.scriptBytes)),
-        finalUrls: [...new Set(all.map((r) => r.finalUrl))],
-      };
-    },
+    run: runOnce,
     async close() {
       if (closed) return;
       closed = true;

@@ -1,29 +1,41 @@
 import { join } from "node:path";
-import type { PageFigures } from "../lighthouse";
+import { medianFigures, type LighthouseRun, type PageFigures } from "../lighthouse";
 import { fixed, signed, type Row } from "../stats";
 import type { BenchContext } from "./context";
 
 const kb = 1024;
 
-async function figuresFor(context: BenchContext, path: string, label: string, reportName: string): Promise<PageFigures> {
-  const session = await context.lighthouse();
-  context.log(`Lighthouse mobile, ${context.lighthouseRuns} runs: ${label} (${path})`);
-  const report = join(context.outDir, `lighthouse-${reportName}.json`);
-  const figures = await session.measure(`${context.baseUrl}${path}`, context.athleteCookie, context.lighthouseRuns, report);
-  const landed = figures.finalUrls.map((url) => new URL(url).pathname);
-  if (landed.some((pathname) => pathname !== path)) {
-    throw new Error(`Lighthouse on ${path} ended at ${landed.join(", ")}: the session cookie was not accepted`);
-  }
-  return { lcpMs: figures.lcpMs, tbtMs: figures.tbtMs, cls: figures.cls, scriptBytes: figures.scriptBytes };
+interface PageUnderTest {
+  key: "lesson" | "staticLesson" | "minimal";
+  path: string;
+  runs: LighthouseRun[];
 }
 
-/** Lighthouse on the three pages, once per bench run (all signed in as the same demo athlete). */
+/**
+ * Lighthouse on the three pages, all signed in as the same demo athlete, once per bench run. The pages
+ * take turns (lesson, static, minimal, lesson, …) so that other work on a shared machine weighs on each
+ * of them alike; each figure is the median of its page's runs.
+ */
 function pages(context: BenchContext) {
   context.memo.pages ??= (async () => {
-    const lesson = await figuresFor(context, context.lessonPath, "lesson page", "lesson");
-    const staticLesson = await figuresFor(context, context.staticLessonPath, "static page with the lesson's text", "static");
-    const minimal = await figuresFor(context, context.minimalPath, "minimal app page", "minimal");
-    context.raw.pages = { lesson, staticLesson, minimal };
+    const session = await context.lighthouse();
+    const underTest: PageUnderTest[] = [
+      { key: "lesson", path: context.lessonPath, runs: [] },
+      { key: "staticLesson", path: context.staticLessonPath, runs: [] },
+      { key: "minimal", path: context.minimalPath, runs: [] },
+    ];
+    for (let round = 1; round <= context.lighthouseRuns; round += 1) {
+      context.log(`Lighthouse mobile, round ${round} of ${context.lighthouseRuns}: ${underTest.map((page) => page.path).join(", ")}`);
+      for (const page of underTest) {
+        const report = round === context.lighthouseRuns ? join(context.outDir, `lighthouse-${page.key}.json`) : undefined;
+        const run = await session.run(`${context.baseUrl}${page.path}`, context.athleteCookie, report);
+        const landed = new URL(run.finalUrl).pathname;
+        if (landed !== page.path) throw new Error(`Lighthouse on ${page.path} ended at ${landed}: the session cookie was not accepted`);
+        page.runs.push(run);
+      }
+    }
+    const [lesson, staticLesson, minimal] = underTest.map((page) => medianFigures(page.runs)) as [PageFigures, PageFigures, PageFigures];
+    context.raw.pages = Object.fromEntries(underTest.map((page) => [page.key, page.runs]));
     return { lesson, staticLesson, minimal };
   })();
   return context.memo.pages;
