@@ -93,6 +93,9 @@ function machine(): string {
 async function main(): Promise<void> {
   const skipBuild = process.argv.includes("--no-build");
   fs.mkdirSync(outDir, { recursive: true });
+  for (const file of fs.readdirSync(outDir)) {
+    if (/^lighthouse-.*\.json$/.test(file)) fs.rmSync(path.join(outDir, file)); // reports of an earlier run
+  }
   const serverLog = fs.createWriteStream(path.join(outDir, "server.log"));
   cleanups.push(() => new Promise<void>((resolve) => serverLog.end(resolve)));
   const started = Date.now();
