@@ -1,20 +1,33 @@
 import "server-only";
 import { cache } from "react";
-import { getServerSession } from "next-auth";
+import { cookies } from "next/headers";
+import { getToken } from "next-auth/jwt";
 import { forbidden, redirect } from "next/navigation";
-import { authOptions } from "@/lib/auth/options";
+import { authSecret, ensureAuthUrl } from "@/lib/env";
 import { sessionUserById } from "@/lib/data/users";
 import { assertSignedIn, canEnterArea, type Actor, type Area } from "@/lib/auth/permissions";
+
+type TokenRequest = Parameters<typeof getToken>[0]["req"];
 
 /**
  * The signed-in user for this request, checked against the database every time: a deactivated user or
  * one whose role changed (token version bumped) is treated as signed out on their next request.
+ *
+ * It only decodes the session cookie (next-auth's getToken, which also joins chunked cookies) rather than
+ * calling getServerSession, which decodes and re-encodes the JWT on every call: the benchmark showed that
+ * costing about 15% of an API request. Sessions are not extended on use; they last their 12 hours.
  */
 export const currentActor = cache(async (): Promise<Actor | null> => {
-  const session = await getServerSession(authOptions());
-  const claims = session?.user;
-  if (!claims?.id || typeof claims.tokenVersion !== "number") return null;
-  const user = await sessionUserById(claims.id, claims.tokenVersion);
+  ensureAuthUrl();
+  const jar = await cookies();
+  const request = { cookies: Object.fromEntries(jar.getAll().map((cookie) => [cookie.name, cookie.value])), headers: {} };
+  const claims = await getToken({
+    req: request as unknown as TokenRequest,
+    secret: authSecret(),
+    secureCookie: (process.env.NEXTAUTH_URL ?? "").startsWith("https://"),
+  });
+  if (!claims?.uid || typeof claims.tokenVersion !== "number") return null;
+  const user = await sessionUserById(claims.uid, claims.tokenVersion);
   if (!user) return null;
   return { id: user.id, clubId: user.clubId, role: user.role, name: user.name, email: user.email };
 });

@@ -29,9 +29,13 @@ export async function clubOf(actor: Actor): Promise<ClubSummary> {
 export async function listClubMembers(actor: Actor, role?: Role): Promise<MemberSummary[]> {
   await databaseReady();
   assertAllowed(isCoach(actor), "Only coaches and administrators can list members.");
+  // Plain rows with only the columns shown: building model instances for a 1,000-athlete club cost
+  // four times the query itself in the benchmark.
   const users = await User.findAll({
     where: { clubId: actor.clubId, ...(role ? { role } : {}) },
+    attributes: ["id", "name", "email", "role", "status", "lastSignInAt"],
     order: [["name", "ASC"]],
+    raw: true,
   });
   return users.map((user) => ({
     id: user.id,
@@ -39,6 +43,6 @@ export async function listClubMembers(actor: Actor, role?: Role): Promise<Member
     email: user.email,
     role: user.role,
     status: user.status,
-    lastSignInAt: user.lastSignInAt?.toISOString() ?? null,
+    lastSignInAt: user.lastSignInAt ? new Date(user.lastSignInAt).toISOString() : null,
   }));
 }

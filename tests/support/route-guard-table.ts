@@ -133,6 +133,13 @@ export const routeGuardRows: RouteGuardRow[] = [
     why: "Without next-auth's CSRF token a sign-in is sent back to the sign-in page, for everyone.",
   },
   {
+    file: "app/api/bench/ping/route.ts",
+    method: "GET",
+    request: () => ({ path: "/api/bench/ping" }),
+    expect: all(200),
+    why: "Public and static ({ ok: true }, no database, session or input): the benchmark's baseline route.",
+  },
+  {
     file: "app/api/health/route.ts",
     method: "GET",
     request: () => ({ path: "/api/health" }),
