@@ -5,7 +5,7 @@ import { installNextHeadersStandIn, withRequest } from "@/tests/support/request-
 import { callRoute, sessionCookieFor } from "@/tests/support/call-route";
 import { testOrigin } from "@/tests/support/auth-handler";
 import { actionFiles, missingGuardRows, paramsFor, projectRoot, routeFiles } from "@/tests/support/route-files";
-import { actionGuardRows, guardRoles, routeGuardRows, type GuardFixtures, type GuardRole } from "@/tests/support/route-guard-table";
+import { actionGuardRows, guardRoles, routeGuardRows, tinyPngBase64, type GuardFixtures, type GuardRequest, type GuardRole } from "@/tests/support/route-guard-table";
 
 vi.mock("next/headers", async () => (await import("@/tests/support/request-scope")).nextHeadersStandIn);
 vi.mock("next/cache", () => ({ revalidatePath: () => undefined, revalidateTag: () => undefined }));
@@ -31,8 +31,12 @@ const { databaseReady } = await import("@/lib/data/database");
 const { seedDemoClub, demoPassword } = await import("@/lib/seed/demo-club");
 const { seedSecondClub, secondClubPassword } = await import("@/lib/seed/second-club");
 const { seedDemoFleet } = await import("@/lib/seed/demo-fleet");
+const { seedDemoCertification } = await import("@/lib/seed/demo-certification");
 const { AppError } = await import("@/lib/http/errors");
-const { Boat, BoatOarSet, Club, OarSet, User } = await import("@/models");
+const { readClubSettings } = await import("@/lib/validations/club-settings");
+const { settingsToForm } = await import("@/lib/validations/club-settings-form");
+const { Boat, BoatOarSet, Certificate, ClearanceSuspension, Club, EvidencePhoto, OarSet, PracticalAssessment, User } = await import("@/models");
+const evidenceUpload = await import("@/app/api/sign-offs/[id]/evidence/route");
 
 const accounts: Record<Exclude<GuardRole, "anonymous">, [string, string]> = {
   athlete: ["ada@lantern-reach.example", demoPassword],
@@ -43,7 +47,9 @@ const accounts: Record<Exclude<GuardRole, "anonymous">, [string, string]> = {
   otherAdmin: ["admin@brackwater.example", secondClubPassword],
 };
 const cookies = {} as Record<GuardRole, string | undefined>;
-let home: Omit<GuardFixtures, "tag"> = { homeAthleteId: 0, homeBoatId: 0, homeOarSetId: 0 };
+let home = {} as Omit<GuardFixtures, "tag">;
+/** The seeded settings form of the home club, to compare with after every row (the fleet rows add race days). */
+let homeSettingsBefore: unknown;
 let calls = 0;
 
 function fixtures(): GuardFixtures {
@@ -51,21 +57,59 @@ function fixtures(): GuardFixtures {
   return { ...home, tag: `int${calls}` };
 }
 
+function fileForm(file: NonNullable<GuardRequest["file"]>): FormData {
+  const form = new FormData();
+  form.set(file.field, new File([new Uint8Array(Buffer.from(file.base64, "base64"))], file.name, { type: file.type }));
+  return form;
+}
+
+async function homeUser(email: string) {
+  return (await User.findOne({ where: { email: `${email}@lantern-reach.example` } }))!;
+}
+
+async function waitingSignOff(athleteId: number, moduleSlug: string): Promise<string> {
+  return (await PracticalAssessment.findOne({ where: { athleteId, moduleSlug, status: "waiting" } }))!.id;
+}
+
+/** A photo added by the coach through the upload route, as the e2e harness does: the seed has none. */
+async function uploadEvidence(signOffId: string): Promise<string> {
+  const response = await callRoute(evidenceUpload.POST, {
+    method: "POST",
+    path: `/api/sign-offs/${signOffId}/evidence`,
+    params: { id: signOffId },
+    cookie: cookies.coach,
+    body: fileForm({ field: "file", name: "fixture.png", type: "image/png", base64: tinyPngBase64 }),
+  });
+  expect(response.status, await response.clone().text()).toBe(201);
+  return ((await response.json()) as { id: string }).id;
+}
+
 beforeAll(async () => {
   await databaseReady();
   await seedDemoClub(getSequelize());
   await seedSecondClub(getSequelize());
   await seedDemoFleet(getSequelize());
-  const athlete = (await User.findOne({ where: { email: "lena@lantern-reach.example" } }))!;
-  home = {
-    homeAthleteId: athlete.id,
-    homeBoatId: (await Boat.findOne({ where: { clubId: athlete.clubId, name: "Heron" } }))!.id,
-    homeOarSetId: (await OarSet.findOne({ where: { clubId: athlete.clubId, name: "Short-loom sculls" } }))!.id,
-  };
+  await seedDemoCertification(getSequelize());
   cookies.anonymous = undefined;
   for (const [role, [email, password]] of Object.entries(accounts)) {
     cookies[role as GuardRole] = await sessionCookieFor(email, password);
   }
+  const [athlete, hamish, iris, elin, jonah] = await Promise.all(["lena", "hamish", "iris", "elin", "jonah"].map(homeUser));
+  const certificate = (await Certificate.findOne({ where: { athleteId: iris!.id, kind: "module", moduleSlug: "overall-length" } }))!;
+  const elinSignOff = await waitingSignOff(elin!.id, "changing-boats");
+  home = {
+    homeAthleteId: athlete!.id,
+    homeBoatId: (await Boat.findOne({ where: { clubId: athlete!.clubId, name: "Heron" } }))!.id,
+    homeOarSetId: (await OarSet.findOne({ where: { clubId: athlete!.clubId, name: "Short-loom sculls" } }))!.id,
+    homeSuspendedAthleteId: hamish!.id,
+    homeCertificateId: certificate.id,
+    homeVerificationCode: certificate.verificationCode,
+    homeWaitingSignOffId: await waitingSignOff(jonah!.id, "grip-cleaning"),
+    homeDecidedSignOffId: (await PracticalAssessment.findOne({ where: { athleteId: iris!.id, moduleSlug: "setting-inboard", status: "not-yet" } }))!.id,
+    homeEvidenceId: await uploadEvidence(elinSignOff),
+    spareEvidenceIds: [await uploadEvidence(elinSignOff), await uploadEvidence(elinSignOff)],
+  };
+  homeSettingsBefore = settingsToForm(readClubSettings((await Club.findByPk(athlete!.clubId))!.settings));
 });
 
 afterAll(async () => {
@@ -98,7 +142,7 @@ describe("the route-guard table", () => {
 describe.each(routeGuardRows.map((row) => [`${row.method} ${row.file}`, row] as const))("%s", (_label, row) => {
   it.each(guardRoles.map((role) => [role, row.expect[role]] as const))("as %s answers %i", async (role, status) => {
     const handlers = (await import(/* @vite-ignore */ path.join(projectRoot, row.file))) as Record<string, unknown>;
-    const request = row.request(fixtures());
+    const request = row.request(fixtures(), role);
     const response = await callRoute(handlers[row.method], {
       method: row.method,
       path: request.path,
@@ -109,6 +153,7 @@ describe.each(routeGuardRows.map((row) => [`${row.method} ${row.file}`, row] as 
       json: request.json,
       ...(request.form ? { body: new URLSearchParams(request.form).toString(), contentType: "application/x-www-form-urlencoded" } : {}),
       ...(request.text ? { body: request.text.body, contentType: request.text.contentType } : {}),
+      ...(request.file ? { body: fileForm(request.file) } : {}),
     });
     const body = await response.text();
     expect(response.status, body.slice(0, 300)).toBe(status);
@@ -168,5 +213,22 @@ describe("after every row", () => {
     expect(links.map((link) => link.boatId)).toEqual([home.homeBoatId]);
     const club = (await Club.findByPk(boat.clubId))!;
     expect((club.settings as { humidSpell?: boolean }).humidSpell ?? false).toBe(false);
+  });
+
+  it("has left the certification records as they were seeded, less the two spare photos", async () => {
+    const certificate = (await Certificate.findByPk(home.homeCertificateId))!;
+    expect(certificate.revokeReason).toBe("Recorded against the wrong athlete; to be observed again.");
+    expect(await ClearanceSuspension.count({ where: { athleteId: home.homeSuspendedAthleteId, liftedAt: null } })).toBe(1);
+    expect(await ClearanceSuspension.count({ where: { athleteId: home.homeAthleteId } })).toBe(0);
+    expect((await PracticalAssessment.findByPk(home.homeDecidedSignOffId))!.status).toBe("not-yet");
+    expect((await PracticalAssessment.findByPk(home.homeWaitingSignOffId))!.status).toBe("waiting");
+    const elinSignOff = (await EvidencePhoto.findByPk(home.homeEvidenceId))!.assessmentId;
+    expect((await PracticalAssessment.findByPk(elinSignOff))!.status).toBe("waiting");
+    expect((await EvidencePhoto.findAll({ where: { assessmentId: elinSignOff } })).map((photo) => photo.id)).toEqual([home.homeEvidenceId]);
+    // The upload row's two photos (the coach's and the admin's).
+    expect(await EvidencePhoto.count({ where: { assessmentId: home.homeWaitingSignOffId } })).toBe(2);
+    const club = (await Club.findByPk(certificate.clubId))!;
+    expect(club.logoFile ?? null).toBeNull();
+    expect(settingsToForm(readClubSettings(club.settings))).toEqual(homeSettingsBefore);
   });
 });

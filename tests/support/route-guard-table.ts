@@ -19,11 +19,28 @@ export type Expected = Record<GuardRole, number>;
 /**
  * Values the requests may use: home-club records to aim at, and a tag unique to each call. The boat is the
  * demo fleet's Heron (1x) and the oar set its Short-loom sculls (lib/seed/demo-fleet.ts), linked to Heron only.
+ * The certification records come from lib/seed/demo-certification.ts; the seed has no evidence photos, so
+ * both harnesses add three (as the coach, through POST /api/sign-offs/[id]/evidence) before the rows run.
  */
 export interface GuardFixtures {
+  /** Lena Fairbrother: an athlete whose clearance is not suspended. */
   homeAthleteId: number;
   homeBoatId: number;
   homeOarSetId: number;
+  /** Hamish Oyelaran: the seed suspended his clearance. */
+  homeSuspendedAthleteId: number;
+  /** Iris Delacourt's "overall-length" module certificate, which the seed revoked (her only certificate). */
+  homeCertificateId: string;
+  /** That certificate's public verification code. */
+  homeVerificationCode: string;
+  /** Jonah Treloar's waiting "grip-cleaning" sign-off, asked of any coach: the evidence upload row adds to it. */
+  homeWaitingSignOffId: string;
+  /** Iris Delacourt's "setting-inboard" sign-off, already recorded as "not yet". */
+  homeDecidedSignOffId: string;
+  /** A photo on Elin Marchetti's waiting "changing-boats" sign-off that the rows only read. */
+  homeEvidenceId: string;
+  /** Two more photos on that sign-off: the coach removes the first, the admin the second. */
+  spareEvidenceIds: [string, string];
   tag: string;
 }
 
@@ -34,13 +51,16 @@ export interface GuardRequest {
   form?: Record<string, string>;
   /** A raw body with its content type, e.g. a CSV upload. */
   text?: { body: string; contentType: string };
+  /** One file sent as multipart/form-data under `field` (bytes as base64, so the table stays plain data). */
+  file?: { field: string; name: string; type: string; base64: string };
 }
 
 export interface RouteGuardRow {
   /** The route file, relative to the project root. */
   file: string;
   method: "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
-  request: (fixtures: GuardFixtures) => GuardRequest;
+  /** The request one role sends; most rows send every role the same one. */
+  request: (fixtures: GuardFixtures, role: GuardRole) => GuardRequest;
   expect: Expected;
   /** Text that must not appear in any answer given to the other club's members. */
   hiddenFromOtherClub?: string;
@@ -94,6 +114,19 @@ const homeCoachOnRecord: Expected = { anonymous: 401, athlete: 403, otherAthlete
 function homeMembersOnRecord(ok: number): Expected {
   return { anonymous: 401, athlete: ok, otherAthlete: 404, coach: ok, otherCoach: 404, admin: ok, otherAdmin: 404 };
 }
+
+/**
+ * Coaches and admins using one home-club athlete's own record (a certificate, sign-off, photo or clearance),
+ * with `ok` as the success status. Athletes see only their own records, so another athlete's is not found
+ * for them (the home-club athlete too, as tests/integration/certification.test.ts checks); the other club's
+ * coach and admin are told it does not exist.
+ */
+function homeStaffOnAthleteRecord(ok: number): Expected {
+  return { anonymous: 401, athlete: 404, otherAthlete: 404, coach: ok, otherCoach: 404, admin: ok, otherAdmin: 404 };
+}
+
+/** A 1×1 PNG: a valid club logo and evidence photo. */
+export const tinyPngBase64 = "iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==";
 
 /** A YYYY-MM-DD day `offset` days from today in this machine's time zone (as the server's localIsoDate reads it). */
 function localDay(offset: number): string {
@@ -236,6 +269,137 @@ routeGuardRows.push(
     why: "Each coach sees their own club's saved plans only; the POST row before this one has just saved home-club plans for Heron.",
   },
 );
+
+const tinyPngFile = { field: "file", name: "guard.png", type: "image/png", base64: tinyPngBase64 };
+
+routeGuardRows.push(
+  {
+    file: "app/api/certificates/[id]/pdf/route.ts",
+    method: "GET",
+    request: ({ homeCertificateId }) => ({ path: `/api/certificates/${homeCertificateId}/pdf` }),
+    expect: homeStaffOnAthleteRecord(200),
+    why: "A certificate's PDF is for its athlete and the coaches and admins of their club. Iris's revoked certificate (the PDF says so): reading it changes nothing.",
+  },
+  {
+    file: "app/api/verify/[code]/route.ts",
+    method: "GET",
+    request: ({ homeVerificationCode }) => ({ path: `/api/verify/${homeVerificationCode}` }),
+    expect: all(200),
+    why: "Public: anyone holding the code may check the certificate (this one answers that it is revoked); an unknown code is 404 for everyone.",
+  },
+  {
+    file: "app/api/club/logo/route.ts",
+    method: "POST",
+    request: () => ({ path: "/api/club/logo", file: tinyPngFile }),
+    expect: adminsOwnClub(201),
+    why: "Admins upload their own club's logo (sniffed PNG or JPEG). The GET row after this reads it and the DELETE row after that removes it, so both clubs end with no logo, as seeded.",
+  },
+  {
+    file: "app/api/club/logo/route.ts",
+    method: "GET",
+    request: () => ({ path: "/api/club/logo" }),
+    expect: members(200),
+    why: "Every member sees their own club's logo: the POST row before this one has just set one for each club (with none it is 404).",
+  },
+  {
+    file: "app/api/club/logo/route.ts",
+    method: "DELETE",
+    request: () => ({ path: "/api/club/logo" }),
+    expect: adminsOwnClub(204),
+    why: "Admins remove their own club's logo: takes away the one the POST row set, back to none as seeded.",
+  },
+  {
+    file: "app/api/sign-offs/[id]/evidence/route.ts",
+    method: "POST",
+    request: ({ homeWaitingSignOffId }) => ({ path: `/api/sign-offs/${homeWaitingSignOffId}/evidence`, file: tinyPngFile }),
+    expect: homeStaffOnAthleteRecord(201),
+    why: "Coaches and admins of the athlete's club add a photo to a waiting sign-off (checked before the body is read). Two photos a run, under the limit of three; nothing is signed off.",
+  },
+  {
+    file: "app/api/evidence/[id]/route.ts",
+    method: "GET",
+    request: ({ homeEvidenceId }) => ({ path: `/api/evidence/${homeEvidenceId}` }),
+    expect: homeStaffOnAthleteRecord(200),
+    why: "A sign-off photo is for its athlete and the coaches and admins of their club only.",
+  },
+  {
+    file: "app/api/evidence/[id]/route.ts",
+    method: "DELETE",
+    // The coach and the admin each remove a photo of their own; everyone else aims at the one that stays,
+    // so no refusal can pass just because an earlier call already removed the photo.
+    request: ({ homeEvidenceId, spareEvidenceIds }, role) => ({
+      path: `/api/evidence/${role === "coach" ? spareEvidenceIds[0] : role === "admin" ? spareEvidenceIds[1] : homeEvidenceId}`,
+    }),
+    expect: homeStaffOnAthleteRecord(204),
+    why: "Coaches and admins of the athlete's club remove a photo from a waiting sign-off: only the two spare photos the harness added go.",
+  },
+  {
+    file: "app/api/sign-offs/route.ts",
+    method: "GET",
+    request: () => ({ path: "/api/sign-offs" }),
+    expect: coachesOfAnyClub,
+    hiddenFromOtherClub: "Jonah Treloar",
+    why: "Each coach sees the sign-offs their own club's athletes wait for.",
+  },
+  {
+    file: "app/api/sign-offs/route.ts",
+    method: "POST",
+    request: () => ({ path: "/api/sign-offs", json: { moduleSlug: "grip-cleaning", coachId: null } }),
+    expect: members(409),
+    why: "Any member asks for their own sign-off only. None of the callers has passed the grip-cleaning quiz, so each is told to pass it first (409) after every guard: nothing is asked.",
+  },
+  {
+    file: "app/api/roster/matrix/route.ts",
+    method: "GET",
+    request: () => ({ path: "/api/roster/matrix" }),
+    expect: coachesOfAnyClub,
+    hiddenFromOtherClub: "@lantern-reach.example",
+    why: "Each coach sees their own club's athletes × modules only.",
+  },
+  {
+    file: "app/api/roster/matrix/export/route.ts",
+    method: "GET",
+    request: () => ({ path: "/api/roster/matrix/export?filter=all" }),
+    expect: coachesOfAnyClub,
+    hiddenFromOtherClub: "@lantern-reach.example",
+    why: "The roster as CSV: each coach's own club only.",
+  },
+  {
+    file: "app/api/register/csv/route.ts",
+    method: "GET",
+    request: () => ({ path: "/api/register/csv" }),
+    expect: adminsOwnClub(200),
+    hiddenFromOtherClub: "Lena Fairbrother",
+    why: "Each admin downloads their own club's induction register (the other club's is empty).",
+  },
+  {
+    file: "app/api/register/pdf/route.ts",
+    method: "GET",
+    request: () => ({ path: "/api/register/pdf" }),
+    expect: adminsOwnClub(200),
+    why: "Each admin prints their own club's induction register (the CSV row checks which club's entries it holds).",
+  },
+);
+
+/** The club settings form as every club starts (lib/validations/club-settings.ts defaults); neither club changes them. */
+const settingsAsSeeded = {
+  passMarkPercent: 80,
+  clickCm: 0.5,
+  halfSwivelCm: 2,
+  clearanceModules: ["overall-length", "setting-inboard", "changing-boats", "secure-and-check", "grip-cleaning"],
+  clearanceMonths: 12,
+  limits: {
+    sculling: { minLengthCm: 280, maxLengthCm: 292, minInboardCm: 85, maxInboardCm: 91 },
+    sweep: { minLengthCm: 366, maxLengthCm: 380, minInboardCm: 112, maxInboardCm: 120 },
+  },
+};
+
+/** Verdicts for "setting-inboard"'s checklist (content/modules/setting-inboard.mdx): valid, and a "not yet". */
+const settingInboardVerdicts = {
+  items: { "measures-from-collar-face": "met", "plans-clicks": "not-yet", "seats-and-tightens": "met", "checks-inboard": "met" },
+  note: "Guard row: count the clicks first.",
+  evidenceIds: [],
+};
 
 export const actionGuardRows: ActionGuardRow[] = [
   {
@@ -398,5 +562,43 @@ actionGuardRows.push(
     input: ({ homeOarSetId }) => ({ oarSetId: homeOarSetId, cleanedOn: localDay(0), method: "wipe-down" }),
     expect: homeMembersOnRecord(200),
     why: "Any member records a cleaning of their own club's oar set (adds a record for today); the other club's members are told the set does not exist.",
+  },
+);
+
+actionGuardRows.push(
+  {
+    file: "app/(club)/club/register/[id]/actions.ts",
+    action: "revokeCertificateAction",
+    args: ({ homeCertificateId }) => [homeCertificateId, { reason: "Guard row: already revoked." }],
+    expect: { anonymous: 401, athlete: 403, otherAthlete: 404, coach: 403, otherCoach: 404, admin: 409, otherAdmin: 404 },
+    why: "Admins revoke their own club's certificates. Iris's is revoked already, so the admin passes every guard and is told so (409): nothing changes. The home club's athlete and coach may not (403); the other club's members are told it does not exist.",
+  },
+  {
+    file: "app/(club)/club/settings/actions.ts",
+    action: "saveClubSettingsAction",
+    input: () => settingsAsSeeded,
+    expect: adminsOwnClub(200),
+    why: "Each admin saves their own club's settings with the values it already has: passes every guard, nothing changes.",
+  },
+  {
+    file: "app/(coach)/roster/athletes/[id]/actions.ts",
+    action: "suspendClearanceAction",
+    args: ({ homeSuspendedAthleteId }) => [homeSuspendedAthleteId, { reason: "Guard row: already suspended." }],
+    expect: homeStaffOnAthleteRecord(409),
+    why: "Coaches and admins of the athlete's club suspend a clearance. Hamish's is suspended already, so they pass every guard and are told so (409): nothing changes.",
+  },
+  {
+    file: "app/(coach)/roster/athletes/[id]/actions.ts",
+    action: "liftSuspensionAction",
+    args: ({ homeAthleteId }) => [homeAthleteId, { note: "" }],
+    expect: homeStaffOnAthleteRecord(409),
+    why: "Coaches and admins of the athlete's club lift a suspension. Lena's clearance is not suspended, so they pass every guard and are told so (409): nothing changes.",
+  },
+  {
+    file: "app/(coach)/roster/sign-offs/[id]/actions.ts",
+    action: "recordAssessmentAction",
+    args: ({ homeDecidedSignOffId }) => [homeDecidedSignOffId, settingInboardVerdicts],
+    expect: homeStaffOnAthleteRecord(409),
+    why: "Coaches and admins of the athlete's club (never the athlete) record a sign-off. Iris's was recorded already, so valid verdicts pass every guard and are told so (409): nothing is signed off.",
   },
 );
