@@ -1,17 +1,11 @@
 import type { Sequelize } from "sequelize";
-import { hashPassword } from "@/lib/auth/password";
-import type { Role } from "@/lib/auth/roles";
-import { initModels, Club, User } from "@/models";
+import { seedClubMembers, type SeedMember } from "@/lib/seed/club-members";
 
 /** Invented demo data only: no real club or person. */
 export const demoClub = { name: "Lantern Reach Rowing Club", slug: "lantern-reach" };
 export const demoPassword = "lantern-reach-demo";
 
-export interface DemoMember {
-  email: string;
-  name: string;
-  role: Role;
-}
+export type DemoMember = SeedMember;
 
 export const demoMembers: DemoMember[] = [
   { email: "admin@lantern-reach.example", name: "Maren Okafor", role: "admin" },
@@ -31,24 +25,7 @@ export const demoMembers: DemoMember[] = [
   { email: "lena@lantern-reach.example", name: "Lena Fairbrother", role: "athlete" },
 ];
 
-/**
- * Creates the demo club and its members when they are missing; running it again changes nothing
- * (members are matched by e-mail, so a demo password someone changed is kept).
- */
-export async function seedDemoClub(sequelize: Sequelize): Promise<{ created: number }> {
-  initModels(sequelize);
-  const passwordHash = await hashPassword(demoPassword);
-  return sequelize.transaction(async (transaction) => {
-    const [club] = await Club.findOrCreate({ where: { slug: demoClub.slug }, defaults: { ...demoClub, settings: {} }, transaction });
-    let created = 0;
-    for (const member of demoMembers) {
-      const [, wasCreated] = await User.findOrCreate({
-        where: { email: member.email },
-        defaults: { ...member, clubId: club.id, passwordHash },
-        transaction,
-      });
-      if (wasCreated) created += 1;
-    }
-    return { created };
-  });
+/** Creates the demo club and its members when they are missing (idempotent). */
+export function seedDemoClub(sequelize: Sequelize): Promise<{ created: number }> {
+  return seedClubMembers(sequelize, demoClub, demoMembers, demoPassword);
 }

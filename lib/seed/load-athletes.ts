@@ -1,6 +1,5 @@
 import type { Sequelize } from "sequelize";
-import { hashPassword } from "@/lib/auth/password";
-import { initModels, Club, User } from "@/models";
+import { seedClubMembers } from "@/lib/seed/club-members";
 import { demoPassword } from "@/lib/seed/demo-club";
 
 /** Test-only: a separate invented club of numbered athletes for load and crash tests (idempotent). */
@@ -11,16 +10,10 @@ export function loadAthleteEmail(index: number): string {
 }
 
 export async function seedLoadAthletes(sequelize: Sequelize, count: number): Promise<void> {
-  initModels(sequelize);
-  const passwordHash = await hashPassword(demoPassword);
-  await sequelize.transaction(async (transaction) => {
-    const [club] = await Club.findOrCreate({ where: { slug: loadClub.slug }, defaults: { ...loadClub, settings: {} }, transaction });
-    for (let index = 1; index <= count; index += 1) {
-      await User.findOrCreate({
-        where: { email: loadAthleteEmail(index) },
-        defaults: { email: loadAthleteEmail(index), name: `Load Athlete ${index}`, role: "athlete", clubId: club.id, passwordHash },
-        transaction,
-      });
-    }
-  });
+  const athletes = Array.from({ length: count }, (_, index) => ({
+    email: loadAthleteEmail(index + 1),
+    name: `Load Athlete ${index + 1}`,
+    role: "athlete" as const,
+  }));
+  await seedClubMembers(sequelize, loadClub, athletes, demoPassword);
 }

@@ -3,15 +3,14 @@
 import { useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import Link from "next/link";
 import { Button } from "@/components/ui/button";
 import { useHydrated } from "@/components/ui/use-hydrated";
 import { SelectField, TextField } from "@/components/ui/field";
-import { LiveStatus, Notice } from "@/components/ui/notice";
 import { boatClasses, boatClassLabel, oarTypeOfClass } from "@/lib/fleet/catalogue";
 import { boatWarnings, type LinkedOarSet } from "@/lib/fleet/warnings";
 import { boatSchema, physicalSpanCm, physicalSpreadCm, type BoatFormInput, type BoatInput } from "@/lib/validations/fleet";
 import { createBoatAction, updateBoatAction } from "../actions";
+import { SaveFeedback, type SaveOutcome } from "./save-feedback";
 import { optionalCmValue } from "./form-helpers";
 
 interface BoatFormProps {
@@ -26,7 +25,7 @@ const fields = ["name", "boatClass", "spanCm", "spreadCm", "notes"] as const;
 
 /** Adds or edits a boat; the span or spread field follows the class; unusual values warn, impossible ones are refused. */
 export function BoatForm({ boatId, initial, linkedSets = [], halfSwivelCm }: BoatFormProps) {
-  const [result, setResult] = useState<{ ok: boolean; message?: string; warnings: string[] } | null>(null);
+  const [result, setResult] = useState<SaveOutcome | null>(null);
   const form = useForm<BoatFormInput, unknown, BoatInput>({
     resolver: zodResolver(boatSchema),
     defaultValues: initial ?? { name: "", boatClass: "1x", notes: "" },
@@ -82,33 +81,7 @@ export function BoatForm({ boatId, initial, linkedSets = [], halfSwivelCm }: Boa
         />
       )}
       <TextField label="Notes (optional)" autoComplete="off" error={errors.notes?.message} {...form.register("notes")} />
-      {liveWarnings.length > 0 && (
-        <Notice tone="warning" title="Check before saving" testId="boat-form-warnings">
-          <ul className="list-disc pl-5">
-            {liveWarnings.map((warning) => (
-              <li key={warning}>{warning}</li>
-            ))}
-          </ul>
-        </Notice>
-      )}
-      <LiveStatus testId="boat-form-status">
-        {result && (
-          <Notice tone={result.ok ? (result.warnings.length ? "warning" : "success") : "error"} title={result.message}>
-            {result.warnings.length > 0 && (
-              <ul className="list-disc pl-5">
-                {result.warnings.map((warning) => (
-                  <li key={warning}>{warning}</li>
-                ))}
-              </ul>
-            )}
-            {result.ok && (
-              <Link href="/roster/fleet" className="font-semibold underline">
-                Back to boats and oar sets
-              </Link>
-            )}
-          </Notice>
-        )}
-      </LiveStatus>
+      <SaveFeedback testIdPrefix="boat-form" liveWarnings={liveWarnings} outcome={result} />
       <Button type="submit" disabled={!hydrated} pending={isSubmitting} pendingLabel="Saving…" className="w-full sm:w-auto">
         {boatId === undefined ? "Add the boat" : "Save changes"}
       </Button>

@@ -1,13 +1,11 @@
 "use client";
 
 import { useState } from "react";
-import Link from "next/link";
 import { Controller, useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Button } from "@/components/ui/button";
 import { useHydrated } from "@/components/ui/use-hydrated";
 import { SelectField, TextField } from "@/components/ui/field";
-import { LiveStatus, Notice } from "@/components/ui/notice";
 import { boatClassLabel, handleMechanismLabels, handleMechanisms, oarTypeLabels } from "@/lib/fleet/catalogue";
 import { oarSetWarnings } from "@/lib/fleet/warnings";
 import type { ClubOarLimits } from "@/lib/rigging/limits";
@@ -15,6 +13,7 @@ import { oarTypes } from "@/lib/rigging/types";
 import { oarSetSchema, type OarSetFormInput, type OarSetInput } from "@/lib/validations/fleet";
 import type { BoatSummary } from "@/lib/data/fleet";
 import { createOarSetAction, updateOarSetAction } from "../actions";
+import { SaveFeedback, type SaveOutcome } from "./save-feedback";
 import { cmValue, wholeValue } from "./form-helpers";
 
 interface OarSetFormProps {
@@ -30,7 +29,7 @@ const fields = ["name", "oarType", "oarCount", "targetLengthCm", "targetInboardC
 
 /** Adds or edits an oar set: targets checked against the club's limits as you type (warnings) and refused when impossible. */
 export function OarSetForm({ oarSetId, initial, boats, limits, defaultClickCm }: OarSetFormProps) {
-  const [result, setResult] = useState<{ ok: boolean; message?: string; warnings: string[] } | null>(null);
+  const [result, setResult] = useState<SaveOutcome | null>(null);
   const form = useForm<OarSetFormInput, unknown, OarSetInput>({
     resolver: zodResolver(oarSetSchema),
     defaultValues: initial ?? { name: "", oarType: "sculling", clickCm: defaultClickCm, handleMechanism: "clamped-slide", boatIds: [], notes: "" },
@@ -146,33 +145,7 @@ export function OarSetForm({ oarSetId, initial, boats, limits, defaultClickCm }:
         }}
       />
       <TextField label="Notes (optional)" autoComplete="off" error={errors.notes?.message} {...form.register("notes")} />
-      {liveWarnings.length > 0 && (
-        <Notice tone="warning" title="Check before saving" testId="oar-set-form-warnings">
-          <ul className="list-disc pl-5">
-            {liveWarnings.map((warning) => (
-              <li key={warning}>{warning}</li>
-            ))}
-          </ul>
-        </Notice>
-      )}
-      <LiveStatus testId="oar-set-form-status">
-        {result && (
-          <Notice tone={result.ok ? (result.warnings.length ? "warning" : "success") : "error"} title={result.message}>
-            {result.warnings.length > 0 && (
-              <ul className="list-disc pl-5">
-                {result.warnings.map((warning) => (
-                  <li key={warning}>{warning}</li>
-                ))}
-              </ul>
-            )}
-            {result.ok && (
-              <Link href="/roster/fleet" className="font-semibold underline">
-                Back to boats and oar sets
-              </Link>
-            )}
-          </Notice>
-        )}
-      </LiveStatus>
+      <SaveFeedback testIdPrefix="oar-set-form" liveWarnings={liveWarnings} outcome={result} />
       <Button type="submit" disabled={!hydrated} pending={isSubmitting} pendingLabel="Saving…" className="w-full sm:w-auto">
         {oarSetId === undefined ? "Add the oar set" : "Save changes"}
       </Button>
