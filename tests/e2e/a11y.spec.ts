@@ -42,6 +42,8 @@ for (const viewport of viewports) {
       test(`${entry.path} (${entry.as ?? "signed out"})`, async ({ page }) => {
         if (entry.as) await signIn(page, entry.as);
         await page.goto(entry.path);
+        // Some pages stream behind a loading state: scan once the page's own heading has arrived.
+        await page.getByRole("heading", { level: 1 }).first().waitFor();
         await entry.ready?.(page);
         const results = await new AxeBuilder({ page }).withTags(wcagTags).analyze();
         const summary = results.violations.map((violation) => `${violation.id}: ${violation.nodes.map((node) => node.target.join(" ")).join(", ")}`);

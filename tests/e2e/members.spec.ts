@@ -138,6 +138,8 @@ test.describe("members admin", () => {
   test("the members page and its confirm step have no axe violations", async ({ page }) => {
     await signIn(page, demo.admin);
     await page.goto("/club/members");
+    // The club pages stream behind a loading state: scan once the page itself has arrived.
+    await expect(page.getByRole("heading", { level: 1 })).toHaveText("Members");
     const pageScan = await new AxeBuilder({ page }).analyze();
     expect(pageScan.violations.map((violation) => violation.id)).toEqual([]);
     await page.getByRole("button", { name: "Deactivate Lena Fairbrother" }).click();
