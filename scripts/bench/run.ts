@@ -32,20 +32,28 @@ const settings = {
   minimalPath: "/",
 };
 
-/** The figures in table order: one small function each, returning its rows (or an "n/a" row). */
-const measures: ((context: BenchContext) => Promise<Row | Row[]>)[] = [
-  lessonLcp,
-  lessonScript,
-  lessonTbt,
-  lessonCls,
-  referencePages,
-  trivialRoute,
-  quizSubmit,
-  ...rosterPaths.map((rosterPath) => (context: BenchContext) => rosterRoute(context, rosterPath)),
-  rosterUnderWrites,
-  certificatePdf,
-  registerPdf,
-];
+/** The figures in table order, by group: one small function each, returning its rows (or an "n/a" row). */
+const measureGroups: Record<"pages" | "api" | "pdf", ((context: BenchContext) => Promise<Row | Row[]>)[]> = {
+  pages: [lessonLcp, lessonScript, lessonTbt, lessonCls, referencePages],
+  api: [
+    trivialRoute,
+    quizSubmit,
+    ...rosterPaths.map((rosterPath) => (context: BenchContext) => rosterRoute(context, rosterPath)),
+    rosterUnderWrites,
+  ],
+  pdf: [certificatePdf, registerPdf],
+};
+
+/** `--only=pages,pdf` runs some groups (while working on one figure); the default runs them all. */
+function selectedMeasures(argv: readonly string[]): ((context: BenchContext) => Promise<Row | Row[]>)[] {
+  const only = argv.find((argument) => argument.startsWith("--only="))?.slice("--only=".length);
+  if (!only) return Object.values(measureGroups).flat();
+  const groups = only.split(",").map((group) => group.trim());
+  for (const group of groups) {
+    if (!(group in measureGroups)) throw new Error(`--only: unknown group "${group}" (pages, api, pdf)`);
+  }
+  return groups.flatMap((group) => measureGroups[group as keyof typeof measureGroups]);
+}
 
 const root = process.cwd();
 const outDir = path.join(root, "bench-out");
@@ -177,7 +185,7 @@ async function main(): Promise<void> {
   };
 
   const rows: Row[] = [];
-  for (const measure of measures) {
+  for (const measure of selectedMeasures(process.argv)) {
     const result = await measure(context);
     rows.push(...(Array.isArray(result) ? result : [result]));
   }
