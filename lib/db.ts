@@ -32,17 +32,77 @@ function configuredSqlite(): typeof sqlite3 {
 interface DbGlobal {
   slipwaySequelize?: Sequelize;
   slipwayWriteLock?: Mutex;
+  slipwayCommittedWrites?: number;
 }
 const globalStore = globalThis as unknown as DbGlobal;
 
+/** The parts of Sequelize's SQLite connection manager that the write connection hooks into. */
+interface SqliteConnection {
+  close(callback?: (err: Error | null) => void): void;
+}
+interface SqliteConnectionManager {
+  getConnection(options?: { uuid?: string; type?: string }): Promise<SqliteConnection>;
+  releaseConnection(connection: SqliteConnection, force?: boolean): void;
+  destroyConnection(connection: SqliteConnection): Promise<void>;
+}
+
+const writerUuid = "slipway-writer";
+let claimWriter = false;
+
+/**
+ * Sequelize's SQLite dialect opens a new database connection for every transaction (file open, WAL and
+ * busy-timeout set-up, foreign keys) and closes it afterwards: about half the cost of a small write.
+ * Writes already run one at a time through the write queue, so they can share one long-lived connection:
+ * the transaction that `writeTransaction` starts claims it, every other transaction (migrations, tests)
+ * gets its own as before. A connection Sequelize destroys (a failed commit) is replaced on the next write.
+ */
+function keepOneWriteConnection(sequelize: Sequelize): void {
+  const manager = sequelize.connectionManager as unknown as SqliteConnectionManager;
+  const getConnection = manager.getConnection.bind(manager);
+  const releaseConnection = manager.releaseConnection.bind(manager);
+  const destroyConnection = manager.destroyConnection.bind(manager);
+  let writer: SqliteConnection | undefined;
+  let opening: Promise<SqliteConnection> | undefined;
+  manager.getConnection = (options) => {
+    if (!claimWriter) return getConnection(options);
+    claimWriter = false;
+    if (writer) return Promise.resolve(writer);
+    opening ??= getConnection({ ...options, uuid: writerUuid }).then(
+      (connection) => {
+        writer = connection;
+        opening = undefined;
+        return connection;
+      },
+      (error: unknown) => {
+        opening = undefined;
+        throw error;
+      },
+    );
+    return opening;
+  };
+  manager.releaseConnection = (connection, force) => {
+    if (connection === writer && force !== true) return; // stays open for the next write
+    releaseConnection(connection, force);
+  };
+  manager.destroyConnection = async (connection) => {
+    if (connection !== writer) return destroyConnection(connection);
+    writer = undefined;
+    // Sequelize re-labels a transaction's connection with the transaction id; put back the key it is kept under.
+    (connection as SqliteConnection & { uuid?: string }).uuid = writerUuid;
+    releaseConnection(connection, true);
+  };
+}
+
 function createSequelize(): Sequelize {
-  return new Sequelize({
+  const sequelize = new Sequelize({
     dialect: "sqlite",
     storage: databaseFile(),
     dialectModule: configuredSqlite(),
     logging: false,
     define: { underscored: true },
   });
+  keepOneWriteConnection(sequelize);
+  return sequelize;
 }
 
 /** The one Sequelize instance of this process (cached on globalThis so dev reloads reuse it). */
@@ -61,7 +121,28 @@ function writeLock(): Mutex {
  * the queue, concurrent Sequelize transactions fail with SQLITE_BUSY. Every write goes through here.
  */
 export async function writeTransaction<T>(work: (transaction: Transaction) => Promise<T>): Promise<T> {
-  return writeLock().runExclusive(() => getSequelize().transaction((transaction) => work(transaction)));
+  return writeLock().runExclusive(() => {
+    const sequelize = getSequelize();
+    // Sequelize asks for the transaction's connection synchronously inside transaction(); the flag is
+    // consumed there. Should a later Sequelize ask later, the flag is cleared and the transaction simply
+    // opens its own connection as before (slower, still correct).
+    claimWriter = true;
+    let committed: Promise<T>;
+    try {
+      committed = sequelize.transaction((transaction) => work(transaction));
+    } finally {
+      claimWriter = false;
+    }
+    return committed.then((result) => {
+      globalStore.slipwayCommittedWrites = committedWrites() + 1;
+      return result;
+    });
+  });
+}
+
+/** How many write transactions this process has committed (part of the read caches' version). */
+export function committedWrites(): number {
+  return globalStore.slipwayCommittedWrites ?? 0;
 }
 
 /** Closes the connection (tests and scripts). */

@@ -70,6 +70,52 @@ describe("database", () => {
   });
 });
 
+describe("the write connection", () => {
+  type Connected = { connection: object };
+  const connectionOf = (transaction: unknown) => (transaction as Connected).connection;
+
+  it("keeps one connection for queued writes; other transactions get their own", async () => {
+    const first = await writeTransaction(async (transaction) => connectionOf(transaction));
+    const second = await writeTransaction(async (transaction) => connectionOf(transaction));
+    expect(second).toBe(first);
+    const unqueued = await getSequelize().transaction(async (transaction) => connectionOf(transaction));
+    expect(unqueued).not.toBe(first);
+  });
+
+  it("rolls a failed write back and the next write still works on the same connection", async () => {
+    const club = await Club.findOne();
+    const before = await writeTransaction(async (transaction) => connectionOf(transaction));
+    await expect(
+      writeTransaction(async (transaction) => {
+        await AuditEvent.create(
+          { clubId: club!.id, actorId: null, action: "test.rolled-back", subjectType: "test", subjectId: "x", details: {} },
+          { transaction },
+        );
+        throw new Error("work failed");
+      }),
+    ).rejects.toThrow("work failed");
+    expect(await AuditEvent.count({ where: { action: "test.rolled-back" } })).toBe(0);
+    const after = await writeTransaction(async (transaction) => connectionOf(transaction));
+    expect(after).toBe(before);
+  });
+
+  it("replaces the connection when Sequelize destroys it (a commit that failed)", async () => {
+    const club = await Club.findOne();
+    const old = await writeTransaction(async (transaction) => connectionOf(transaction));
+    const manager = getSequelize().connectionManager as unknown as { destroyConnection(connection: object): Promise<void> };
+    await manager.destroyConnection(old);
+    const fresh = await writeTransaction(async (transaction) => {
+      await AuditEvent.create(
+        { clubId: club!.id, actorId: null, action: "test.after-destroy", subjectType: "test", subjectId: "y", details: {} },
+        { transaction },
+      );
+      return connectionOf(transaction);
+    });
+    expect(fresh).not.toBe(old);
+    expect(await AuditEvent.count({ where: { action: "test.after-destroy" } })).toBe(1);
+  });
+});
+
 describe("accounts and invitations", () => {
   async function actorFor(email: string): Promise<Actor> {
     const user = await User.findOne({ where: { email } });
