@@ -2,6 +2,7 @@ import * as createFoundation from "@/migrations/20261202-0001-create-foundation"
 import * as createLearning from "@/migrations/20261202-0002-create-learning";
 import * as createFleet from "@/migrations/20261202-0003-create-fleet";
 import * as createCertification from "@/migrations/20261202-0004-create-certification";
+import * as indexRosterReads from "@/migrations/20261202-0005-index-roster-reads";
 
 export interface MigrationModule {
   up: typeof createFoundation.up;
@@ -14,4 +15,5 @@ export const migrationList: { name: string; module: MigrationModule }[] = [
   { name: "20261202-0002-create-learning", module: createLearning },
   { name: "20261202-0003-create-fleet", module: createFleet },
   { name: "20261202-0004-create-certification", module: createCertification },
+  { name: "20261202-0005-index-roster-reads", module: indexRosterReads },
 ];

@@ -20,6 +20,18 @@ import {
   QuizAttempt,
 } from "@/models";
 
+/** A DATE column of a raw row: SQLite text such as "2026-09-12 06:53:47.297 +00:00" (or a Date, or null). */
+function rawDate(value: unknown): Date | null {
+  if (value === null || value === undefined) return null;
+  return value instanceof Date ? value : new Date(String(value));
+}
+
+/** A BOOLEAN column of a raw row: SQLite's 0/1 (or a boolean, or null). */
+function rawBoolean(value: unknown): boolean | null {
+  if (value === null || value === undefined) return null;
+  return value === true || value === 1 || value === "1";
+}
+
 interface CollectedFacts extends AthleteFacts {
   lessonReads: string[];
   attempts: AttemptSummary[];
@@ -40,27 +52,34 @@ export async function factsForAthletes(
     ids.map((id) => [id, { lessonReads: [], attempts: [], assessments: [], passes: [], suspension: null }]),
   );
   if (ids.length === 0) return facts;
+  // Plain rows (raw: true): model instances cost several times the queries for a 1,000-athlete roster.
+  // SQLite hands back dates as text and booleans as 0/1; they are converted below.
   const [reads, attempts, assessments, certificates, suspensions] = await Promise.all([
-    LessonRead.findAll({ where: { userId: ids }, attributes: ["userId", "moduleSlug"], transaction }),
+    LessonRead.findAll({ where: { userId: ids }, attributes: ["userId", "moduleSlug"], transaction, raw: true }),
     QuizAttempt.findAll({
       where: { userId: ids },
       attributes: ["userId", "moduleSlug", "score", "passed", "submittedAt"],
       transaction,
+      raw: true,
     }),
     PracticalAssessment.findAll({
       where: { athleteId: ids },
       attributes: ["athleteId", "moduleSlug", "status", "requestedAt", "assessedAt"],
       transaction,
+      raw: true,
     }),
     Certificate.findAll({
       where: { athleteId: ids, kind: "module", revokedAt: null },
       attributes: ["athleteId", "moduleSlug", "issuedOn", "expiresOn"],
       transaction,
+      raw: true,
     }),
     ClearanceSuspension.findAll({
       where: { athleteId: ids, liftedAt: null },
+      attributes: ["athleteId", "reason", "suspendedAt"],
       order: [["suspendedAt", "ASC"]],
       transaction,
+      raw: true,
     }),
   ]);
   for (const read of reads) facts.get(read.userId)!.lessonReads.push(read.moduleSlug);
@@ -68,16 +87,16 @@ export async function factsForAthletes(
     facts.get(attempt.userId)!.attempts.push({
       moduleSlug: attempt.moduleSlug,
       score: attempt.score,
-      passed: attempt.passed,
-      submittedAt: attempt.submittedAt,
+      passed: rawBoolean(attempt.passed),
+      submittedAt: rawDate(attempt.submittedAt),
     });
   }
   for (const assessment of assessments) {
     facts.get(assessment.athleteId)!.assessments.push({
       moduleSlug: assessment.moduleSlug,
       status: assessment.status,
-      requestedAt: assessment.requestedAt,
-      assessedAt: assessment.assessedAt,
+      requestedAt: rawDate(assessment.requestedAt)!,
+      assessedAt: rawDate(assessment.assessedAt),
     });
   }
   for (const certificate of certificates) {
@@ -92,7 +111,7 @@ export async function factsForAthletes(
     const entry = facts.get(suspension.athleteId)!;
     entry.suspension ??= {
       reason: suspension.reason,
-      since: suspension.suspendedAt.toISOString().slice(0, 10),
+      since: rawDate(suspension.suspendedAt)!.toISOString().slice(0, 10),
     };
   }
   return facts;

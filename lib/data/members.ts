@@ -3,6 +3,7 @@ import { databaseReady } from "@/lib/data/database";
 import { assertAllowed, isCoach, type Actor } from "@/lib/auth/permissions";
 import type { Role, UserStatus } from "@/lib/auth/roles";
 import { Club, User } from "@/models";
+import { nextOffsetAfter, type Page, type PageQuery } from "@/lib/validations/paging";
 
 export interface MemberSummary {
   id: number;
@@ -25,6 +26,8 @@ export async function clubOf(actor: Actor): Promise<ClubSummary> {
   return { id: actor.clubId, name: club?.name ?? "Your club" };
 }
 
+const memberColumns = ["id", "name", "email", "role", "status", "lastSignInAt"] as const;
+
 /** Members of the actor's club (coaches and admins only), optionally one role. */
 export async function listClubMembers(actor: Actor, role?: Role): Promise<MemberSummary[]> {
   await databaseReady();
@@ -33,16 +36,48 @@ export async function listClubMembers(actor: Actor, role?: Role): Promise<Member
   // four times the query itself in the benchmark.
   const users = await User.findAll({
     where: { clubId: actor.clubId, ...(role ? { role } : {}) },
-    attributes: ["id", "name", "email", "role", "status", "lastSignInAt"],
+    attributes: [...memberColumns],
     order: [["name", "ASC"]],
     raw: true,
   });
-  return users.map((user) => ({
+  return users.map(memberSummary);
+}
+
+/** One page of the club's members of a role, by name (then id, so pages never overlap). */
+export async function pageOfClubMembers(actor: Actor, role: Role, page: PageQuery): Promise<Page<MemberSummary>> {
+  await databaseReady();
+  assertAllowed(isCoach(actor), "Only coaches and administrators can list members.");
+  const where = { clubId: actor.clubId, role };
+  const [total, users] = await Promise.all([
+    User.count({ where }),
+    User.findAll({
+      where,
+      attributes: [...memberColumns],
+      order: [
+        ["name", "ASC"],
+        ["id", "ASC"],
+      ],
+      limit: page.limit,
+      offset: page.offset,
+      raw: true,
+    }),
+  ]);
+  return {
+    items: users.map(memberSummary),
+    total,
+    limit: page.limit,
+    offset: page.offset,
+    nextOffset: nextOffsetAfter(page.offset, users.length, total),
+  };
+}
+
+function memberSummary(user: Pick<User, (typeof memberColumns)[number]>): MemberSummary {
+  return {
     id: user.id,
     name: user.name,
     email: user.email,
     role: user.role,
     status: user.status,
     lastSignInAt: user.lastSignInAt ? new Date(user.lastSignInAt).toISOString() : null,
-  }));
+  };
 }

@@ -240,3 +240,50 @@ describe("members page actions", () => {
     expect((await userFor(admin)).status).toBe("active");
   });
 });
+
+describe("the roster API's pages", () => {
+  const rosterRoute = () => import("@/app/api/roster/route");
+  const coach = "coach.tobias@lantern-reach.example";
+
+  it("pages through the club's athletes by name without overlap or gaps", async () => {
+    const { listClubMembers } = await import("@/lib/data/members");
+    const everyone = (await listClubMembers(await actorFor(coach), "athlete")).map((member) => member.id);
+    const cookie = await sessionCookieFor(coach, demoPassword);
+    const { GET } = await rosterRoute();
+    const seen: number[] = [];
+    let offset: number | null = 0;
+    while (offset !== null) {
+      const response = await callRoute(GET, { method: "GET", path: `/api/roster?limit=3&offset=${offset}`, cookie });
+      expect(response.status).toBe(200);
+      const page = (await response.json()) as { athletes: { id: number }[]; total: number; limit: number; nextOffset: number | null };
+      expect(page.total).toBe(everyone.length);
+      expect(page.limit).toBe(3);
+      expect(page.athletes.length).toBeLessThanOrEqual(3);
+      seen.push(...page.athletes.map((athlete) => athlete.id));
+      offset = page.nextOffset;
+    }
+    expect(seen).toEqual(everyone);
+    const first = (await (await callRoute(GET, { method: "GET", path: "/api/roster", cookie })).json()) as { limit: number; offset: number };
+    expect(first).toMatchObject({ limit: 100, offset: 0 });
+  });
+
+  it.each([
+    ["limit=0", "limit"],
+    ["limit=501", "limit"],
+    ["limit=abc", "limit"],
+    ["limit=-1", "limit"],
+    ["limit=1.5", "limit"],
+    ["offset=-3", "offset"],
+    ["offset=NaN", "offset"],
+    ["offset=1e3", "offset"],
+    ["limt=10", "limt"],
+  ])("refuses ?%s with 400 naming %s", async (query, field) => {
+    const cookie = await sessionCookieFor(coach, demoPassword);
+    const { GET } = await rosterRoute();
+    const response = await callRoute(GET, { method: "GET", path: `/api/roster?${query}`, cookie });
+    expect(response.status).toBe(400);
+    const body = (await response.json()) as { error: string; message: string; fields: Record<string, string[]> };
+    expect(body.error).toBe("invalid_input");
+    expect(body.message).toContain(field);
+  });
+});

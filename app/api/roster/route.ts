@@ -1,13 +1,27 @@
 import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
-import { listClubMembers } from "@/lib/data/members";
+import { pageOfClubMembers } from "@/lib/data/members";
 import { route } from "@/lib/http/route";
+import { queryObject } from "@/lib/validations/certification";
+import { validationErrorFrom } from "@/lib/validations/issues";
+import { pageQuerySchema } from "@/lib/validations/paging";
 
 export const dynamic = "force-dynamic";
 
-/** The club's athletes for coaches and admins. */
-export const GET = route(async () => {
+/**
+ * The club's athletes for coaches and admins, by name, a page at a time: `?limit=` (1–500, default 100)
+ * and `?offset=`. Answers `{ athletes, total, limit, offset, nextOffset }`; nextOffset is null on the last page.
+ */
+export const GET = route(async (request) => {
   const actor = await requireActor();
-  const athletes = await listClubMembers(actor, "athlete");
-  return NextResponse.json({ athletes });
+  const query = pageQuerySchema.safeParse(queryObject(new URL(request.url).searchParams));
+  if (!query.success) throw validationErrorFrom(query.error);
+  const page = await pageOfClubMembers(actor, "athlete", query.data);
+  return NextResponse.json({
+    athletes: page.items,
+    total: page.total,
+    limit: page.limit,
+    offset: page.offset,
+    nextOffset: page.nextOffset,
+  });
 });
