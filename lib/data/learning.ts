@@ -124,33 +124,43 @@ function resultOf(attempt: QuizAttempt): AttemptResult {
   };
 }
 
+function alreadySubmitted(attempt: QuizAttempt): ConflictError {
+  return new ConflictError("This attempt was already submitted; here is its stored result.", { result: resultOf(attempt) });
+}
+
 /**
  * Grades and stores a submission. The attempt id is the idempotency key: a second submission of the
  * same attempt changes nothing and is refused with 409, carrying the stored result.
+ *
+ * The attempt is read and graded outside the write queue (its questions never change once started);
+ * inside, one conditional UPDATE stores the grade only if the attempt is still open, so of two
+ * submissions racing for the same attempt exactly one is stored and the other gets the stored result.
  */
 export async function submitAttempt(actor: Actor, attemptId: string, answers: Record<string, unknown>): Promise<AttemptResult> {
   await databaseReady();
-  return writeTransaction(async (transaction) => {
-    const attempt = await QuizAttempt.findByPk(attemptId, { transaction });
-    assertVisible(!!attempt && attempt.userId === actor.id);
-    if (attempt.submittedAt) {
-      throw new ConflictError("This attempt was already submitted; here is its stored result.", { result: resultOf(attempt) });
-    }
-    const known = new Set(attempt.questions.map((question) => question.id));
-    const relevant = Object.fromEntries(Object.entries(answers).filter(([id]) => known.has(id)));
-    const grade = gradeQuiz(attempt.questions, relevant, attempt.passMark);
-    await attempt.update(
-      {
-        answers: relevant,
-        score: grade.score,
-        passed: grade.passed,
-        results: grade.results.map(({ id, correct, expected, explanation }) => ({ id, correct, expected, explanation })),
-        submittedAt: new Date(),
-      },
-      { transaction },
-    );
-    return resultOf(attempt);
+  const attempt = await QuizAttempt.findByPk(attemptId);
+  assertVisible(!!attempt && attempt.userId === actor.id);
+  if (attempt.submittedAt) throw alreadySubmitted(attempt);
+  const known = new Set(attempt.questions.map((question) => question.id));
+  const relevant = Object.fromEntries(Object.entries(answers).filter(([id]) => known.has(id)));
+  const grade = gradeQuiz(attempt.questions, relevant, attempt.passMark);
+  const graded = {
+    answers: relevant,
+    score: grade.score,
+    passed: grade.passed,
+    results: grade.results.map(({ id, correct, expected, explanation }) => ({ id, correct, expected, explanation })),
+    submittedAt: new Date(),
+  };
+  const stored = await writeTransaction(async (transaction) => {
+    const [changed] = await QuizAttempt.update(graded, { where: { id: attemptId, submittedAt: null }, transaction });
+    return changed === 1;
   });
+  if (!stored) {
+    const winner = await QuizAttempt.findByPk(attemptId);
+    throw alreadySubmitted(winner!);
+  }
+  attempt.set(graded);
+  return resultOf(attempt);
 }
 
 export interface AttemptReview extends AttemptResult {

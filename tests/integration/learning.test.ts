@@ -64,6 +64,27 @@ describe("attempts", () => {
     expect(stored.score).toBe(1);
   });
 
+  it("stores exactly one of many submissions racing for the same attempt; the rest get that stored result", async () => {
+    const racer = await actorFor("kit@lantern-reach.example");
+    const { attemptId } = await startOrResumeAttempt(racer, "setting-inboard");
+    const attempt = (await QuizAttempt.findByPk(attemptId))!;
+    const right = rightAnswers(attempt);
+    // Half send the right answers, half send none: whichever is stored, every loser must report it.
+    const outcomes = await Promise.allSettled(
+      Array.from({ length: 20 }, (_, index) => submitAttempt(racer, attemptId, index % 2 === 0 ? right : {})),
+    );
+    const stored = outcomes.filter((outcome) => outcome.status === "fulfilled");
+    const refused = outcomes.filter((outcome): outcome is PromiseRejectedResult => outcome.status === "rejected");
+    expect(stored).toHaveLength(1);
+    expect(refused).toHaveLength(19);
+    const row = (await QuizAttempt.findByPk(attemptId))!;
+    expect((stored[0] as PromiseFulfilledResult<{ score: number }>).value.score).toBe(row.score);
+    for (const outcome of refused) {
+      expect(outcome.reason).toBeInstanceOf(ConflictError);
+      expect(((outcome.reason as ConflictError).extra?.result as { score: number }).score).toBe(row.score);
+    }
+  });
+
   it("answers 404 for another athlete's attempt and for unknown modules", async () => {
     const { attemptId } = await startOrResumeAttempt(otherAthlete, "setting-inboard");
     await expect(submitAttempt(athlete, attemptId, {})).rejects.toBeInstanceOf(NotFoundError);
