@@ -1,6 +1,7 @@
 import "server-only";
 import { Op, type Transaction } from "sequelize";
 import { listModules } from "@/lib/content/modules";
+import { rawBoolean, rawDate } from "@/lib/data/sql";
 import type { ModuleMeta } from "@/lib/content/module-schema";
 import { readClubSettings, type ClubSettings } from "@/lib/validations/club-settings";
 import {
@@ -19,18 +20,6 @@ import {
   PracticalAssessment,
   QuizAttempt,
 } from "@/models";
-
-/** A DATE column of a raw row: SQLite text such as "2026-09-12 06:53:47.297 +00:00" (or a Date, or null). */
-function rawDate(value: unknown): Date | null {
-  if (value === null || value === undefined) return null;
-  return value instanceof Date ? value : new Date(String(value));
-}
-
-/** A BOOLEAN column of a raw row: SQLite's 0/1 (or a boolean, or null). */
-function rawBoolean(value: unknown): boolean | null {
-  if (value === null || value === undefined) return null;
-  return value === true || value === 1 || value === "1";
-}
 
 interface CollectedFacts extends AthleteFacts {
   lessonReads: string[];

@@ -3,6 +3,7 @@ import { randomUUID } from "node:crypto";
 import { Op } from "sequelize";
 import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
+import { rawBoolean, rawDate, rawJson, selectRows, sqliteDateTime, updateRows } from "@/lib/data/sql";
 import { settingsForClub } from "@/lib/data/club-settings";
 import { assertVisible, canViewAthlete, type Actor } from "@/lib/auth/permissions";
 import { ConflictError, NotFoundError } from "@/lib/http/errors";
@@ -10,7 +11,7 @@ import { getModule, listModules } from "@/lib/content/modules";
 import type { ModuleMeta } from "@/lib/content/module-schema";
 import { buildQuiz, toPublicQuestion } from "@/lib/quiz/build";
 import { gradeQuiz } from "@/lib/quiz/grade";
-import type { PublicQuestion } from "@/lib/quiz/types";
+import type { PublicQuestion, Question } from "@/lib/quiz/types";
 import { moduleProgress, type ModuleProgress } from "@/lib/learning/progress";
 import { LessonRead, QuizAttempt, User } from "@/models";
 import type { StoredResult } from "@/models/QuizAttempt";
@@ -124,9 +125,34 @@ function resultOf(attempt: QuizAttempt): AttemptResult {
   };
 }
 
-function alreadySubmitted(attempt: QuizAttempt): ConflictError {
-  return new ConflictError("This attempt was already submitted; here is its stored result.", { result: resultOf(attempt) });
+interface AttemptRow {
+  id: string;
+  user_id: number;
+  questions: string;
+  pass_mark: number;
+  score: number | null;
+  passed: number | null;
+  results: string | null;
+  submitted_at: string | null;
 }
+
+function storedResultOf(row: AttemptRow): AttemptResult {
+  return {
+    attemptId: row.id,
+    score: row.score ?? 0,
+    passed: rawBoolean(row.passed) ?? false,
+    passMark: row.pass_mark,
+    results: rawJson<StoredResult[]>(row.results) ?? [],
+    submittedAt: rawDate(row.submitted_at)?.toISOString() ?? "",
+  };
+}
+
+function alreadySubmitted(row: AttemptRow): ConflictError {
+  return new ConflictError("This attempt was already submitted; here is its stored result.", { result: storedResultOf(row) });
+}
+
+const selectAttempt =
+  "SELECT id, user_id, questions, pass_mark, score, passed, results, submitted_at FROM quiz_attempts WHERE id = ?";
 
 /**
  * Grades and stores a submission. The attempt id is the idempotency key: a second submission of the
@@ -135,32 +161,39 @@ function alreadySubmitted(attempt: QuizAttempt): ConflictError {
  * The attempt is read and graded outside the write queue (its questions never change once started);
  * inside, one conditional UPDATE stores the grade only if the attempt is still open, so of two
  * submissions racing for the same attempt exactly one is stored and the other gets the stored result.
+ * Both statements are plain SQL (lib/data/sql.ts): this is the busiest write.
  */
 export async function submitAttempt(actor: Actor, attemptId: string, answers: Record<string, unknown>): Promise<AttemptResult> {
   await databaseReady();
-  const attempt = await QuizAttempt.findByPk(attemptId);
-  assertVisible(!!attempt && attempt.userId === actor.id);
-  if (attempt.submittedAt) throw alreadySubmitted(attempt);
-  const known = new Set(attempt.questions.map((question) => question.id));
+  const [attempt] = await selectRows<AttemptRow>(selectAttempt, [attemptId]);
+  assertVisible(!!attempt && attempt.user_id === actor.id);
+  if (attempt.submitted_at !== null) throw alreadySubmitted(attempt);
+  const questions = rawJson<Question[]>(attempt.questions) ?? [];
+  const known = new Set(questions.map((question) => question.id));
   const relevant = Object.fromEntries(Object.entries(answers).filter(([id]) => known.has(id)));
-  const grade = gradeQuiz(attempt.questions, relevant, attempt.passMark);
-  const graded = {
-    answers: relevant,
-    score: grade.score,
-    passed: grade.passed,
-    results: grade.results.map(({ id, correct, expected, explanation }) => ({ id, correct, expected, explanation })),
-    submittedAt: new Date(),
-  };
+  const grade = gradeQuiz(questions, relevant, attempt.pass_mark);
+  const results: StoredResult[] = grade.results.map(({ id, correct, expected, explanation }) => ({ id, correct, expected, explanation }));
+  const submittedAt = new Date();
   const stored = await writeTransaction(async (transaction) => {
-    const [changed] = await QuizAttempt.update(graded, { where: { id: attemptId, submittedAt: null }, transaction });
+    const changed = await updateRows(
+      "UPDATE quiz_attempts SET answers = ?, score = ?, passed = ?, results = ?, submitted_at = ? WHERE id = ? AND submitted_at IS NULL",
+      [JSON.stringify(relevant), grade.score, grade.passed ? 1 : 0, JSON.stringify(results), sqliteDateTime(submittedAt), attemptId],
+      transaction,
+    );
     return changed === 1;
   });
   if (!stored) {
-    const winner = await QuizAttempt.findByPk(attemptId);
+    const [winner] = await selectRows<AttemptRow>(selectAttempt, [attemptId]);
     throw alreadySubmitted(winner!);
   }
-  attempt.set(graded);
-  return resultOf(attempt);
+  return {
+    attemptId,
+    score: grade.score,
+    passed: grade.passed,
+    passMark: attempt.pass_mark,
+    results,
+    submittedAt: submittedAt.toISOString(),
+  };
 }
 
 export interface AttemptReview extends AttemptResult {

@@ -2,6 +2,7 @@ import "server-only";
 import { Op } from "sequelize";
 import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
+import { selectRows } from "@/lib/data/sql";
 import { recordAudit } from "@/lib/data/audit";
 import type { Actor } from "@/lib/auth/permissions";
 import { assertAllowed, canManageClub } from "@/lib/auth/permissions";
@@ -73,9 +74,13 @@ export async function authenticateWithLink(token: string): Promise<SessionUser |
 /** The current state of a session's user: null when deactivated, removed or the token version moved on. */
 export async function sessionUserById(id: number, tokenVersion: number): Promise<SessionUser | null> {
   await databaseReady();
-  const user = await User.findByPk(id);
-  if (!user || user.status !== "active" || user.tokenVersion !== tokenVersion) return null;
-  return toSessionUser(user);
+  // Every signed-in request runs this: plain SQL (lib/data/sql.ts) instead of a model query.
+  const [user] = await selectRows<{ id: number; club_id: number; role: Role; name: string; email: string; status: string; token_version: number }>(
+    "SELECT id, club_id, role, name, email, status, token_version FROM users WHERE id = ?",
+    [id],
+  );
+  if (!user || user.status !== "active" || user.token_version !== tokenVersion) return null;
+  return { id: user.id, clubId: user.club_id, role: user.role, name: user.name, email: user.email, tokenVersion: user.token_version };
 }
 
 /**

@@ -60,8 +60,13 @@ describe("attempts", () => {
       expect(error.status).toBe(409);
       expect((error.extra?.result as { score: number }).score).toBe(1);
     });
+    // Stored with plain SQL, read back through the model: the same values and types.
     const stored = (await QuizAttempt.findByPk(attemptId))!;
     expect(stored.score).toBe(1);
+    expect(stored.passed).toBe(true);
+    expect(stored.submittedAt?.toISOString()).toBe(result.submittedAt);
+    expect(stored.results).toEqual(result.results);
+    expect(stored.answers).toEqual(rightAnswers(attempt));
   });
 
   it("stores exactly one of many submissions racing for the same attempt; the rest get that stored result", async () => {
