@@ -1,9 +1,9 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
 import { Op } from "sequelize";
-import { writeTransaction } from "@/lib/db";
+import { writeStatement, writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
-import { rawBoolean, rawDate, rawJson, selectRows, sqliteDateTime, updateRows } from "@/lib/data/sql";
+import { rawBoolean, rawDate, rawJson, selectRows, sqliteDateTime } from "@/lib/data/sql";
 import { settingsForClub } from "@/lib/data/club-settings";
 import { assertVisible, canViewAthlete, type Actor } from "@/lib/auth/permissions";
 import { ConflictError, NotFoundError } from "@/lib/http/errors";
@@ -161,7 +161,8 @@ const selectAttempt =
  * The attempt is read and graded outside the write queue (its questions never change once started);
  * inside, one conditional UPDATE stores the grade only if the attempt is still open, so of two
  * submissions racing for the same attempt exactly one is stored and the other gets the stored result.
- * Both statements are plain SQL (lib/data/sql.ts): this is the busiest write.
+ * Both statements are plain SQL (lib/data/sql.ts) and the UPDATE runs alone (`writeStatement`): this is
+ * the busiest write.
  */
 export async function submitAttempt(actor: Actor, attemptId: string, answers: Record<string, unknown>): Promise<AttemptResult> {
   await databaseReady();
@@ -174,15 +175,11 @@ export async function submitAttempt(actor: Actor, attemptId: string, answers: Re
   const grade = gradeQuiz(questions, relevant, attempt.pass_mark);
   const results: StoredResult[] = grade.results.map(({ id, correct, expected, explanation }) => ({ id, correct, expected, explanation }));
   const submittedAt = new Date();
-  const stored = await writeTransaction(async (transaction) => {
-    const changed = await updateRows(
-      "UPDATE quiz_attempts SET answers = ?, score = ?, passed = ?, results = ?, submitted_at = ? WHERE id = ? AND submitted_at IS NULL",
-      [JSON.stringify(relevant), grade.score, grade.passed ? 1 : 0, JSON.stringify(results), sqliteDateTime(submittedAt), attemptId],
-      transaction,
-    );
-    return changed === 1;
-  });
-  if (!stored) {
+  const changed = await writeStatement(
+    "UPDATE quiz_attempts SET answers = ?, score = ?, passed = ?, results = ?, submitted_at = ? WHERE id = ? AND submitted_at IS NULL",
+    [JSON.stringify(relevant), grade.score, grade.passed ? 1 : 0, JSON.stringify(results), sqliteDateTime(submittedAt), attemptId],
+  );
+  if (changed !== 1) {
     const [winner] = await selectRows<AttemptRow>(selectAttempt, [attemptId]);
     throw alreadySubmitted(winner!);
   }

@@ -16,12 +16,6 @@ export async function selectRows<Row extends object>(
   return getSequelize().query<Row>(sql, { replacements: [...replacements], type: QueryTypes.SELECT, transaction });
 }
 
-/** Runs an UPDATE and answers how many rows it changed. */
-export async function updateRows(sql: string, replacements: readonly unknown[], transaction: Transaction): Promise<number> {
-  const changed: unknown = await getSequelize().query(sql, { replacements: [...replacements], type: QueryTypes.BULKUPDATE, transaction });
-  return Number(changed);
-}
-
 /** A DATE column of a raw row: SQLite text such as "2026-09-12 06:53:47.297 +00:00" (or a Date, or null). */
 export function rawDate(value: unknown): Date | null {
   if (value === null || value === undefined) return null;

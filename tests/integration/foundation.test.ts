@@ -2,7 +2,7 @@ import fs from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTempDataDir } from "@/tests/support/temp-data-dir";
-import { closeDatabase, getSequelize, writeTransaction } from "@/lib/db";
+import { closeDatabase, getSequelize, writeStatement, writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { migrateToLatest, migrateToNothing } from "@/lib/migrate";
 import { seedDemoClub, demoMembers } from "@/lib/seed/demo-club";
@@ -97,6 +97,25 @@ describe("the write connection", () => {
     expect(await AuditEvent.count({ where: { action: "test.rolled-back" } })).toBe(0);
     const after = await writeTransaction(async (transaction) => connectionOf(transaction));
     expect(after).toBe(before);
+  });
+
+  it("runs lone statements through the same queue, in order with transactions, answering the rows changed", async () => {
+    const club = await Club.findOne();
+    const create = (index: number) =>
+      writeTransaction((transaction) =>
+        AuditEvent.create(
+          { clubId: club!.id, actorId: null, action: "test.lone", subjectType: "test", subjectId: String(index), details: {} },
+          { transaction },
+        ),
+      );
+    const mark = (index: number) =>
+      writeStatement("UPDATE audit_events SET subject_type = ? WHERE action = ? AND subject_id = ?", ["marked", "test.lone", String(index)]);
+    // Interleaved: each statement is queued after the transaction creating its row, so it finds that row.
+    const outcomes = await Promise.all(Array.from({ length: 20 }, (_, index) => [create(index), mark(index)]).flat());
+    expect(outcomes.filter((outcome) => outcome === 1)).toHaveLength(20);
+    expect(await AuditEvent.count({ where: { action: "test.lone", subjectType: "marked" } })).toBe(20);
+    expect(await writeStatement("UPDATE audit_events SET subject_type = ? WHERE action = ?", ["x", "no.such.action"])).toBe(0);
+    await expect(writeStatement("UPDATE no_such_table SET x = ?", [1])).rejects.toThrow(/no such table/);
   });
 
   it("replaces the connection when Sequelize destroys it (a commit that failed)", async () => {
