@@ -1,13 +1,16 @@
 import "server-only";
 import { cache } from "react";
 import { cookies } from "next/headers";
-import { getToken } from "next-auth/jwt";
+import { decode, getToken } from "next-auth/jwt";
+import { cachedTokenDecoder } from "@/lib/auth/token-cache";
 import { forbidden, redirect } from "next/navigation";
 import { authSecret, ensureAuthUrl } from "@/lib/env";
 import { sessionUserById } from "@/lib/data/users";
 import { assertSignedIn, canEnterArea, type Actor, type Area } from "@/lib/auth/permissions";
 
 type TokenRequest = Parameters<typeof getToken>[0]["req"];
+
+const decodeSessionToken = cachedTokenDecoder(decode);
 
 /**
  * The actor a set of request cookies signs in, checked against the database: null without a session
@@ -23,6 +26,7 @@ export async function actorFromSessionCookies(cookieList: readonly { name: strin
     req: request as unknown as TokenRequest,
     secret: authSecret(),
     secureCookie: (process.env.NEXTAUTH_URL ?? "").startsWith("https://"),
+    decode: decodeSessionToken,
   });
   if (!claims?.uid || typeof claims.tokenVersion !== "number") return null;
   const user = await sessionUserById(claims.uid, claims.tokenVersion);
