@@ -17,14 +17,14 @@ import { markdownTable, type Row } from "./stats";
 import { removeStaticLesson, staticLessonPath, writeStaticLesson } from "./static-lesson";
 import type { BenchContext } from "./measures/context";
 import { lessonCls, lessonLcp, lessonScript, lessonTbt, referencePages } from "./measures/pages";
-import { quizSubmit, rosterPaths, rosterRoute, rosterUnderWrites, trivialRoute } from "./measures/api";
+import { matrixUnderWrites, quizSubmit, rosterPaths, rosterRoute, rosterUnderWrites, trivialRoute } from "./measures/api";
 import { certificatePdf, registerPdf } from "./measures/pdf";
 
 const settings = {
   athletes: 1000,
   benchAthletes: 20,
-  submitPoolSize: 4000,
-  writePoolSize: 2000,
+  submitPoolSize: 5000,
+  writePoolSize: 3000,
   lighthouseRuns: 5,
   loadSeconds: 10,
   connections: 10,
@@ -40,6 +40,7 @@ const measureGroups: Record<"pages" | "api" | "pdf", ((context: BenchContext) =>
     quizSubmit,
     ...rosterPaths.map((rosterPath) => (context: BenchContext) => rosterRoute(context, rosterPath)),
     rosterUnderWrites,
+    matrixUnderWrites,
   ],
   pdf: [certificatePdf, registerPdf],
 };
