@@ -59,8 +59,13 @@ export function clientAddress(headers: Headers): string {
 
 /** A general-purpose limiter for public endpoints (e.g. the rig planner): points per minute per key. */
 export function publicLimiter(name: string, pointsPerMinute: number): RateLimiterMemory {
+  return namedLimiter(name, pointsPerMinute, 60);
+}
+
+/** A limiter kept per process under `name`: `points` per `durationSeconds` for each key consumed. */
+export function namedLimiter(name: string, points: number, durationSeconds: number): RateLimiterMemory {
   const key = `slipwayPublic_${name}` as keyof ThrottleGlobal;
   const holder = store as unknown as Record<string, RateLimiterMemory | undefined>;
-  holder[key] ??= new RateLimiterMemory({ points: pointsPerMinute, duration: 60 });
+  holder[key] ??= new RateLimiterMemory({ points, duration: durationSeconds });
   return holder[key];
 }

@@ -4,7 +4,9 @@ import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { recordAudit } from "@/lib/data/audit";
 import { assertAllowed, canManageFleet, type Actor } from "@/lib/auth/permissions";
-import { NotFoundError } from "@/lib/http/errors";
+import { NotFoundError, TooManyRequestsError } from "@/lib/http/errors";
+import { namedLimiter } from "@/lib/auth/throttle";
+import { RateLimiterRes } from "rate-limiter-flexible";
 import { isoWeekOf, localIsoDate } from "@/lib/care/calendar";
 import { cleaningDueState } from "@/lib/care/cleaning-due";
 import { buildCleaningDigest } from "@/lib/care/digest";
@@ -114,15 +116,33 @@ export async function sendWeeklyCleaningDigests(now: Date = new Date()): Promise
   return { isoWeek, sentToClubs };
 }
 
+/** Digests sent by hand per club an hour: enough to resend after fixing a record, not to flood inboxes. */
+export const manualDigestsPerHour = 3;
+
+async function throttleManualDigest(clubId: number): Promise<void> {
+  try {
+    await namedLimiter("manual-digest", manualDigestsPerHour, 3600).consume(String(clubId));
+  } catch (rejection) {
+    if (!(rejection instanceof RateLimiterRes)) throw rejection;
+    const minutes = Math.max(1, Math.ceil(rejection.msBeforeNext / 60_000));
+    throw new TooManyRequestsError(
+      `The digest was sent ${manualDigestsPerHour} times in the last hour. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`,
+      Math.ceil(rejection.msBeforeNext / 1000),
+    );
+  }
+}
+
 /**
  * A coach or admin sends their club's digest at once. It counts as this week's digest, so the weekly
- * check does not send another one the same week.
+ * check does not send another one the same week. At most three an hour per club (every coach and admin
+ * gets each one).
  */
 export async function sendCleaningDigestNow(actor: Actor, now: Date = new Date()): Promise<{ recipients: number; isoWeek: string }> {
   await databaseReady();
   assertAllowed(canManageFleet(actor, actor.clubId), "Only coaches and administrators send the cleaning digest.");
   const club = await Club.findByPk(actor.clubId);
   if (!club) throw new NotFoundError();
+  await throttleManualDigest(club.id);
   const today = localIsoDate(now);
   const isoWeek = isoWeekOf(today);
   const mail = await composeDigest(club, today);

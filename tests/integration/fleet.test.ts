@@ -26,7 +26,7 @@ import { encode } from "next-auth/jwt";
 import { authOptions } from "@/lib/auth/options";
 import { Boat, CleaningDigest, Club, OarSet, RigPlan, User } from "@/models";
 import type { Actor } from "@/lib/auth/permissions";
-import { ForbiddenError, NotFoundError, ValidationError } from "@/lib/http/errors";
+import { ForbiddenError, NotFoundError, TooManyRequestsError, ValidationError } from "@/lib/http/errors";
 import { boatSchema, oarSetSchema } from "@/lib/validations/fleet";
 import { savedRigPlanSchema } from "@/lib/validations/rig-plans";
 import { cleaningRecordSchema } from "@/lib/validations/cleaning";
@@ -290,6 +290,22 @@ describe("weekly cleaning digest", () => {
     const run = await sendWeeklyCleaningDigests(wednesday);
     expect(run.sentToClubs).not.toContain(coach.clubId);
     expect(run.sentToClubs).toContain(otherClubCoach.clubId);
+  });
+
+  it("sends at most three by hand an hour per club, then answers 429 with when to try again", async () => {
+    const wednesday = new Date(2030, 1, 13, 12, 0); // 2030-W07
+    // One was sent by hand in the test above: two more are allowed this hour, then it refuses.
+    await sendCleaningDigestNow(coach, wednesday);
+    await sendCleaningDigestNow(coach, wednesday);
+    const refused = sendCleaningDigestNow(coach, wednesday);
+    await expect(refused).rejects.toBeInstanceOf(TooManyRequestsError);
+    await refused.catch((error: TooManyRequestsError) => {
+      expect(error.status).toBe(429);
+      expect(error.message).toMatch(/sent 3 times in the last hour/);
+      expect(error.retryAfterSeconds).toBeGreaterThan(0);
+    });
+    // Another club's coaches are counted on their own.
+    await expect(sendCleaningDigestNow(otherClubCoach, wednesday)).resolves.toMatchObject({ isoWeek: "2030-W07" });
   });
 });
 
