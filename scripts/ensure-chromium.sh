@@ -1,5 +1,6 @@
 #!/usr/bin/env bash
-# Makes sure Debian's Chromium (and pdftoppm, for certificate rendering checks) is installed.
+# Makes sure Debian's Chromium (for the end-to-end tests) and poppler-utils (pdftoppm, pdftotext, pdffonts:
+# the PDF tests of vitest read and render certificates with them) are installed.
 # Installs them when running as root with apt-get; otherwise says what to install and stops.
 set -euo pipefail
 chromium_path="${CHROMIUM_PATH:-/usr/bin/chromium}"
