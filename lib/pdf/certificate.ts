@@ -1,5 +1,4 @@
 import { PDFDocument, degrees, rgb, type PDFFont, type PDFImage, type PDFPage } from "pdf-lib";
-import fontkit from "@pdf-lib/fontkit";
 import QRCode from "qrcode";
 import type { FontBytes } from "@/lib/pdf/fonts";
 import { embedPlainFont, fitText, textWidth, wrapCharacters, wrapText } from "@/lib/pdf/text";
@@ -62,7 +61,6 @@ export async function renderCertificatePdf(
   fonts: FontBytes,
 ): Promise<Uint8Array> {
   const document = await PDFDocument.create();
-  document.registerFontkit(fontkit);
   const regular = await embedPlainFont(document, fonts.regular);
   const bold = await embedPlainFont(document, fonts.bold);
   const kindLabel =
