@@ -7,6 +7,7 @@ import { PDFDocument, type PDFFont } from "pdf-lib";
 import fontkit from "@pdf-lib/fontkit";
 import { pdfFonts } from "@/lib/pdf/fonts";
 import { embedPlainFont, plainFeatures } from "@/lib/pdf/text";
+import { isDefaultIgnorable, plainFontkit } from "@/lib/pdf/plain-fontkit";
 import { renderCertificatePdf, type CertificatePdfInput } from "@/lib/pdf/certificate";
 import { renderRegisterPdf, type RegisterPdfInput } from "@/lib/pdf/register";
 
@@ -161,6 +162,31 @@ describe("PDF fonts", () => {
     expect(subsetCertificate![0]!.equals(wholeCertificate![0]!)).toBe(true);
     expect(subsetRegister).toHaveLength(1);
     expect(subsetRegister![0]!.equals(wholeRegister![0]!)).toBe(true);
+  });
+
+  it("lays out each character as fontkit's layout engine does with every feature off", async () => {
+    const fonts = await pdfFonts();
+    const ignorable: number[] = [];
+    for (let codePoint = 0; codePoint <= 0x10ffff; codePoint += 1)
+      if (isDefaultIgnorable(codePoint)) ignorable.push(codePoint);
+    expect(ignorable).toContain(0xad);
+    expect(ignorable).toContain(0x200d);
+    for (const bytes of [fonts.regular, fonts.bold]) {
+      const engine = fontkit.create(bytes);
+      const plain = plainFontkit.create(bytes);
+      // Mapped, default-ignorable, and a few unmapped (fraction slash, an emoji, private use, the last).
+      const codePoints = [...engine.characterSet, ...ignorable, 0x2044, 0x1f600, 0xe000, 0x10ffff];
+      const differing = codePoints.filter((codePoint) => {
+        const character = String.fromCodePoint(codePoint);
+        const ids = (font: typeof engine) =>
+          font
+            .layout(character, plainFeatures)
+            .glyphs.map((glyph) => glyph.id)
+            .join(",");
+        return ids(engine) !== ids(plain);
+      });
+      expect(differing).toEqual([]);
+    }
   });
 
   it("draws every character Inter maps from small subsets exactly as the whole font does", async () => {
