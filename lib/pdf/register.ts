@@ -1,5 +1,4 @@
 import { PDFDocument, rgb, type PDFFont, type PDFPage } from "pdf-lib";
-import fontkit from "@pdf-lib/fontkit";
 import type { FontBytes } from "@/lib/pdf/fonts";
 import { embedPlainFont, fitText, textWidth } from "@/lib/pdf/text";
 import { pageLabel, paginate, rowsPerPage } from "@/lib/pdf/pagination";
@@ -113,7 +112,6 @@ function drawHeader(page: PDFPage, input: RegisterPdfInput, regular: PDFFont, bo
  */
 export async function renderRegisterPdf(input: RegisterPdfInput, fonts: FontBytes): Promise<Uint8Array> {
   const document = await PDFDocument.create();
-  document.registerFontkit(fontkit);
   const regular = await embedPlainFont(document, fonts.regular);
   const bold = await embedPlainFont(document, fonts.bold);
   document.setTitle(`${input.clubName}: induction register`);
