@@ -29,12 +29,10 @@ export function daysUntil(today: string, isoDate: string): number {
   return daysBetweenIso(today, isoDate);
 }
 
+/** One formatter for the process: toLocaleDateString builds a new one on every call (a 500-row register calls it 1,000 times). */
+const longDate = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "long", year: "numeric", timeZone: "UTC" });
+
 /** A date for people: "14 March 2027". */
 export function formatLongDate(isoDate: string): string {
-  return new Date(`${isoDate}T00:00:00Z`).toLocaleDateString("en-GB", {
-    day: "numeric",
-    month: "long",
-    year: "numeric",
-    timeZone: "UTC",
-  });
+  return longDate.format(new Date(`${isoDate}T00:00:00Z`));
 }

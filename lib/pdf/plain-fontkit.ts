@@ -63,6 +63,18 @@ export function isDefaultIgnorable(codePoint: number): boolean {
 }
 
 /**
+ * A glyph as one call used it: the parsed glyph (shared, through the prototype) with the code points of
+ * this character. fontkit keeps one glyph object per glyph id, labelled with the first character that
+ * asked for it; pdf-lib builds a document's Unicode map from those labels. Inter draws a few characters
+ * with one glyph (ι and ɩ, Δ and ∆): with the font parsed once per process, a label from an earlier
+ * document would otherwise make a later one extract the wrong character.
+ */
+function asUsedFor(glyph: Glyph, codePoint: number | undefined): Glyph {
+  if (codePoint === undefined) return glyph;
+  return Object.create(glyph, { codePoints: { value: [codePoint], enumerable: true } }) as Glyph;
+}
+
+/**
  * The glyphs fontkit's layout gives with every OpenType feature off, without running its layout engine:
  * each code point's glyph from the character map, default-ignorable ones (soft hyphen, zero-width
  * joiner, …) as the space glyph. Setting the engine up on every call and decoding the GSUB and GPOS
@@ -73,24 +85,39 @@ export function isDefaultIgnorable(codePoint: number): boolean {
  */
 function plainGlyphs(font: Font, text: string): Glyph[] {
   const space = font.glyphForCodePoint(0x20);
-  // Decided by the glyph's first code point, as fontkit does (a glyph fontkit created for a component has none).
-  return font.glyphsForString(text).map((glyph) => {
-    const codePoint = glyph.codePoints[0];
-    return codePoint !== undefined && isDefaultIgnorable(codePoint) ? space : glyph;
+  const characters = [...text];
+  const glyphs = font.glyphsForString(text);
+  // embedPlainFont asks one character at a time, so each glyph's own character is known; otherwise the
+  // glyph's first code point decides, as fontkit does (a glyph fontkit created for a component has none).
+  const oneEach = glyphs.length === characters.length;
+  return glyphs.map((glyph, index) => {
+    const codePoint = oneEach ? characters[index]!.codePointAt(0) : glyph.codePoints[0];
+    if (codePoint !== undefined && isDefaultIgnorable(codePoint)) return asUsedFor(space, 0x20);
+    return asUsedFor(glyph, codePoint);
   });
 }
 
+/** Fonts parsed once per process, by their bytes (lib/pdf/fonts.ts reads each file once). */
+const parsedFonts = new WeakMap<Uint8Array, Font>();
+
 /**
  * fontkit for pdf-lib as `embedPlainFont` needs it: plain layout (only for fonts embedded with every
- * feature off) and TrueType subsets that keep every glyph (see padGlyphsToEvenLength).
+ * feature off), TrueType subsets that keep every glyph (see padGlyphsToEvenLength), and each font parsed
+ * once per process: parsing copies the 340 KB face and reads its tables, about 9 ms of a certificate's
+ * CPU for its two faces. Sharing is safe because documents only read the font: each makes its own subset,
+ * and the glyphs it is given carry its own characters (asUsedFor).
  */
 export const plainFontkit: typeof fontkit = {
   create(buffer, postscriptName) {
+    const key = postscriptName === undefined && buffer instanceof Uint8Array ? buffer : null;
+    const kept = key ? parsedFonts.get(key) : undefined;
+    if (kept) return kept;
     const font = fontkit.create(buffer, postscriptName);
     const createSubset = font.createSubset.bind(font);
     font.createSubset = () => padGlyphsToEvenLength(createSubset());
     // pdf-lib reads only `glyphs` from the run, so a run of glyphs alone stands in for fontkit's.
     font.layout = (text: string) => ({ glyphs: plainGlyphs(font, text) }) as GlyphRun;
+    if (key) parsedFonts.set(key, font);
     return font;
   },
 };
