@@ -30,8 +30,8 @@ export class ForbiddenError extends AppError {
 
 /** Also used for "exists but is not yours", so that nobody learns another athlete's ids. */
 export class NotFoundError extends AppError {
-  constructor(message = "Not found.") {
-    super(404, "not_found", message);
+  constructor(message = "Not found.", fieldErrors?: FieldErrors) {
+    super(404, "not_found", message, fieldErrors);
   }
 }
 
@@ -47,15 +47,17 @@ export class ConflictError extends AppError {
   }
 }
 
+/** `field` names what was too large ("body" or a form field such as "file"), in the message and in `fields`. */
 export class PayloadTooLargeError extends AppError {
-  constructor(message = "The upload is too large.") {
-    super(413, "too_large", message);
+  constructor(message = "The upload is too large.", field = "body") {
+    super(413, "too_large", `${field}: ${message}`, { [field]: [message] });
   }
 }
 
+/** `field` names what was of the wrong type: the Content-Type header or a file's bytes ("file"). */
 export class UnsupportedMediaError extends AppError {
-  constructor(message: string) {
-    super(415, "unsupported_media_type", message);
+  constructor(message: string, field = "content-type") {
+    super(415, "unsupported_media_type", `${field}: ${message}`, { [field]: [message] });
   }
 }
 

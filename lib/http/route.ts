@@ -1,7 +1,7 @@
 import "server-only";
 import { NextResponse } from "next/server";
 import type { ZodType } from "zod";
-import { AppError, PayloadTooLargeError, TooManyRequestsError, UnsupportedMediaError, ValidationError, ForbiddenError } from "@/lib/http/errors";
+import { AppError, PayloadTooLargeError, TooManyRequestsError, UnsupportedMediaError, ValidationError, ForbiddenError, NotFoundError } from "@/lib/http/errors";
 import { validationErrorFrom } from "@/lib/validations/issues";
 
 /** The one mapping of errors to HTTP responses for route handlers. Unknown errors are logged, never shown. */
@@ -64,7 +64,7 @@ const maxJsonBytes = 64 * 1024;
 export async function readJson<T>(request: Request, schema: ZodType<T>): Promise<T> {
   const type = request.headers.get("content-type") ?? "";
   if (!type.toLowerCase().startsWith("application/json")) {
-    throw new UnsupportedMediaError("Send the body as JSON with Content-Type: application/json.");
+    throw new UnsupportedMediaError("send the body as JSON with Content-Type: application/json.");
   }
   const declared = Number(request.headers.get("content-length") ?? "0");
   if (declared > maxJsonBytes) throw new ValidationError(`body: larger than ${maxJsonBytes} bytes`, { body: ["too large"] });
@@ -85,12 +85,15 @@ export async function readJson<T>(request: Request, schema: ZodType<T>): Promise
  * Reads a body of one of the given content types, at most maxBytes, stopping as soon as it is over
  * (413), so a chunked upload without Content-Length cannot make the server buffer more.
  */
-export async function readBodyBytes(request: Request, options: { maxBytes: number; types: readonly string[] }): Promise<Uint8Array> {
+export async function readBodyBytes(
+  request: Request,
+  options: { maxBytes: number; types: readonly string[]; /** What the body is called in errors. */ field?: string },
+): Promise<Uint8Array> {
   const type = (request.headers.get("content-type") ?? "").split(";")[0]!.trim().toLowerCase();
   if (!options.types.includes(type)) {
-    throw new UnsupportedMediaError(`Send the body as ${options.types.join(" or ")}.`);
+    throw new UnsupportedMediaError(`send the body as ${options.types.join(" or ")}.`);
   }
-  const tooLarge = () => new PayloadTooLargeError(`The body is larger than ${Math.round(options.maxBytes / 1024)} KB.`);
+  const tooLarge = () => new PayloadTooLargeError(`larger than ${Math.round(options.maxBytes / 1024)} KB.`, options.field ?? "body");
   if (Number(request.headers.get("content-length") ?? "0") > options.maxBytes) throw tooLarge();
   if (!request.body) return new Uint8Array();
   const reader = request.body.getReader();
@@ -113,4 +116,42 @@ export async function readBodyBytes(request: Request, options: { maxBytes: numbe
     offset += chunk.byteLength;
   }
   return bytes;
+}
+
+/**
+ * Reads and validates the query string. Every parameter is checked: a repeated one is refused (which
+ * value would count?) and the schema should be strict, so that a misspelt parameter is refused rather
+ * than silently ignored. Messages name the parameter.
+ */
+export function readQuery<T>(request: Request, schema: ZodType<T>): T {
+  const entries = [...new URL(request.url).searchParams.entries()];
+  const seen = new Set<string>();
+  for (const [key] of entries) {
+    if (seen.has(key)) throw new ValidationError(`${key}: given more than once; give it once`, { [key]: ["given more than once"] });
+    seen.add(key);
+  }
+  // Object.fromEntries makes every key an own property, "__proto__" included, so a strict schema sees it.
+  const parsed = schema.safeParse(Object.fromEntries(entries));
+  if (!parsed.success) throw validationErrorFrom(parsed.error, "query");
+  return parsed.data;
+}
+
+/** Validates a route's path parameters (`params` of the route context); messages name the parameter. */
+export async function readParams<T>(params: Promise<unknown>, schema: ZodType<T>): Promise<T> {
+  const parsed = schema.safeParse(await params);
+  if (!parsed.success) throw validationErrorFrom(parsed.error, "params");
+  return parsed.data;
+}
+
+/**
+ * Runs a look-up addressed by a path parameter; its NotFoundError (missing, or not yours) becomes one
+ * that names the parameter: "id: no such certificate".
+ */
+export async function lookUpBy<T>(param: string, what: string, work: () => Promise<T>): Promise<T> {
+  try {
+    return await work();
+  } catch (error) {
+    if (error instanceof NotFoundError) throw new NotFoundError(`${param}: no such ${what}.`, { [param]: [`no such ${what}`] });
+    throw error;
+  }
 }

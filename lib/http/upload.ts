@@ -14,8 +14,8 @@ function megabytes(bytes: number): string {
  * upload is never held in memory whole. A declared Content-Length over the limit is refused before a
  * single byte is read.
  */
-export async function readBodyWithin(request: Request, maxBytes: number): Promise<Uint8Array<ArrayBuffer>> {
-  const tooLarge = new PayloadTooLargeError(`The upload is larger than ${megabytes(maxBytes)}.`);
+export async function readBodyWithin(request: Request, maxBytes: number, field = "body"): Promise<Uint8Array<ArrayBuffer>> {
+  const tooLarge = new PayloadTooLargeError(`the upload is larger than ${megabytes(maxBytes)}.`, field);
   const declared = request.headers.get("content-length");
   if (declared !== null && Number(declared) > maxBytes) throw tooLarge;
   if (!request.body) return new Uint8Array(0);
@@ -51,9 +51,9 @@ export async function readUploadedFile(
 ): Promise<Uint8Array> {
   const contentType = request.headers.get("content-type") ?? "";
   if (!contentType.toLowerCase().startsWith("multipart/form-data")) {
-    throw new UnsupportedMediaError("Send the file as multipart/form-data.");
+    throw new UnsupportedMediaError(`send the file as multipart/form-data, in the part "${field}".`);
   }
-  const body = await readBodyWithin(request, maxBytes + multipartOverheadBytes);
+  const body = await readBodyWithin(request, maxBytes + multipartOverheadBytes, field);
   let form: FormData;
   try {
     form = await new Response(body, { headers: { "content-type": contentType } }).formData();
@@ -66,8 +66,7 @@ export async function readUploadedFile(
   if (!(file instanceof Blob) || file.size === 0) {
     throw new ValidationError(`${field}: choose a file`, { [field]: ["choose a file"] });
   }
-  if (file.size > maxBytes)
-    throw new PayloadTooLargeError(`The upload is larger than ${megabytes(maxBytes)}.`);
+  if (file.size > maxBytes) throw new PayloadTooLargeError(`the upload is larger than ${megabytes(maxBytes)}.`, field);
   return new Uint8Array(await file.arrayBuffer());
 }
 
@@ -80,7 +79,7 @@ export async function sniffImageType<T extends string>(
   const detected = await fileTypeFromBuffer(bytes);
   const mime = detected?.mime as string | undefined;
   if (!mime || !(allowed as readonly string[]).includes(mime)) {
-    throw new UnsupportedMediaError(`${what} must be ${describeTypes(allowed)}; this file is not.`);
+    throw new UnsupportedMediaError(`${what} must be ${describeTypes(allowed)}; this file is not.`, "file");
   }
   return mime as T;
 }

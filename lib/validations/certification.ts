@@ -81,6 +81,53 @@ export const registerFilterSchema = z.object({
 });
 export type RegisterFilter = z.output<typeof registerFilterSchema>;
 
+const noControlCharacters = /^[^\p{Cc}]*$/u;
+
+/**
+ * The roster CSV export's query (?filter=&q=), strict: the page only links to good values, so a bad one
+ * is a client's mistake and is refused naming the parameter. An empty `q` is no search.
+ */
+export const rosterExportQuerySchema = z.strictObject({
+  filter: z.enum(rosterFilters, { error: `must be one of ${rosterFilters.join(", ")}` }).default("all"),
+  q: z
+    .string()
+    .max(100, { error: "at most 100 characters" })
+    .regex(noControlCharacters, { error: "must not contain control characters" })
+    .transform((text) => text.trim())
+    .default(""),
+});
+
+const isoDay = z.iso.date({ error: "must be a date written YYYY-MM-DD" });
+
+/**
+ * The register downloads' query, strict (the page links only to good values): a module the course
+ * has (`moduleSlugs`), a kind, a status, and from/to days with from on or before to.
+ */
+export function registerQuerySchemaFor(moduleSlugs: readonly string[]) {
+  return z
+    .strictObject({
+      module: kebabCaseSchema
+        .refine((slug) => moduleSlugs.includes(slug), { error: "no such module" })
+        .default(""),
+      kind: z.enum(certificateKindFilters, { error: `must be one of ${certificateKindFilters.join(", ")}` }).default("all"),
+      status: z.enum(registerStatuses, { error: `must be one of ${registerStatuses.join(", ")}` }).default("all"),
+      from: isoDay.default(""),
+      to: isoDay.default(""),
+    })
+    .superRefine((query, context) => {
+      if (query.from && query.to && query.from > query.to) {
+        context.addIssue({ code: "custom", path: ["to"], message: "must not be before from" });
+      }
+    });
+}
+
+/** A query string for a route that takes no parameters: any parameter is refused, naming it. */
+export const noQuerySchema = z.strictObject({});
+
+export const certificateIdParamSchema = z.strictObject({ id: z.uuid({ error: "not a certificate id" }) });
+export const signOffIdParamSchema = z.strictObject({ id: z.uuid({ error: "not a sign-off id" }) });
+export const evidenceIdParamSchema = z.strictObject({ id: z.uuid({ error: "not a photo id" }) });
+
 /** Plain-object query parameters for the lenient schemas above. */
 export function queryObject(
   params: URLSearchParams | Record<string, string | string[] | undefined>,

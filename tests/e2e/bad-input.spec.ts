@@ -1,87 +1,17 @@
-import { expect, test, type APIRequestContext } from "@playwright/test";
+import { expect, test } from "@playwright/test";
 import { demo } from "./support/auth";
 import { apiSession } from "./support/api-session";
 import { loadAthleteEmail } from "@/lib/seed/load-athletes";
-
-/** One malformed request: a body (object → JSON; string → sent raw) and an optional content type. */
-interface BadInput {
-  label: string;
-  body: unknown;
-  contentType?: string;
-}
-
-const huge = "x".repeat(70_000);
-
-/** Malformed bodies every JSON endpoint must refuse with a 4xx JSON message (never 5xx, never a stack). */
-function commonBadInputs(validBody: Record<string, unknown>, numericKeys: string[] = []): BadInput[] {
-  const keys = Object.keys(validBody);
-  const inputs: BadInput[] = [
-    { label: "not JSON", body: "{not json", contentType: "application/json" },
-    { label: "truncated JSON", body: JSON.stringify(validBody).slice(0, -3), contentType: "application/json" },
-    { label: "empty body", body: "", contentType: "application/json" },
-    { label: "JSON null", body: "null", contentType: "application/json" },
-    { label: "JSON array", body: "[]", contentType: "application/json" },
-    { label: "JSON string", body: '"hello"', contentType: "application/json" },
-    { label: "JSON number", body: "42", contentType: "application/json" },
-    { label: "form encoded", body: "a=1&b=2", contentType: "application/x-www-form-urlencoded" },
-    { label: "plain text", body: JSON.stringify(validBody), contentType: "text/plain" },
-    { label: "no content type", body: JSON.stringify(validBody), contentType: "" },
-    { label: "empty object", body: {} },
-    { label: "extra field", body: { ...validBody, sneaky: true } },
-    { label: "prototype pollution", body: JSON.parse(`{"__proto__": {"admin": true}, ${JSON.stringify(validBody).slice(1)}`) as unknown },
-    { label: "huge body", body: { ...validBody, padding: huge } },
-  ];
-  for (const key of keys) {
-    const rest = { ...validBody };
-    delete rest[key];
-    inputs.push({ label: `missing ${key}`, body: rest });
-    inputs.push({ label: `${key} null`, body: { ...validBody, [key]: null } });
-    inputs.push({ label: `${key} wrong type (array)`, body: { ...validBody, [key]: [1, 2] } });
-    inputs.push({ label: `${key} wrong type (boolean)`, body: { ...validBody, [key]: true } });
-    inputs.push({ label: `${key} huge string`, body: { ...validBody, [key]: huge.slice(0, 5000) } });
-  }
-  for (const key of numericKeys) {
-    inputs.push({ label: `${key} "NaN"`, body: { ...validBody, [key]: "NaN" } });
-    inputs.push({ label: `${key} "Infinity"`, body: { ...validBody, [key]: "Infinity" } });
-    inputs.push({ label: `${key} negative`, body: { ...validBody, [key]: -1 } });
-    inputs.push({ label: `${key} huge number`, body: { ...validBody, [key]: 1e308 } });
-  }
-  return inputs;
-}
-
-let callNumber = 0;
-
-async function send(session: APIRequestContext, url: string, input: BadInput, method = "POST") {
-  const raw = typeof input.body === "string";
-  callNumber += 1;
-  // A different documentation address per call, so the public planner's per-address throttle never
-  // answers these (and later specs from 127.0.0.1 keep their budget).
-  const headers: Record<string, string> = { "x-forwarded-for": `198.18.${Math.floor(callNumber / 250)}.${callNumber % 250}` };
-  if (input.contentType !== undefined) headers["Content-Type"] = input.contentType;
-  else headers["Content-Type"] = "application/json";
-  return session.fetch(url, { method, headers, data: raw ? (input.body as string) : JSON.stringify(input.body) });
-}
-
-async function expectAllRefused(session: APIRequestContext, url: string, inputs: BadInput[], method = "POST") {
-  expect(inputs.length).toBeGreaterThanOrEqual(30);
-  const failures: string[] = [];
-  for (const input of inputs) {
-    const response = await send(session, url, input, method);
-    const text = await response.text();
-    const status = response.status();
-    let body: { message?: string; fields?: Record<string, string[]> } = {};
-    try {
-      body = JSON.parse(text) as typeof body;
-    } catch {
-      failures.push(`${input.label}: not JSON (${status})`);
-      continue;
-    }
-    if (status < 400 || status >= 500) failures.push(`${input.label}: status ${status}`);
-    if (!body.message) failures.push(`${input.label}: no message`);
-    if (/\bat .+\.(js|ts):\d+/.test(text)) failures.push(`${input.label}: stack trace in body`);
-  }
-  expect(failures).toEqual([]);
-}
+import {
+  commonBadInputs,
+  demoClubRecordId,
+  expectAllRefused,
+  expectAllRefusedNaming,
+  jsonCase,
+  send,
+  type BadInput,
+  type RefusalCase,
+} from "./support/bad-input";
 
 test.describe("bad input is refused with 4xx JSON naming the field", () => {
   test("POST /api/attempts/{id}/submit", async ({ baseURL }) => {
@@ -134,22 +64,6 @@ test.describe("bad input is refused with 4xx JSON naming the field", () => {
     await session.dispose();
   });
 
-  test("POST /api/modules/{slug}/attempts with unknown or malformed modules", async ({ baseURL }) => {
-    const session = await apiSession(baseURL!, loadAthleteEmail(39));
-    const cases: [string, number][] = [
-      ["/api/modules/no-such-module/attempts", 404],
-      ["/api/modules/BAD_SLUG/attempts", 400],
-      ["/api/modules/%2e%2e%2fetc/attempts", 400],
-      [`/api/modules/${"a".repeat(100)}/attempts`, 400],
-    ];
-    for (const [url, status] of cases) {
-      const response = await session.post(url);
-      expect(response.status(), url).toBe(status);
-      expect(((await response.json()) as { message: string }).message).toBeTruthy();
-    }
-    await session.dispose();
-  });
-
   test("POST /api/rig/plan (public)", async ({ playwright, baseURL }) => {
     const anonymous = await playwright.request.newContext({ baseURL });
     const valid = {
@@ -181,6 +95,57 @@ test.describe("bad input is refused with 4xx JSON naming the field", () => {
     const named = await send(anonymous, "/api/rig/plan", { label: "negative", body: withMeasured({ lengthCm: -1 }) });
     expect(Object.keys(((await named.json()) as { fields: Record<string, string[]> }).fields)).toContain("measured.lengthCm");
     await anonymous.dispose();
+  });
+
+  test("POST /api/rig/plans (saved plans)", async ({ baseURL }) => {
+    // The demo coach: any member may save a plan, and the coach is signed in by many specs already.
+    const session = await apiSession(baseURL!, demo.coach);
+    const boatId = await demoClubRecordId("boats", "Heron");
+    const oarSetId = await demoClubRecordId("oar_sets", "Short-loom sculls");
+    const sweepSetId = await demoClubRecordId("oar_sets", "Eight sweeps");
+    const scullChange = { oarType: "sculling", measured: { lengthCm: 287, inboardCm: 86.5 }, target: { lengthCm: 288, inboardCm: 88 } };
+    const valid = { clientId: "5f0c2a7e-1d3b-4c8a-9e6f-2b7d4a1c9e30", boatId, oarSetId, request: scullChange, plannedAt: new Date().toISOString() };
+    const daysFromNow = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString();
+    const withRequest = (request: Record<string, unknown>) => ({ ...valid, request: { ...scullChange, ...request } });
+    const fieldOfCommon = (label: string): string => {
+      const key = Object.keys(valid).find((name) => label.startsWith(`missing ${name}`) || label.startsWith(`${name} `));
+      if (key) return key;
+      if (label === "plain text" || label === "no content type" || label === "form encoded") return "content-type";
+      if (label === "extra field") return "sneaky";
+      if (label === "prototype pollution") return "__proto__";
+      if (label === "empty object") return "clientId";
+      return "body";
+    };
+    const cases: RefusalCase[] = [
+      ...commonBadInputs(valid, ["boatId", "oarSetId"]).map((input) => jsonCase(input, fieldOfCommon(input.label))),
+      jsonCase({ label: "clientId not a UUID", body: { ...valid, clientId: "plan-1" } }, "clientId"),
+      jsonCase({ label: "clientId SQL-looking", body: { ...valid, clientId: "' OR 1=1 --" } }, "clientId"),
+      jsonCase({ label: "boatId zero", body: { ...valid, boatId: 0 } }, "boatId"),
+      jsonCase({ label: "boatId fraction", body: { ...valid, boatId: 1.5 } }, "boatId"),
+      jsonCase({ label: "boatId as text", body: { ...valid, boatId: String(boatId) } }, "boatId"),
+      jsonCase({ label: "boatId past safe integers", body: { ...valid, boatId: 2 ** 60 } }, "boatId"),
+      { ...jsonCase({ label: "unknown boat", body: { ...valid, boatId: 999_999 } }, "boatId"), status: 404 },
+      { ...jsonCase({ label: "unknown oar set", body: { ...valid, oarSetId: 999_999 } }, "oarSetId"), status: 404 },
+      jsonCase({ label: "sweep oars for a single scull", body: { ...valid, oarSetId: sweepSetId } }, "oarSetId"),
+      jsonCase({ label: "plan for sweep oars with sculls", body: { ...valid, request: { oarType: "sweep", measured: { lengthCm: 372, inboardCm: 114 }, target: { lengthCm: 373, inboardCm: 115 } } } }, "oarSetId"),
+      jsonCase({ label: "plannedAt tomorrow", body: { ...valid, plannedAt: daysFromNow(1) } }, "plannedAt"),
+      jsonCase({ label: "plannedAt 40 days ago", body: { ...valid, plannedAt: daysFromNow(-40) } }, "plannedAt"),
+      jsonCase({ label: "plannedAt a date only", body: { ...valid, plannedAt: "2026-01-01" } }, "plannedAt"),
+      jsonCase({ label: "plannedAt month 13", body: { ...valid, plannedAt: "2026-13-01T10:00:00Z" } }, "plannedAt"),
+      jsonCase({ label: "plannedAt as a number", body: { ...valid, plannedAt: Date.now() } }, "plannedAt"),
+      jsonCase({ label: "request as text", body: { ...valid, request: "287 to 288" } }, "request"),
+      jsonCase({ label: "request length negative", body: withRequest({ measured: { lengthCm: -287, inboardCm: 86.5 } }) }, "request.measured.lengthCm"),
+      jsonCase({ label: "request length NaN text", body: withRequest({ target: { lengthCm: "NaN", inboardCm: 88 } }) }, "request.target.lengthCm"),
+      jsonCase({ label: "request click zero", body: withRequest({ clickCm: 0 }) }, "request.clickCm"),
+      jsonCase({ label: "request unknown oar type", body: withRequest({ oarType: "canoe" }) }, "request.oarType"),
+      jsonCase({ label: "request extra field", body: withRequest({ limits: { maxLengthCm: 999 } }) }, "request.limits"),
+      jsonCase({ label: "request handle move past the inboard", body: withRequest({ measured: { lengthCm: 299, inboardCm: 1 }, target: { lengthCm: 250, inboardCm: 88 } }) }, "request.measured.inboardCm"),
+    ];
+    await expectAllRefusedNaming(session, { url: "/api/rig/plans", method: "POST" }, cases);
+    // None of them was recorded: the coach's first real save is new.
+    const saved = await session.post("/api/rig/plans", { data: { ...valid, clientId: "0d5e8b1a-6c2f-4a9e-8b3d-7f1e2c4a6b90" } });
+    expect(saved.status(), await saved.text()).toBe(201);
+    await session.dispose();
   });
 
   test("POST /api/sign-offs", async ({ baseURL }) => {

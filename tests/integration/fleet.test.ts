@@ -362,10 +362,10 @@ describe("POST /api/rig/plan", () => {
     ["a span of 2 m", { ...goodPlan, spanCm: 200 }, "spanCm"],
     ["a negative half swivel", { ...goodPlan, halfSwivelCm: -1 }, "halfSwivelCm"],
     ["a null length", { ...goodPlan, measured: { lengthCm: null, inboardCm: 87 } }, "measured.lengthCm"],
-    ["an unknown field", { ...goodPlan, limits: { maxLengthCm: 999 } }, "_"],
+    ["an unknown field", { ...goodPlan, limits: { maxLengthCm: 999 } }, "limits"],
     ["a handle move longer than the inboard", { ...goodPlan, measured: { lengthCm: 299, inboardCm: 1 }, target: { lengthCm: 250, inboardCm: 88 } }, "measured.inboardCm"],
     ["not JSON", "{lengthCm: 287", "body"],
-    ["an array", [goodPlan], "_"],
+    ["an array", [goodPlan], "body"],
   ];
 
   it.each(malformed)("refuses %s with 400 naming the field", async (_label, body, field) => {

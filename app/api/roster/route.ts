@@ -1,9 +1,7 @@
 import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
 import { pageOfClubMembers } from "@/lib/data/members";
-import { route } from "@/lib/http/route";
-import { queryObject } from "@/lib/validations/certification";
-import { validationErrorFrom } from "@/lib/validations/issues";
+import { readQuery, route } from "@/lib/http/route";
 import { pageQuerySchema } from "@/lib/validations/paging";
 
 export const dynamic = "force-dynamic";
@@ -14,9 +12,8 @@ export const dynamic = "force-dynamic";
  */
 export const GET = route(async (request) => {
   const actor = await requireActor();
-  const query = pageQuerySchema.safeParse(queryObject(new URL(request.url).searchParams));
-  if (!query.success) throw validationErrorFrom(query.error);
-  const page = await pageOfClubMembers(actor, "athlete", query.data);
+  const query = readQuery(request, pageQuerySchema);
+  const page = await pageOfClubMembers(actor, "athlete", query);
   return NextResponse.json({
     athletes: page.items,
     total: page.total,

@@ -34,7 +34,7 @@ export const POST = route(async (request) => {
   const actor = await requireActor();
   assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators can change the logo.");
   const bytes = await readUploadedFile(request, { maxBytes: maxClubLogoBytes });
-  const type = await sniffImageType(bytes, clubLogoTypes, "A club logo");
+  const type = await sniffImageType(bytes, clubLogoTypes, "a club logo");
   await storeClubLogo(actor, bytes, type);
   return NextResponse.json({ ok: true }, { status: 201 });
 });

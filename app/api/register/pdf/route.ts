@@ -1,15 +1,16 @@
 import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
-import { route } from "@/lib/http/route";
+import { readQuery, route } from "@/lib/http/route";
+import { listModules } from "@/lib/content/modules";
 import { registerFor, registerPdf } from "@/lib/data/register";
-import { queryObject, registerFilterSchema } from "@/lib/validations/certification";
+import { registerQuerySchemaFor } from "@/lib/validations/certification";
 
 export const dynamic = "force-dynamic";
 
-/** Admins: the induction register as a print-ready A4 PDF, with the page's filters. */
+/** Admins: the induction register as a print-ready A4 PDF, with the page's filters (strict, as for the CSV). */
 export const GET = route(async (request) => {
   const actor = await requireActor();
-  const filter = registerFilterSchema.parse(queryObject(new URL(request.url).searchParams));
+  const filter = readQuery(request, registerQuerySchemaFor(listModules().map((meta) => meta.slug)));
   const bytes = await registerPdf(await registerFor(actor, filter));
   return new NextResponse(Buffer.from(bytes), {
     headers: {

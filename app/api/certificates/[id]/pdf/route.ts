@@ -1,6 +1,7 @@
 import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
-import { route } from "@/lib/http/route";
+import { lookUpBy, readParams, route } from "@/lib/http/route";
+import { certificateIdParamSchema } from "@/lib/validations/certification";
 import { certificatePdfFor } from "@/lib/data/certificates";
 
 export const dynamic = "force-dynamic";
@@ -9,11 +10,14 @@ interface Context {
   params: Promise<{ id: string }>;
 }
 
-/** A certificate as PDF, for its athlete and the coaches and admins of their club (404 for anyone else). */
+/**
+ * A certificate as PDF, for its athlete and the coaches and admins of their club (404 for anyone else;
+ * 400 for an id that is not a UUID). The query string is ignored.
+ */
 export const GET = route<Context>(async (_request, { params }) => {
-  const { id } = await params;
   const actor = await requireActor();
-  const { bytes, fileName } = await certificatePdfFor(actor, id);
+  const { id } = await readParams(params, certificateIdParamSchema);
+  const { bytes, fileName } = await lookUpBy("id", "certificate", () => certificatePdfFor(actor, id));
   return new NextResponse(Buffer.from(bytes), {
     headers: {
       "Content-Type": "application/pdf",

@@ -1,9 +1,8 @@
 import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
 import { startOrResumeAttempt } from "@/lib/data/learning";
-import { route } from "@/lib/http/route";
+import { lookUpBy, readParams, route } from "@/lib/http/route";
 import { moduleSlugParamSchema } from "@/lib/validations/learning";
-import { validationErrorFrom } from "@/lib/validations/issues";
 
 interface Context {
   params: Promise<{ slug: string }>;
@@ -11,12 +10,11 @@ interface Context {
 
 /**
  * Starts or resumes the athlete's attempt at a module's quiz: 201 either way (the body says `resumed`);
- * the questions carry no answers.
+ * the questions carry no answers. 400 for a malformed slug, 404 for an unknown module; the body is not read.
  */
 export const POST = route<Context>(async (_request, context) => {
   const actor = await requireActor();
-  const parsed = moduleSlugParamSchema.safeParse(await context.params);
-  if (!parsed.success) throw validationErrorFrom(parsed.error);
-  const opening = await startOrResumeAttempt(actor, parsed.data.slug);
+  const { slug } = await readParams(context.params, moduleSlugParamSchema);
+  const opening = await lookUpBy("slug", "module", () => startOrResumeAttempt(actor, slug));
   return NextResponse.json(opening, { status: 201 });
 });

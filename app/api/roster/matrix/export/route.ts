@@ -1,17 +1,17 @@
 import { requireActor } from "@/lib/auth/session";
-import { route } from "@/lib/http/route";
+import { readQuery, route } from "@/lib/http/route";
 import { rosterMatrix } from "@/lib/data/clearance";
 import { csvDownloadHeaders, toCsv, type CsvColumn } from "@/lib/csv/export";
 import { rosterRowMatches, type RosterRow } from "@/lib/clearance/roster";
 import { clearanceStateLabels, moduleStatusLabels } from "@/lib/clearance/rules";
-import { queryObject, rosterQuerySchema } from "@/lib/validations/certification";
+import { rosterExportQuerySchema } from "@/lib/validations/certification";
 
 export const dynamic = "force-dynamic";
 
-/** The roster view as CSV, with the same filter and name search as the page (?filter=…&q=…). */
+/** The roster view as CSV, with the same filter and name search as the page (?filter=…&q=…; strict, 400 naming a bad parameter). */
 export const GET = route(async (request) => {
   const actor = await requireActor();
-  const query = rosterQuerySchema.parse(queryObject(new URL(request.url).searchParams));
+  const query = readQuery(request, rosterExportQuerySchema);
   const matrix = await rosterMatrix(actor);
   const rows = matrix.athletes.filter((row) => rosterRowMatches(row, query.filter, query.q, matrix.today));
   const columns: CsvColumn<RosterRow>[] = [
