@@ -235,3 +235,19 @@ test.describe("query strings and path ids are checked: 4xx JSON naming the param
     await session.dispose();
   });
 });
+
+test("paths under /api that no route serves answer a JSON 404 for every method", async ({ baseURL }) => {
+  const session = await apiSession(baseURL!, demo.coach);
+  for (const [method, path] of [
+    ["GET", "/api/verify/a/b"],
+    ["GET", "/api/no-such-thing"],
+    ["POST", "/api/roster/nope"],
+    ["DELETE", "/api/certificates"],
+  ] as const) {
+    const response = await session.fetch(path, { method, ...(method === "POST" ? { data: {} } : {}) });
+    expect(response.status(), `${method} ${path}`).toBe(404);
+    expect(response.headers()["content-type"]).toContain("application/json");
+    expect(((await response.json()) as { error: string }).error).toBe("not_found");
+  }
+  await session.dispose();
+});
