@@ -11,6 +11,11 @@ const slipwaySans = localFont({
   ],
   variable: "--font-slipway",
   display: "swap",
+  // Not preloaded: on a slow link three early font downloads delay the first paint of the text; the
+  // metric-matched "Slipway Fallback" (app/globals.css) shows it meanwhile.
+  preload: false,
+  adjustFontFallback: false,
+  fallback: ["Slipway Fallback"],
 });
 
 export const metadata: Metadata = {

@@ -1,8 +1,8 @@
 "use client";
 
-import { signOut } from "next-auth/react";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { endSession } from "@/lib/auth/sign-out";
 
 export function SignOutButton() {
   const router = useRouter();
@@ -13,7 +13,12 @@ export function SignOutButton() {
       disabled={pending}
       onClick={async () => {
         setPending(true);
-        await signOut({ redirect: false });
+        try {
+          await endSession("/sign-in");
+        } catch (error) {
+          setPending(false); // still signed in: let them try again
+          throw error;
+        }
         router.replace("/sign-in");
         router.refresh();
       }}

@@ -21,6 +21,12 @@ interface NetworkRequestItem {
 
 export interface LighthouseRun extends PageFigures {
   finalUrl: string;
+  /**
+   * When the unthrottled load really painted its largest content (the trace, not the simulation). Lantern
+   * counts every request that finished before this moment, so a late observed paint (e.g. on a busy
+   * machine) pulls scripts and fonts into the simulated LCP: kept in last.json to explain outliers.
+   */
+  observedLcpMs: number;
 }
 
 export interface LighthouseSession {
@@ -71,12 +77,14 @@ export async function openLighthouse(): Promise<LighthouseSession> {
     const scriptBytes = (details?.items ?? [])
       .filter((item) => item.resourceType === "Script")
       .reduce((sum, item) => sum + (item.transferSize ?? 0), 0);
+    const observed = (lhr.audits.metrics?.details as { items?: { observedLargestContentfulPaint?: number }[] } | undefined)?.items?.[0];
     return {
       lcpMs: audit("largest-contentful-paint"),
       tbtMs: audit("total-blocking-time"),
       cls: audit("cumulative-layout-shift"),
       scriptBytes,
       finalUrl: lhr.finalDisplayedUrl,
+      observedLcpMs: observed?.observedLargestContentfulPaint ?? Number.NaN,
     };
   };
 
