@@ -16,8 +16,10 @@ export default function LandingPage() {
         <li>Coaches: who may rig unsupervised, and who is waiting for your sign-off.</li>
         <li>Club administrators: members, settings and the induction register for printing.</li>
       </ul>
-      <Link href="/sign-in" className={buttonClasses("primary")}>
-        Sign in
+      {/* /home sends a signed-in member to their own start page and everyone else to sign-in, so this
+          page stays static and never offers "Sign in" to someone who already is. */}
+      <Link href="/home" className={buttonClasses("primary")}>
+        Open Slipway
       </Link>
     </div>
   );

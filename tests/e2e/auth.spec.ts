@@ -29,6 +29,16 @@ test.describe("signing in", () => {
     await expect(status).toContainText("do not match an active account");
   });
 
+  test("the landing page's button takes a visitor to sign-in and a signed-in coach to their roster", async ({ page }) => {
+    await page.goto("/");
+    await page.getByRole("link", { name: "Open Slipway" }).click();
+    await expect(page).toHaveURL(/\/sign-in/);
+    await signIn(page, demo.coach);
+    await page.goto("/");
+    await page.getByRole("link", { name: "Open Slipway" }).click();
+    await expect(page).toHaveURL(/\/roster$/);
+  });
+
   test("signing out ends the session", async ({ page }) => {
     await signIn(page, demo.athlete);
     await page.getByRole("button", { name: "Sign out" }).click();
