@@ -1,5 +1,6 @@
 import "server-only";
 import { fileTypeFromBuffer } from "file-type";
+import { imageSize } from "image-size";
 import { PayloadTooLargeError, UnsupportedMediaError, ValidationError } from "@/lib/http/errors";
 
 /** Room for the multipart boundaries and part headers around the file itself. */
@@ -81,7 +82,24 @@ export async function sniffImageType<T extends string>(
   if (!mime || !(allowed as readonly string[]).includes(mime)) {
     throw new UnsupportedMediaError(`${what} must be ${describeTypes(allowed)}; this file is not.`, "file");
   }
+  // The first bytes name the type; the image's own header (its size) must also read, so a PNG signature
+  // followed by anything else is not stored as a photo. Not a full decode: pixels are not checked.
+  if (!hasReadableDimensions(bytes, mime)) {
+    throw new UnsupportedMediaError(`${what} looks like a ${typeNames[mime] ?? mime} but is damaged or cut short; export it again.`, "file");
+  }
   return mime as T;
+}
+
+const sizeTypes: Record<string, string> = { "image/jpeg": "jpg", "image/png": "png", "image/webp": "webp" };
+
+/** Whether the image header reads with a width and height and agrees with the sniffed type (image-size). */
+function hasReadableDimensions(bytes: Uint8Array, mime: string): boolean {
+  try {
+    const size = imageSize(bytes);
+    return (size.width ?? 0) > 0 && (size.height ?? 0) > 0 && (sizeTypes[mime] === undefined || size.type === sizeTypes[mime]);
+  } catch {
+    return false;
+  }
 }
 
 const typeNames: Record<string, string> = { "image/jpeg": "JPEG", "image/png": "PNG", "image/webp": "WebP" };

@@ -51,6 +51,7 @@ function uploadCases(options: { maxBytes: number; notAllowed: Buffer[] }): Refus
     { label: "empty file", field: "file", multipart: { file: filePart(Buffer.alloc(0)) } },
     { label: "empty file of no type", field: "file", multipart: { file: filePart(Buffer.alloc(0), "empty", "application/octet-stream") } },
     { label: "text named .png", field: "file", status: 415, multipart: { file: filePart(Buffer.from("not an image at all")) } },
+    { label: "PNG signature, then not a PNG", field: "file", status: 415, multipart: { file: filePart(Buffer.concat([png.subarray(0, 8), Buffer.from("the rest is not an image")])) } },
     { label: "PDF named .png", field: "file", status: 415, multipart: { file: filePart(pdf) } },
     { label: "SVG with a script", field: "file", status: 415, multipart: { file: filePart(svg, "logo.svg", "image/svg+xml") } },
     { label: "random bytes", field: "file", status: 415, multipart: { file: filePart(randomBytes, "photo.jpg", "image/jpeg") } },

@@ -623,6 +623,19 @@ describe("upload route handlers", () => {
         )
       ).status,
     ).toBe(415);
+    // The right first bytes are not enough: a PNG signature or a JPEG start followed by anything else.
+    // (The check reads the image's header, not every pixel: a PNG cut after its header still passes.)
+    for (const [bytes, name, type] of [
+      [Buffer.concat([tinyPng.subarray(0, 8), Buffer.from("not the rest of an image at all")]), "cut.png", "image/png"],
+      [Buffer.from([0xff, 0xd8, 0xff, 0xe0, ...Buffer.from("no frames follow this start of a JPEG")]), "cut.jpg", "image/jpeg"],
+    ] as const) {
+      const refused = await evidenceRoute.POST(
+        new Request("http://test/upload", { method: "POST", ...multipart(bytes, name, type) }),
+        context(),
+      );
+      expect(refused.status, name).toBe(415);
+      expect(((await refused.json()) as { message: string }).message).toMatch(/damaged or cut short|must be/);
+    }
   });
 
   it("refuses athletes and other clubs' coaches before reading", async () => {
