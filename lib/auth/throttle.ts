@@ -1,5 +1,6 @@
 import "server-only";
-import { RateLimiterMemory } from "rate-limiter-flexible";
+import { RateLimiterMemory, RateLimiterRes } from "rate-limiter-flexible";
+import { TooManyRequestsError } from "@/lib/http/errors";
 
 /** Sign-in failures: at most 10 per 15 minutes per account and per address. */
 export const signInFailureLimit = 10;
@@ -68,4 +69,17 @@ export function namedLimiter(name: string, points: number, durationSeconds: numb
   const holder = store as unknown as Record<string, RateLimiterMemory | undefined>;
   holder[key] ??= new RateLimiterMemory({ points, duration: durationSeconds });
   return holder[key];
+}
+
+/**
+ * Takes one point for `key`, or throws a 429 (TooManyRequestsError with Retry-After) whose message
+ * `refusal` writes from the milliseconds until a point is free again.
+ */
+export async function consumeOrRefuse(limiter: RateLimiterMemory, key: string, refusal: (msBeforeNext: number) => string): Promise<void> {
+  try {
+    await limiter.consume(key);
+  } catch (rejection) {
+    if (!(rejection instanceof RateLimiterRes)) throw rejection;
+    throw new TooManyRequestsError(refusal(rejection.msBeforeNext), Math.max(1, Math.ceil(rejection.msBeforeNext / 1000)));
+  }
 }

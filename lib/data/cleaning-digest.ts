@@ -4,9 +4,8 @@ import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { recordAudit } from "@/lib/data/audit";
 import { assertAllowed, canManageFleet, type Actor } from "@/lib/auth/permissions";
-import { NotFoundError, TooManyRequestsError } from "@/lib/http/errors";
-import { namedLimiter } from "@/lib/auth/throttle";
-import { RateLimiterRes } from "rate-limiter-flexible";
+import { NotFoundError } from "@/lib/http/errors";
+import { consumeOrRefuse, namedLimiter } from "@/lib/auth/throttle";
 import { isoWeekOf, localIsoDate } from "@/lib/care/calendar";
 import { cleaningDueState } from "@/lib/care/cleaning-due";
 import { buildCleaningDigest } from "@/lib/care/digest";
@@ -120,16 +119,10 @@ export async function sendWeeklyCleaningDigests(now: Date = new Date()): Promise
 export const manualDigestsPerHour = 3;
 
 async function throttleManualDigest(clubId: number): Promise<void> {
-  try {
-    await namedLimiter("manual-digest", manualDigestsPerHour, 3600).consume(String(clubId));
-  } catch (rejection) {
-    if (!(rejection instanceof RateLimiterRes)) throw rejection;
-    const minutes = Math.max(1, Math.ceil(rejection.msBeforeNext / 60_000));
-    throw new TooManyRequestsError(
-      `The digest was sent ${manualDigestsPerHour} times in the last hour. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`,
-      Math.ceil(rejection.msBeforeNext / 1000),
-    );
-  }
+  await consumeOrRefuse(namedLimiter("manual-digest", manualDigestsPerHour, 3600), String(clubId), (msBeforeNext) => {
+    const minutes = Math.max(1, Math.ceil(msBeforeNext / 60_000));
+    return `The digest was sent ${manualDigestsPerHour} times in the last hour. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`;
+  });
 }
 
 /**

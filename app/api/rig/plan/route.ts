@@ -1,10 +1,9 @@
 import { NextResponse } from "next/server";
-import { RateLimiterRes } from "rate-limiter-flexible";
 import { optionalActorFromRequest } from "@/lib/auth/request-actor";
-import { clientAddress, publicLimiter } from "@/lib/auth/throttle";
+import { clientAddress, consumeOrRefuse, publicLimiter } from "@/lib/auth/throttle";
 import { rigSettingsFor } from "@/lib/data/fleet";
 import { computeRigPlan, type RigPlanResponse } from "@/lib/fleet/plan-response";
-import { TooManyRequestsError, ValidationError } from "@/lib/http/errors";
+import { ValidationError } from "@/lib/http/errors";
 import { readJson, route } from "@/lib/http/route";
 import { defaultClubOarLimits, type ClubOarLimits } from "@/lib/rigging/limits";
 import type { RigPlanRequest } from "@/lib/validations/rig";
@@ -16,17 +15,11 @@ export const dynamic = "force-dynamic";
 export const rigPlanRequestsPerMinute = 60;
 
 async function throttle(request: Request): Promise<void> {
-  try {
-    await publicLimiter("rig-plan", rigPlanRequestsPerMinute).consume(clientAddress(request.headers));
-  } catch (rejection) {
-    if (rejection instanceof RateLimiterRes) {
-      throw new TooManyRequestsError(
-        "Too many plans asked for from this address. Wait a minute and try again.",
-        Math.max(1, Math.ceil(rejection.msBeforeNext / 1000)),
-      );
-    }
-    throw rejection;
-  }
+  await consumeOrRefuse(
+    publicLimiter("rig-plan", rigPlanRequestsPerMinute),
+    clientAddress(request.headers),
+    () => "Too many plans asked for from this address. Wait a minute and try again.",
+  );
 }
 
 /** The engine refuses impossible settings with a RangeError; here that is the caller's input, so a 400. */
