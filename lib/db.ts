@@ -36,14 +36,15 @@ interface DbGlobal {
 }
 const globalStore = globalThis as unknown as DbGlobal;
 
+/** A value bound to a `?` of a plain statement. */
+export type SqlValue = string | number | null;
+
 /** The parts of Sequelize's SQLite connection manager that the write connection hooks into. */
 interface SqliteConnection {
   close(callback?: (err: Error | null) => void): void;
   run(sql: string, values: readonly SqlValue[], callback: (this: { changes: number }, err: Error | null) => void): void;
 }
 
-/** A value bound to a `?` of a plain statement. */
-export type SqlValue = string | number | null;
 interface SqliteConnectionManager {
   getConnection(options?: { uuid?: string; type?: string }): Promise<SqliteConnection>;
   releaseConnection(connection: SqliteConnection, force?: boolean): void;
@@ -125,22 +126,10 @@ function writeLock(): Mutex {
  * the queue, concurrent Sequelize transactions fail with SQLITE_BUSY. Every write goes through here.
  */
 export async function writeTransaction<T>(work: (transaction: Transaction) => Promise<T>): Promise<T> {
-  return writeLock().runExclusive(() => {
-    const sequelize = getSequelize();
-    // Sequelize asks for the transaction's connection synchronously inside transaction(); the flag is
-    // consumed there. Should a later Sequelize ask later, the flag is cleared and the transaction simply
-    // opens its own connection as before (slower, still correct).
-    claimWriter = true;
-    let committed: Promise<T>;
-    try {
-      committed = sequelize.transaction((transaction) => work(transaction));
-    } finally {
-      claimWriter = false;
-    }
-    return committed.then((result) => {
-      globalStore.slipwayCommittedWrites = committedWrites() + 1;
-      return result;
-    });
+  return writeLock().runExclusive(async () => {
+    const result = await claimingWriter(() => getSequelize().transaction((transaction) => work(transaction)));
+    countCommit();
+    return result;
   });
 }
 
@@ -154,23 +143,35 @@ export async function writeTransaction<T>(work: (transaction: Transaction) => Pr
 export async function writeStatement(sql: string, values: readonly SqlValue[]): Promise<number> {
   return writeLock().runExclusive(async () => {
     const manager = getSequelize().connectionManager as unknown as SqliteConnectionManager;
-    claimWriter = true;
-    let pending: Promise<SqliteConnection>;
-    try {
-      pending = manager.getConnection({});
-    } finally {
-      claimWriter = false;
-    }
-    const connection = await pending;
+    const connection = await claimingWriter(() => manager.getConnection({}));
     const changes = await new Promise<number>((resolve, reject) => {
       connection.run(sql, values, function (err) {
         if (err) reject(err);
         else resolve(this.changes);
       });
     });
-    globalStore.slipwayCommittedWrites = committedWrites() + 1;
+    countCommit();
     return changes;
   });
+}
+
+/**
+ * Starts work whose first connection request gets the write connection. Sequelize asks for a
+ * connection synchronously (inside transaction(), or getConnection itself), which consumes the flag.
+ * Should a later Sequelize ask later, the flag is cleared here and the work simply opens its own
+ * connection as before (slower, still correct). Call only while holding the write lock.
+ */
+function claimingWriter<T>(start: () => T): T {
+  claimWriter = true;
+  try {
+    return start();
+  } finally {
+    claimWriter = false;
+  }
+}
+
+function countCommit(): void {
+  globalStore.slipwayCommittedWrites = committedWrites() + 1;
 }
 
 /** How many write transactions this process has committed (part of the read caches' version). */
