@@ -3,13 +3,13 @@ import { z } from "zod";
 export const maxPageSize = 500;
 export const defaultPageSize = 100;
 
-/** A whole number written in decimal digits (a query-string value), within [min, max]. */
-function wholeNumber(field: string, min: number, max: number) {
+/** A whole number written in decimal digits (a query-string value), within [min, max]. Refusals name the field by their path. */
+function wholeNumber(min: number, max: number) {
   return z
     .string()
-    .regex(/^\d{1,9}$/, `${field} must be a whole number`)
+    .regex(/^\d{1,9}$/, "must be a whole number")
     .transform(Number)
-    .pipe(z.number().int().min(min, `${field} must be at least ${min}`).max(max, `${field} must be at most ${max}`));
+    .pipe(z.number().int().min(min, `must be at least ${min}`).max(max, `must be at most ${max}`));
 }
 
 /**
@@ -17,8 +17,8 @@ function wholeNumber(field: string, min: number, max: number) {
  * unknown parameters are refused, so a misspelt "limt" is not silently the default page.
  */
 export const pageQuerySchema = z.strictObject({
-  limit: wholeNumber("limit", 1, maxPageSize).default(defaultPageSize),
-  offset: wholeNumber("offset", 0, 1_000_000_000).default(0),
+  limit: wholeNumber(1, maxPageSize).default(defaultPageSize),
+  offset: wholeNumber(0, 1_000_000_000).default(0),
 });
 
 export type PageQuery = z.infer<typeof pageQuerySchema>;

@@ -13,12 +13,6 @@ export const dynamic = "force-dynamic";
 export const GET = route(async (request) => {
   const actor = await requireActor();
   const query = readQuery(request, pageQuerySchema);
-  const page = await pageOfClubMembers(actor, "athlete", query);
-  return NextResponse.json({
-    athletes: page.items,
-    total: page.total,
-    limit: page.limit,
-    offset: page.offset,
-    nextOffset: page.nextOffset,
-  });
+  const { items, ...paging } = await pageOfClubMembers(actor, "athlete", query);
+  return NextResponse.json({ athletes: items, ...paging });
 });
