@@ -510,7 +510,7 @@ describe("certificate and register PDFs", () => {
     expect(text).toContain("Signature");
   });
 
-  it("prints a 500-row register on A4 pages with the header on each and 'Page n of m', in under 2 s", async () => {
+  it("prints a 500-row register on A4 pages with the header on each and 'Page n of m'", async () => {
     const fonts = await pdfFonts();
     const rows = Array.from({ length: 500 }, (_, index) => ({
       serial: `LR-${year}-${String(index + 1).padStart(4, "0")}`,
@@ -521,13 +521,11 @@ describe("certificate and register PDFs", () => {
       expiresOn: passExpiresOn(today, 12),
       status: "Valid",
     }));
-    const started = performance.now();
+    // How long it takes is the benchmark's business (`npm run bench`: 500-row register ≤ 1 s), not a test's.
     const bytes = await renderRegisterPdf(
       { clubName: "Lantern Reach Rowing Club", filterSummary: "All modules", generatedOn: today, rows },
       fonts,
     );
-    const elapsedMs = performance.now() - started;
-    expect(elapsedMs).toBeLessThan(2000);
     const document = await PDFDocument.load(bytes);
     const pageCount = Math.ceil(500 / registerRowsPerPage);
     expect(document.getPageCount()).toBe(pageCount);
