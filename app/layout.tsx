@@ -2,6 +2,7 @@ import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
 import "./globals.css";
 import { SiteHeader } from "@/components/shell/site-header";
+import { WebFontSwitch } from "@/components/shell/web-font-switch";
 
 const slipwaySans = localFont({
   src: [
@@ -9,10 +10,11 @@ const slipwaySans = localFont({
     { path: "../fonts/inter-latin-600-normal.woff2", weight: "600", style: "normal" },
     { path: "../fonts/inter-latin-700-normal.woff2", weight: "700", style: "normal" },
   ],
-  variable: "--font-slipway",
+  // Only a variable: globals.css puts it in front of the fallback once WebFontSwitch has run.
+  variable: "--font-slipway-web",
   display: "swap",
-  // Not preloaded: on a slow link three early font downloads delay the first paint of the text; the
-  // metric-matched "Slipway Fallback" (app/globals.css) shows it meanwhile.
+  // Not preloaded, and not used before hydration (WebFontSwitch): on a slow link three early font
+  // downloads delay the first paint; the metric-matched "Slipway Fallback" shows the text meanwhile.
   preload: false,
   adjustFontFallback: false,
   fallback: ["Slipway Fallback"],
@@ -39,6 +41,7 @@ export default function RootLayout({ children }: Readonly<{ children: React.Reac
         >
           Skip to content
         </a>
+        <WebFontSwitch />
         <SiteHeader />
         <main id="main" className="mx-auto w-full max-w-3xl px-4 pb-16 pt-6">
           {children}
