@@ -33,6 +33,7 @@ export const moduleFrontmatterSchema = z.strictObject({
     .refine((items) => new Set(items.map((item) => item.id)).size === items.length, {
       error: "item ids must be unique",
     }),
+  /** Whether a new club counts this module towards "may rig unsupervised" (admins change it per club). */
   requiredForClearance: z.boolean().default(true),
 });
 

@@ -12,6 +12,8 @@ export const clubSettingsSchema = z.object({
   passMark: z.number().min(0.5).max(1).default(0.8),
   clickCm: z.number().min(0.1).max(2).default(0.5),
   halfSwivelCm: z.number().min(0).max(5).default(2),
+  // The modules whose frontmatter says `requiredForClearance: true`, in course order (this file is also
+  // bundled for the settings form, so it cannot read content/; tests/unit/content-modules.test.ts checks).
   clearanceModules: z
     .array(z.string().max(60))
     .default(["overall-length", "setting-inboard", "changing-boats", "secure-and-check", "grip-cleaning"]),

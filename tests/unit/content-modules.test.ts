@@ -3,6 +3,7 @@ import path from "node:path";
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
 import { moduleFrontmatterSchema } from "@/lib/content/module-schema";
+import { readClubSettings } from "@/lib/validations/club-settings";
 import {
   checkModuleSet,
   getModule,
@@ -81,6 +82,11 @@ describe("the course's lessons", () => {
       expect(meta.quiz.draw).toBeLessThanOrEqual(10);
       expect(meta.requiredForClearance).toBe(true);
     }
+  });
+
+  it("starts a new club with the modules whose frontmatter says requiredForClearance, in course order", () => {
+    const fresh = readClubSettings({});
+    expect(fresh.clearanceModules).toEqual(modules.filter((meta) => meta.requiredForClearance).map((meta) => meta.slug));
   });
 
   it("gives every lesson a practical checklist of 3 to 5 observable items", () => {
