@@ -148,7 +148,7 @@ function storedResultOf(row: AttemptRow): AttemptResult {
 }
 
 function alreadySubmitted(row: AttemptRow): ConflictError {
-  return new ConflictError("This attempt was already submitted; here is its stored result.", { result: storedResultOf(row) });
+  return new ConflictError("This attempt was already submitted; here is its stored result.", { extra: { result: storedResultOf(row) } });
 }
 
 const selectAttempt =

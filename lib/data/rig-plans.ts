@@ -3,7 +3,7 @@ import { UniqueConstraintError } from "sequelize";
 import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { rigSettingsFor } from "@/lib/data/fleet";
-import { assertAllowed, canReviewRigPlans, type Actor } from "@/lib/auth/permissions";
+import { assertAllowed, assertVisible, canReviewRigPlans, type Actor } from "@/lib/auth/permissions";
 import { NotFoundError, ValidationError } from "@/lib/http/errors";
 import { oarTypeOfClass } from "@/lib/fleet/catalogue";
 import { computeRigPlan, type RigPlanResponse } from "@/lib/fleet/plan-response";
@@ -85,12 +85,20 @@ export interface RigPlanEntry {
   result: RigPlanResponse;
 }
 
-/** The club's most recent saved plans, newest first, optionally for one boat (coaches and admins). */
+/**
+ * The club's most recent saved plans, newest first, optionally for one boat of the club, archived or
+ * not (coaches and admins). Any other boat is not found (404), so a mistyped id is never mistaken for a
+ * boat without plans.
+ */
 export async function listRigPlans(actor: Actor, options: { boatId?: number; limit?: number } = {}): Promise<RigPlanEntry[]> {
   await databaseReady();
   assertAllowed(canReviewRigPlans(actor, actor.clubId), "Only coaches and administrators see saved rig plans.");
+  if (options.boatId !== undefined) {
+    const boat = await Boat.findByPk(options.boatId, { attributes: ["id", "clubId"] });
+    assertVisible(boat !== null && boat.clubId === actor.clubId);
+  }
   const plans = await RigPlan.findAll({
-    where: { clubId: actor.clubId, ...(options.boatId ? { boatId: options.boatId } : {}) },
+    where: { clubId: actor.clubId, ...(options.boatId !== undefined ? { boatId: options.boatId } : {}) },
     include: [
       { model: User, as: "user", attributes: ["name"] },
       { model: Boat, as: "boat", attributes: ["id", "name", "boatClass"] },

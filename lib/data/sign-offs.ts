@@ -180,7 +180,11 @@ export async function requestSignOff(
     const standing = (await standingOf(actor.id, context, today, transaction)).modules.find(
       (entry) => entry.slug === meta.slug,
     )!;
-    if (standing.requestProblem) throw new ConflictError(standing.requestProblem);
+    if (standing.requestProblem) {
+      throw new ConflictError(standing.requestProblem, {
+        fieldErrors: { moduleSlug: [standing.requestProblem] },
+      });
+    }
     const created = await PracticalAssessment.create(
       {
         id: randomUUID(),

@@ -124,7 +124,7 @@ export async function inviteMember(actor: Actor, input: InvitationInput): Promis
   assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators can invite members.");
   const email = normaliseEmail(input.email);
   if (await User.findOne({ where: { email } })) {
-    throw new ConflictError("Someone with that e-mail address is already a member.");
+    throw new ConflictError("Someone with that e-mail address is already a member.", { fieldErrors: { email: ["Already a member."] } });
   }
   const club = await Club.findByPk(actor.clubId);
   if (!club) throw new NotFoundError();

@@ -41,9 +41,10 @@ export class ValidationError extends AppError {
   }
 }
 
+/** `fieldErrors` names the field the conflict is about (an e-mail already taken); `extra` goes into the body as is. */
 export class ConflictError extends AppError {
-  constructor(message: string, extra?: Record<string, unknown>) {
-    super(409, "conflict", message, undefined, extra);
+  constructor(message: string, options: { fieldErrors?: FieldErrors; extra?: Record<string, unknown> } = {}) {
+    super(409, "conflict", message, options.fieldErrors, options.extra);
   }
 }
 

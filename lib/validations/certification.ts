@@ -1,10 +1,11 @@
 import { z } from "zod";
 import { kebabCaseSchema, type ChecklistItem } from "@/lib/content/module-schema";
 import { checklistVerdicts } from "@/lib/clearance/checklist";
+import { maxModuleSlugLength } from "@/lib/validations/learning";
 
 /** An athlete asks for a practical sign-off; coachId null means "any coach of the club". */
 export const signOffRequestSchema = z.strictObject({
-  moduleSlug: kebabCaseSchema,
+  moduleSlug: kebabCaseSchema.max(maxModuleSlugLength, { error: `at most ${maxModuleSlugLength} characters` }),
   coachId: z.number().int().positive().nullable().default(null),
 });
 export type SignOffRequestInput = z.input<typeof signOffRequestSchema>;

@@ -1,7 +1,10 @@
 import { z } from "zod";
 
+/** The longest module name a request may carry; the course's own are far shorter. */
+export const maxModuleSlugLength = 60;
+
 export const moduleSlugParamSchema = z.strictObject({
-  slug: z.string().max(60).regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, { error: "not a module name" }),
+  slug: z.string().max(maxModuleSlugLength).regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, { error: "not a module name" }),
 });
 
 export const attemptIdParamSchema = z.strictObject({

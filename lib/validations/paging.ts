@@ -4,7 +4,7 @@ export const maxPageSize = 500;
 export const defaultPageSize = 100;
 
 /** A whole number written in decimal digits (a query-string value), within [min, max]. Refusals name the field by their path. */
-function wholeNumber(min: number, max: number) {
+export function wholeNumberParam(min: number, max: number) {
   return z
     .string()
     .regex(/^\d{1,9}$/, "must be a whole number")
@@ -17,8 +17,8 @@ function wholeNumber(min: number, max: number) {
  * unknown parameters are refused, so a misspelt "limt" is not silently the default page.
  */
 export const pageQuerySchema = z.strictObject({
-  limit: wholeNumber(1, maxPageSize).default(defaultPageSize),
-  offset: wholeNumber(0, 1_000_000_000).default(0),
+  limit: wholeNumberParam(1, maxPageSize).default(defaultPageSize),
+  offset: wholeNumberParam(0, 1_000_000_000).default(0),
 });
 
 export type PageQuery = z.infer<typeof pageQuerySchema>;

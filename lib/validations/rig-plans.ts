@@ -1,6 +1,7 @@
 import { z } from "zod";
 
 import { roundTo } from "@/lib/rigging/round";
+import { wholeNumberParam } from "@/lib/validations/paging";
 import { rigPlanRequestSchema } from "@/lib/validations/rig";
 
 /**
@@ -59,3 +60,11 @@ export const measuredOarSchema = z.strictObject({
 });
 
 export type MeasuredOarInput = z.input<typeof measuredOarSchema>;
+
+/**
+ * The saved-plans list's query: `?boat=<id>` for one boat, or nothing for all. Strict, like every API
+ * query: a repeated, misspelt or unknown parameter is refused naming it rather than ignored.
+ */
+export const savedRigPlansQuerySchema = z.strictObject({
+  boat: wholeNumberParam(1, 2_147_483_647).optional(),
+});

@@ -1,7 +1,7 @@
 import { expect, test } from "@playwright/test";
-import { demo } from "./support/auth";
+import { demo, otherClub } from "./support/auth";
 import { apiSession } from "./support/api-session";
-import { expectAllRefusedNaming, type RefusalCase } from "./support/bad-input";
+import { demoClubRecordId, expectAllRefusedNaming, type RefusalCase } from "./support/bad-input";
 import { loadAthleteEmail } from "@/lib/seed/load-athletes";
 
 /**
@@ -107,6 +107,48 @@ test.describe("query strings and path ids are checked: 4xx JSON naming the param
     ]);
     await expectAllRefusedNaming(session, { url: "/api/roster" }, cases);
     await session.dispose();
+  });
+
+  test("GET /api/rig/plans", async ({ baseURL }) => {
+    const session = await apiSession(baseURL!, demo.coach);
+    const heronId = String(await demoClubRecordId("boats", "Heron"));
+    const path = "/api/rig/plans";
+    const unknownBoat = (label: string, value: string): RefusalCase => ({ label, field: "boat", status: 404, url: withQuery(path, [["boat", value]]) });
+    const cases: RefusalCase[] = [
+      ...queryCases(path, [
+        {
+          name: "boat",
+          valid: heronId,
+          bad: [
+            ["zero", "0"],
+            ["negative zero", "-0"],
+            ["fraction", "1.5"],
+            ["exponent", "1e2"],
+            ["hex", "0x10"],
+            ["plus sign", "+1"],
+            ["twenty digits", "9".repeat(20)],
+            ["a boat's name", "Heron"],
+            ["a list", `${heronId},${heronId}`],
+            ["JSON", `[${heronId}]`],
+            ["with a unit", `${heronId}cm`],
+          ],
+        },
+      ]),
+      unknownBoat("unknown boat", "999999"),
+      unknownBoat("unknown boat: the largest id", "999999999"),
+      unknownBoat("unknown boat with leading zeros", "000999999"),
+    ];
+    await expectAllRefusedNaming(session, { url: path }, cases);
+    // The list itself and one boat's plans still answer.
+    expect((await session.get(path)).status()).toBe(200);
+    expect((await session.get(withQuery(path, [["boat", heronId]]))).status()).toBe(200);
+    await session.dispose();
+    // Another club's coach is told the boat does not exist.
+    const stranger = await apiSession(baseURL!, otherClub.coach, otherClub.password);
+    const hidden = await stranger.get(withQuery(path, [["boat", heronId]]));
+    expect(hidden.status()).toBe(404);
+    expect(((await hidden.json()) as { fields: Record<string, string[]> }).fields).toHaveProperty("boat");
+    await stranger.dispose();
   });
 
   test("GET /api/roster/matrix", async ({ baseURL }) => {

@@ -176,9 +176,9 @@ describe("practical sign-off", () => {
   let assessmentId = "";
 
   it("is refused before the module's quiz is passed", async () => {
-    await expect(
-      signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: null }),
-    ).rejects.toBeInstanceOf(ConflictError);
+    const early = signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: null });
+    await expect(early).rejects.toBeInstanceOf(ConflictError);
+    await expect(early).rejects.toMatchObject({ fieldErrors: { moduleSlug: [expect.stringMatching(/quiz first/)] } });
     await expect(
       signOffs.requestSignOff(carys, { moduleSlug: "no-such-module", coachId: null }),
     ).rejects.toBeInstanceOf(NotFoundError);

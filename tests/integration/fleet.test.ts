@@ -199,6 +199,9 @@ describe("saved rig plans", () => {
     const grebe = await Boat.findOne({ where: { name: "Grebe" } });
     expect(await listRigPlans(coach, { boatId: grebe!.id })).toEqual([]);
     expect(await listRigPlans(otherClubCoach)).toEqual([]);
+    // A boat that is not the club's is not found, rather than a boat without plans.
+    await expect(listRigPlans(otherClubCoach, { boatId: osprey!.id })).rejects.toBeInstanceOf(NotFoundError);
+    await expect(listRigPlans(coach, { boatId: 999_999 })).rejects.toBeInstanceOf(NotFoundError);
   });
 
   it("refuses another club's boat and a set that does not suit the boat", async () => {

@@ -160,7 +160,10 @@ describe("accounts and invitations", () => {
     const admin = await actorFor("admin@lantern-reach.example");
     const coach = await actorFor("coach.tobias@lantern-reach.example");
     await expect(inviteMember(coach, { email: "x@lantern-reach.example", name: "X", role: "athlete" })).rejects.toBeInstanceOf(ForbiddenError);
-    await expect(inviteMember(admin, { email: "ada@lantern-reach.example", name: "Ada", role: "athlete" })).rejects.toBeInstanceOf(ConflictError);
+    const taken = inviteMember(admin, { email: "ada@lantern-reach.example", name: "Ada", role: "athlete" });
+    await expect(taken).rejects.toBeInstanceOf(ConflictError);
+    // The refusal names the field, so the invitation form marks the e-mail input.
+    await expect(taken).rejects.toMatchObject({ fieldErrors: { email: ["Already a member."] } });
 
     await inviteMember(admin, { email: "Rowan.New@lantern-reach.example", name: "Rowan New", role: "athlete" });
     const [mail] = await listOutbox();

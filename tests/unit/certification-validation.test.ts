@@ -66,6 +66,10 @@ describe("other certification inputs", () => {
       coachId: null,
     });
     expect(signOffRequestSchema.safeParse({ moduleSlug: "../etc" }).success).toBe(false);
+    expect(signOffRequestSchema.safeParse({ moduleSlug: "a".repeat(60) }).success).toBe(true);
+    expect(signOffRequestSchema.safeParse({ moduleSlug: "a".repeat(61) }).error?.issues[0]?.path).toEqual([
+      "moduleSlug",
+    ]);
   });
 
   it("suspensions need a reason", () => {

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
-import { readJson, route } from "@/lib/http/route";
+import { lookUpBy, readJson, route } from "@/lib/http/route";
 import { requestSignOff, signOffQueue } from "@/lib/data/sign-offs";
 import { signOffRequestSchema } from "@/lib/validations/certification";
 
@@ -12,10 +12,13 @@ export const GET = route(async () => {
   return NextResponse.json({ signOffs: await signOffQueue(actor) });
 });
 
-/** An athlete who passed a module's quiz asks for its practical sign-off: 201 with the sign-off's id. */
+/**
+ * An athlete who passed a module's quiz asks for its practical sign-off: 201 with the sign-off's id;
+ * 404 naming moduleSlug for a module the course does not have, 409 naming it when asking is not yet due.
+ */
 export const POST = route(async (request) => {
   const actor = await requireActor();
   const input = await readJson(request, signOffRequestSchema);
-  const { assessmentId } = await requestSignOff(actor, input);
+  const { assessmentId } = await lookUpBy("moduleSlug", "module", () => requestSignOff(actor, input));
   return NextResponse.json({ assessmentId }, { status: 201 });
 });

@@ -1,10 +1,8 @@
 import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
 import { listRigPlans, saveRigPlan } from "@/lib/data/rig-plans";
-import { readJson, route } from "@/lib/http/route";
-import { recordIdSchema } from "@/lib/validations/fleet";
-import { savedRigPlanSchema } from "@/lib/validations/rig-plans";
-import { ValidationError } from "@/lib/http/errors";
+import { lookUpBy, readJson, readQuery, route } from "@/lib/http/route";
+import { savedRigPlanSchema, savedRigPlansQuerySchema } from "@/lib/validations/rig-plans";
 
 export const dynamic = "force-dynamic";
 
@@ -16,16 +14,13 @@ export const POST = route(async (request) => {
   return NextResponse.json(outcome, { status: outcome.created ? 201 : 200 });
 });
 
-/** Coaches and admins: the club's recent plans, newest first; `?boat=<id>` for one boat. */
+/**
+ * Coaches and admins: the club's recent plans, newest first; `?boat=<id>` for one boat. 400 naming the
+ * parameter for a malformed, repeated or unknown one; 404 naming `boat` for a boat not of the club.
+ */
 export const GET = route(async (request) => {
   const actor = await requireActor();
-  const boatParam = new URL(request.url).searchParams.get("boat");
-  let boatId: number | undefined;
-  if (boatParam !== null) {
-    const parsed = recordIdSchema.safeParse(boatParam);
-    if (!parsed.success) throw new ValidationError("boat: must be a boat id", { boat: ["must be a boat id"] });
-    boatId = parsed.data;
-  }
-  const plans = await listRigPlans(actor, { boatId });
+  const { boat } = readQuery(request, savedRigPlansQuerySchema);
+  const plans = await lookUpBy("boat", "boat in your club", () => listRigPlans(actor, { boatId: boat }));
   return NextResponse.json({ plans });
 });

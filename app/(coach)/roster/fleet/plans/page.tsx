@@ -18,9 +18,11 @@ const timeFormat = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeS
 export default async function SavedPlansPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const actor = await requirePageActor("coach", "/roster/fleet/plans");
   const params = await searchParams;
+  const fleet = await listFleet(actor, { includeArchived: true });
   const boat = recordIdSchema.safeParse(params.boat);
-  const boatId = boat.success ? boat.data : undefined;
-  const [fleet, plans] = await Promise.all([listFleet(actor, { includeArchived: true }), listRigPlans(actor, { boatId })]);
+  // A boat the club does not have (an old or edited link) shows every plan, as the select then says.
+  const boatId = boat.success && fleet.boats.some((candidate) => candidate.id === boat.data) ? boat.data : undefined;
+  const plans = await listRigPlans(actor, { boatId });
   const boatName = fleet.boats.find((candidate) => candidate.id === boatId)?.name;
   return (
     <div className="space-y-6">
