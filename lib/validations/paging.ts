@@ -18,7 +18,7 @@ export function wholeNumberParam(min: number, max: number) {
  */
 export const pageQuerySchema = z.strictObject({
   limit: wholeNumberParam(1, maxPageSize).default(defaultPageSize),
-  offset: wholeNumberParam(0, 1_000_000_000).default(0),
+  offset: wholeNumberParam(0, 999_999_999).default(0),
 });
 
 export type PageQuery = z.infer<typeof pageQuerySchema>;

@@ -4,6 +4,7 @@ import { readQuery } from "@/lib/http/route";
 import { ValidationError } from "@/lib/http/errors";
 import { validationErrorFrom } from "@/lib/validations/issues";
 import { registerQuerySchemaFor, rosterExportQuerySchema } from "@/lib/validations/certification";
+import { pageQuerySchema } from "@/lib/validations/paging";
 
 function refusal(work: () => unknown): ValidationError {
   try {
@@ -62,5 +63,13 @@ describe("readQuery", () => {
       from: "2026-01-01",
       to: "2026-01-01",
     });
+  });
+});
+
+describe("pageQuerySchema", () => {
+  it("reads the largest offset nine digits can write and refuses what no digit pattern would pass", () => {
+    expect(readQuery(get("?offset=999999999"), pageQuerySchema)).toEqual({ limit: 100, offset: 999_999_999 });
+    expect(refusal(() => readQuery(get("?offset=1000000000"), pageQuerySchema)).fieldErrors).toHaveProperty("offset");
+    expect(refusal(() => readQuery(get("?limit=501"), pageQuerySchema)).fieldErrors).toHaveProperty("limit");
   });
 });
