@@ -66,5 +66,5 @@ export type MeasuredOarInput = z.input<typeof measuredOarSchema>;
  * query: a repeated, misspelt or unknown parameter is refused naming it rather than ignored.
  */
 export const savedRigPlansQuerySchema = z.strictObject({
-  boat: wholeNumberParam(1, 2_147_483_647).optional(),
+  boat: wholeNumberParam(1, 999_999_999).optional(),
 });
