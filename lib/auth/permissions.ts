@@ -104,6 +104,31 @@ export function canReviewRigPlans(actor: Actor, clubId: number): boolean {
   return isCoach(actor) && actor.clubId === clubId;
 }
 
+/*
+ * The club-wide lists, as assertions: the data functions call them, and so do their routes before reading
+ * a query, so that a role that may not see the list gets 403 whatever it sends, never a 400 about the query.
+ */
+
+/** 403 unless coach or admin: the member lists (GET /api/roster). */
+export function assertMayListMembers(actor: Actor): void {
+  assertAllowed(isCoach(actor), "Only coaches and administrators can list members.");
+}
+
+/** 403 unless coach or admin: the roster matrix and its CSV. */
+export function assertMaySeeRoster(actor: Actor): void {
+  assertAllowed(isCoach(actor), "Only coaches and administrators see the roster.");
+}
+
+/** 403 unless an admin: the induction register and its CSV and PDF (of the admin's own club). */
+export function assertMaySeeRegister(actor: Actor): void {
+  assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators see the induction register.");
+}
+
+/** 403 unless coach or admin: the club's saved rig plans. */
+export function assertMayReviewRigPlans(actor: Actor): void {
+  assertAllowed(canReviewRigPlans(actor, actor.clubId), "Only coaches and administrators see saved rig plans.");
+}
+
 /** Throws 401 when nobody is signed in. */
 export function assertSignedIn(actor: Actor | null): asserts actor is Actor {
   if (!actor) throw new UnauthenticatedError();

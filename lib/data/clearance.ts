@@ -10,6 +10,7 @@ import { summarise, suspendedAthletes, type CertificateSummary } from "@/lib/dat
 import { attemptsOf, type AttemptListEntry } from "@/lib/data/learning";
 import {
   assertAllowed,
+  assertMaySeeRoster,
   assertVisible,
   canSuspendClearance,
   canViewAthlete,
@@ -122,7 +123,7 @@ const rosterMatrices = versionedReadCache<RosterMatrix>(32);
  */
 export async function rosterMatrix(actor: Actor): Promise<RosterMatrix> {
   await databaseReady();
-  assertAllowed(isCoach(actor), "Only coaches and administrators see the roster.");
+  assertMaySeeRoster(actor);
   const today = isoDateOf(new Date());
   // The coach's id is in the key: "waiting for me" differs between coaches.
   return rosterMatrices.read(`${actor.clubId}:${actor.id}:${today}`, () => computeRosterMatrix(actor, today));

@@ -2,7 +2,7 @@ import "server-only";
 import { Op, type WhereOptions } from "sequelize";
 import { databaseReady } from "@/lib/data/database";
 import { summarise, suspendedAthletes, type CertificateSummary } from "@/lib/data/certificates";
-import { assertAllowed, canManageClub, type Actor } from "@/lib/auth/permissions";
+import { assertMaySeeRegister, type Actor } from "@/lib/auth/permissions";
 import { listModules } from "@/lib/content/modules";
 import { isoDateOf } from "@/lib/clearance/dates";
 import { certificateStatusLabels } from "@/lib/certificates/status";
@@ -22,7 +22,7 @@ export interface Register {
 /** Every certificate the club issued that matches the filters, in serial order (admins of the club). A module filter keeps that module's certificates only. */
 export async function registerFor(actor: Actor, filter: RegisterFilter): Promise<Register> {
   await databaseReady();
-  assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators see the induction register.");
+  assertMaySeeRegister(actor);
   const where: WhereOptions<Certificate> = { clubId: actor.clubId };
   const issuedOn: Record<symbol, string> = {};
   if (filter.from) issuedOn[Op.gte] = filter.from;

@@ -3,7 +3,7 @@ import { UniqueConstraintError } from "sequelize";
 import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { rigSettingsFor } from "@/lib/data/fleet";
-import { assertAllowed, assertVisible, canReviewRigPlans, type Actor } from "@/lib/auth/permissions";
+import { assertMayReviewRigPlans, assertVisible, type Actor } from "@/lib/auth/permissions";
 import { NotFoundError, ValidationError } from "@/lib/http/errors";
 import { oarTypeOfClass } from "@/lib/fleet/catalogue";
 import { computeRigPlan, type RigPlanResponse } from "@/lib/fleet/plan-response";
@@ -92,7 +92,7 @@ export interface RigPlanEntry {
  */
 export async function listRigPlans(actor: Actor, options: { boatId?: number; limit?: number } = {}): Promise<RigPlanEntry[]> {
   await databaseReady();
-  assertAllowed(canReviewRigPlans(actor, actor.clubId), "Only coaches and administrators see saved rig plans.");
+  assertMayReviewRigPlans(actor);
   if (options.boatId !== undefined) {
     const boat = await Boat.findByPk(options.boatId, { attributes: ["id", "clubId"] });
     assertVisible(boat !== null && boat.clubId === actor.clubId);

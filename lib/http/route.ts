@@ -145,13 +145,16 @@ export async function readParams<T>(params: Promise<unknown>, schema: ZodType<T>
 
 /**
  * Runs a look-up addressed by a path parameter; its NotFoundError (missing, or not yours) becomes one
- * that names the parameter: "id: no such certificate".
+ * that names the parameter: "id: no such certificate". A NotFoundError that already names its own field
+ * (a module slug inside a member's request, say) is passed on as it is, so it is not blamed on `param`.
  */
 export async function lookUpBy<T>(param: string, what: string, work: () => Promise<T>): Promise<T> {
   try {
     return await work();
   } catch (error) {
-    if (error instanceof NotFoundError) throw new NotFoundError(`${param}: no such ${what}.`, { [param]: [`no such ${what}`] });
+    if (error instanceof NotFoundError && !error.fieldErrors) {
+      throw new NotFoundError(`${param}: no such ${what}.`, { [param]: [`no such ${what}`] });
+    }
     throw error;
   }
 }

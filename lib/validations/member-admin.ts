@@ -8,11 +8,17 @@ const status = z.enum(userStatuses, { error: "Choose active or deactivated." });
 /** The route segment of /api/members/[id]. */
 export const memberIdSchema = z.strictObject({ id: memberId });
 
-/** PATCH /api/members/[id]: exactly one of a new role or a new status. */
+/**
+ * PATCH /api/members/[id]: exactly one of a new role or a new status. Sending both, or neither, is
+ * refused under both field names, so a client sees which two fields the rule is about.
+ */
 export const memberUpdateSchema = z
   .strictObject({ role: role.optional(), status: status.optional() })
-  .refine((update) => (update.role === undefined) !== (update.status === undefined), {
-    error: "Send either a role or a status, not both.",
+  .superRefine((update, context) => {
+    const given = [update.role, update.status].filter((value) => value !== undefined).length;
+    if (given === 1) return;
+    const message = given === 0 ? "Send a role or a status." : "Send either a role or a status, not both.";
+    for (const field of ["role", "status"]) context.addIssue({ code: "custom", message, path: [field] });
   });
 export type MemberUpdate = z.infer<typeof memberUpdateSchema>;
 

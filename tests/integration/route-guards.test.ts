@@ -139,6 +139,28 @@ describe("the route-guard table", () => {
   });
 });
 
+describe("a role that may not see a club-wide list", () => {
+  // Each query is malformed; the allowed role's 400 shows it, so the refused role's 403 came first.
+  const lists: [file: string, query: string, refused: GuardRole, allowed: GuardRole][] = [
+    ["app/api/roster/route.ts", "/api/roster?limit=0", "athlete", "coach"],
+    ["app/api/roster/matrix/route.ts", "/api/roster/matrix?page=2", "athlete", "coach"],
+    ["app/api/roster/matrix/export/route.ts", "/api/roster/matrix/export?filter=everyone", "athlete", "coach"],
+    ["app/api/register/csv/route.ts", "/api/register/csv?from=yesterday", "coach", "admin"],
+    ["app/api/register/pdf/route.ts", "/api/register/pdf?kind=medal", "coach", "admin"],
+    ["app/api/rig/plans/route.ts", "/api/rig/plans?boat=-1", "athlete", "coach"],
+  ];
+
+  it.each(lists)("%s is refused 403 before the query %s is read", async (file, query, refused, allowed) => {
+    const { GET } = (await import(/* @vite-ignore */ path.join(projectRoot, file))) as { GET: unknown };
+    const ask = (role: GuardRole) =>
+      callRoute(GET, { method: "GET", path: query, params: {}, cookie: cookies[role], headers: { "x-forwarded-for": "198.51.100.251" } });
+    const refusal = await ask(refused);
+    expect(refusal.status).toBe(403);
+    expect(((await refusal.json()) as { fields?: object }).fields ?? {}).toEqual({});
+    expect((await ask(allowed)).status).toBe(400);
+  });
+});
+
 describe.each(routeGuardRows.map((row) => [`${row.method} ${row.file}`, row] as const))("%s", (_label, row) => {
   it.each(guardRoles.map((role) => [role, row.expect[role]] as const))("as %s answers %i", async (role, status) => {
     const handlers = (await import(/* @vite-ignore */ path.join(projectRoot, row.file))) as Record<string, unknown>;

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
-import { readQuery } from "@/lib/http/route";
-import { ValidationError } from "@/lib/http/errors";
+import { lookUpBy, readQuery } from "@/lib/http/route";
+import { NotFoundError, ValidationError } from "@/lib/http/errors";
 import { validationErrorFrom } from "@/lib/validations/issues";
 import { registerQuerySchemaFor, rosterExportQuerySchema } from "@/lib/validations/certification";
 import { pageQuerySchema } from "@/lib/validations/paging";
@@ -71,5 +71,27 @@ describe("pageQuerySchema", () => {
     expect(readQuery(get("?offset=999999999"), pageQuerySchema)).toEqual({ limit: 100, offset: 999_999_999 });
     expect(refusal(() => readQuery(get("?offset=1000000000"), pageQuerySchema)).fieldErrors).toHaveProperty("offset");
     expect(refusal(() => readQuery(get("?limit=501"), pageQuerySchema)).fieldErrors).toHaveProperty("limit");
+  });
+});
+
+describe("lookUpBy", () => {
+  const failing = (error: Error) => () => Promise.reject(error);
+
+  it("names the parameter when the look-up finds nothing", async () => {
+    const error = await lookUpBy("id", "attempt", failing(new NotFoundError())).catch((caught: unknown) => caught);
+    expect(error).toBeInstanceOf(NotFoundError);
+    expect((error as NotFoundError).message).toBe("id: no such attempt.");
+    expect((error as NotFoundError).fieldErrors).toEqual({ id: ["no such attempt"] });
+  });
+
+  it("keeps a not-found that already names its own field", async () => {
+    const own = new NotFoundError("moduleSlug: no such module.", { moduleSlug: ["no such module"] });
+    await expect(lookUpBy("id", "member", failing(own))).rejects.toBe(own);
+  });
+
+  it("passes other errors and results through", async () => {
+    const refused = new ValidationError("role: not a role", { role: ["not a role"] });
+    await expect(lookUpBy("id", "member", failing(refused))).rejects.toBe(refused);
+    await expect(lookUpBy("id", "member", () => Promise.resolve(7))).resolves.toBe(7);
   });
 });

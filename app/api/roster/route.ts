@@ -1,4 +1,5 @@
 import { NextResponse } from "next/server";
+import { assertMayListMembers } from "@/lib/auth/permissions";
 import { requireActor } from "@/lib/auth/session";
 import { pageOfClubMembers } from "@/lib/data/members";
 import { readQuery, route } from "@/lib/http/route";
@@ -12,6 +13,7 @@ export const dynamic = "force-dynamic";
  */
 export const GET = route(async (request) => {
   const actor = await requireActor();
+  assertMayListMembers(actor);
   const query = readQuery(request, pageQuerySchema);
   const { items, ...paging } = await pageOfClubMembers(actor, "athlete", query);
   return NextResponse.json({ athletes: items, ...paging });

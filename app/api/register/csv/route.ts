@@ -1,3 +1,4 @@
+import { assertMaySeeRegister } from "@/lib/auth/permissions";
 import { requireActor } from "@/lib/auth/session";
 import { readQuery, route } from "@/lib/http/route";
 import { listModules } from "@/lib/content/modules";
@@ -10,6 +11,7 @@ export const dynamic = "force-dynamic";
 /** Admins: the induction register as CSV, with the page's filters (?module=&kind=&status=&from=&to=; strict, 400 naming a bad one). */
 export const GET = route(async (request) => {
   const actor = await requireActor();
+  assertMaySeeRegister(actor);
   const filter = readQuery(request, registerQuerySchemaFor(listModules().map((meta) => meta.slug)));
   const register = await registerFor(actor, filter);
   return new Response(registerCsv(register), {

@@ -1,4 +1,5 @@
 import { NextResponse } from "next/server";
+import { assertMaySeeRegister } from "@/lib/auth/permissions";
 import { requireActor } from "@/lib/auth/session";
 import { readQuery, route } from "@/lib/http/route";
 import { listModules } from "@/lib/content/modules";
@@ -10,6 +11,7 @@ export const dynamic = "force-dynamic";
 /** Admins: the induction register as a print-ready A4 PDF, with the page's filters (strict, as for the CSV). */
 export const GET = route(async (request) => {
   const actor = await requireActor();
+  assertMaySeeRegister(actor);
   const filter = readQuery(request, registerQuerySchemaFor(listModules().map((meta) => meta.slug)));
   const bytes = await registerPdf(await registerFor(actor, filter));
   return new NextResponse(Buffer.from(bytes), {

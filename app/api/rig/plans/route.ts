@@ -1,4 +1,5 @@
 import { NextResponse } from "next/server";
+import { assertMayReviewRigPlans } from "@/lib/auth/permissions";
 import { requireActor } from "@/lib/auth/session";
 import { listRigPlans, saveRigPlan } from "@/lib/data/rig-plans";
 import { lookUpBy, readJson, readQuery, route } from "@/lib/http/route";
@@ -20,6 +21,7 @@ export const POST = route(async (request) => {
  */
 export const GET = route(async (request) => {
   const actor = await requireActor();
+  assertMayReviewRigPlans(actor);
   const { boat } = readQuery(request, savedRigPlansQuerySchema);
   const plans = await lookUpBy("boat", "boat in your club", () => listRigPlans(actor, { boatId: boat }));
   return NextResponse.json({ plans });

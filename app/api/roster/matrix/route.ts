@@ -1,4 +1,5 @@
 import { NextResponse } from "next/server";
+import { assertMaySeeRoster } from "@/lib/auth/permissions";
 import { requireActor } from "@/lib/auth/session";
 import { readQuery, route } from "@/lib/http/route";
 import { noQuerySchema } from "@/lib/validations/certification";
@@ -16,6 +17,7 @@ const serialized = new WeakMap<RosterMatrix, string>();
 /** Coaches and admins: the club's active athletes × modules with each one's clearance. Takes no parameters (400 naming any). */
 export const GET = route(async (request) => {
   const actor = await requireActor();
+  assertMaySeeRoster(actor);
   readQuery(request, noQuerySchema);
   const matrix = await rosterMatrix(actor);
   let body = serialized.get(matrix);

@@ -1,3 +1,4 @@
+import { assertMaySeeRoster } from "@/lib/auth/permissions";
 import { requireActor } from "@/lib/auth/session";
 import { readQuery, route } from "@/lib/http/route";
 import { rosterMatrix } from "@/lib/data/clearance";
@@ -11,6 +12,7 @@ export const dynamic = "force-dynamic";
 /** The roster view as CSV, with the same filter and name search as the page (?filter=…&q=…; strict, 400 naming a bad parameter). */
 export const GET = route(async (request) => {
   const actor = await requireActor();
+  assertMaySeeRoster(actor);
   const query = readQuery(request, rosterExportQuerySchema);
   const matrix = await rosterMatrix(actor);
   const rows = matrix.athletes.filter((row) => rosterRowMatches(row, query.filter, query.q, matrix.today));
