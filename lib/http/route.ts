@@ -4,13 +4,17 @@ import type { ZodType } from "zod";
 import { AppError, PayloadTooLargeError, TooManyRequestsError, UnsupportedMediaError, ValidationError, ForbiddenError, NotFoundError } from "@/lib/http/errors";
 import { validationErrorFrom } from "@/lib/validations/issues";
 
-/** The one mapping of errors to HTTP responses for route handlers. Unknown errors are logged, never shown. */
-export function errorResponse(error: unknown): NextResponse {
+/**
+ * The one mapping of errors to HTTP responses for route handlers. Unknown errors are logged, never shown.
+ * `extra` adds fields to a refusal's body (the auth route adds the `url` next-auth's client expects).
+ */
+export function errorResponse(error: unknown, extra?: Record<string, unknown>): NextResponse {
   if (error instanceof AppError) {
     const headers: Record<string, string> = {};
     if (error instanceof TooManyRequestsError) headers["Retry-After"] = String(error.retryAfterSeconds);
     return NextResponse.json(
       {
+        ...extra,
         ...error.extra,
         error: error.code,
         message: error.message,
@@ -119,12 +123,11 @@ export async function readBodyBytes(
 }
 
 /**
- * Reads and validates the query string. Every parameter is checked: a repeated one is refused (which
- * value would count?) and the schema should be strict, so that a misspelt parameter is refused rather
- * than silently ignored. Messages name the parameter.
+ * Validates name=value pairs (a query string or a form) with a schema: a repeated name is refused (which
+ * value would count?) and the schema should be strict, so that a misspelt name is refused rather than
+ * silently ignored. Messages name the pair; `root` names the whole when it is not an object.
  */
-export function readQuery<T>(request: Request, schema: ZodType<T>): T {
-  const entries = [...new URL(request.url).searchParams.entries()];
+function readPairs<T>(entries: [string, string][], schema: ZodType<T>, root: string): T {
   const seen = new Set<string>();
   for (const [key] of entries) {
     if (seen.has(key)) throw new ValidationError(`${key}: given more than once; give it once`, { [key]: ["given more than once"] });
@@ -132,8 +135,24 @@ export function readQuery<T>(request: Request, schema: ZodType<T>): T {
   }
   // Object.fromEntries makes every key an own property, "__proto__" included, so a strict schema sees it.
   const parsed = schema.safeParse(Object.fromEntries(entries));
-  if (!parsed.success) throw validationErrorFrom(parsed.error, "query");
+  if (!parsed.success) throw validationErrorFrom(parsed.error, root);
   return parsed.data;
+}
+
+/** Reads and validates the query string (see readPairs): messages name the parameter. */
+export function readQuery<T>(request: Request, schema: ZodType<T>): T {
+  return readPairs([...new URL(request.url).searchParams.entries()], schema, "query");
+}
+
+/**
+ * Reads an application/x-www-form-urlencoded body of at most maxBytes (415 for another type, 413 when
+ * larger) and validates its fields (see readPairs). Returns the checked fields and the raw text, for a
+ * handler that passes the body on.
+ */
+export async function readForm<T>(request: Request, schema: ZodType<T>, maxBytes: number): Promise<{ fields: T; text: string }> {
+  const bytes = await readBodyBytes(request, { maxBytes, types: ["application/x-www-form-urlencoded"] });
+  const text = new TextDecoder().decode(bytes);
+  return { fields: readPairs([...new URLSearchParams(text).entries()], schema, "body"), text };
 }
 
 /** Validates a route's path parameters (`params` of the route context); messages name the parameter. */

@@ -249,6 +249,13 @@ test.describe("query strings and path ids are checked: 4xx JSON naming the param
     await session.dispose();
   });
 
+  test("DELETE /api/evidence/{id}", async ({ baseURL }) => {
+    // Only malformed and unknown ids: no case may remove a real photo.
+    const session = await apiSession(baseURL!, demo.coach);
+    await expectAllRefusedNaming(session, { url: "/api/evidence" }, uuidIdCases((id) => `/api/evidence/${id}`, "DELETE"));
+    await session.dispose();
+  });
+
   test("POST /api/modules/{slug}/attempts", async ({ baseURL }) => {
     // A load-club athlete, so demo members keep their state; no case may open an attempt.
     const session = await apiSession(baseURL!, loadAthleteEmail(39));

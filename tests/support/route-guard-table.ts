@@ -161,9 +161,12 @@ export const routeGuardRows: RouteGuardRow[] = [
   {
     file: "app/api/auth/[...nextauth]/route.ts",
     method: "POST",
-    request: () => ({ path: "/api/auth/callback/password", form: { email: "nobody@nowhere.example", password: "no-csrf-token-sent" } }),
+    request: () => ({
+      path: "/api/auth/callback/password",
+      form: { email: "nobody@nowhere.example", password: "not-this-csrf-token", csrfToken: "0".repeat(64) },
+    }),
     expect: all(302),
-    why: "Without next-auth's CSRF token a sign-in is sent back to the sign-in page, for everyone.",
+    why: "A well-formed CSRF token that is not the caller's own: next-auth sends the sign-in back to the sign-in page, for everyone.",
   },
   {
     file: "app/api/[...unmatched]/route.ts",

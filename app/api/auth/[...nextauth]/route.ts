@@ -1,7 +1,10 @@
 import NextAuth from "next-auth";
-import { NextResponse } from "next/server";
+import { NextRequest, NextResponse } from "next/server";
 import { authOptions } from "@/lib/auth/options";
 import { clientAddress, isSignInThrottled, recordSignInFailure } from "@/lib/auth/throttle";
+import { NotFoundError } from "@/lib/http/errors";
+import { errorResponse, readForm } from "@/lib/http/route";
+import { authPostForms, isAuthPostAction, maxAuthFormBytes } from "@/lib/validations/auth-forms";
 
 interface AuthContext {
   params: Promise<{ nextauth: string[] }>;
@@ -16,22 +19,38 @@ export function GET(request: Request, context: AuthContext): Promise<Response> {
 }
 
 /**
- * Password sign-in is throttled here, at the edge of next-auth: an account or address with 10 failures
- * in 15 minutes gets 429 before its password is even checked. The answer never says whether the account exists.
+ * Every POST is checked before next-auth reads it: only the actions Slipway uses (password and link
+ * sign-in, sign-out) are served, each with a strict form of at most 32 KB (400 naming a bad field, 413,
+ * 415 for another content type, 404 for any other action), so malformed input never reaches next-auth,
+ * which answered a malformed JSON body with a 500. Refusals carry the `url` next-auth's client expects.
+ *
+ * Password sign-in is throttled here too: an account or address with 10 failures in 15 minutes gets 429
+ * before its password is even checked. The answer never says whether the account exists.
  */
 export async function POST(request: Request, context: AuthContext): Promise<Response> {
   const { nextauth } = await context.params;
-  const isPasswordSignIn = nextauth[0] === "callback" && nextauth[1] === "password";
-  if (!isPasswordSignIn) return nextAuth(request, context);
+  const action = (nextauth ?? []).join("/");
+  const refusedUrl = new URL("/sign-in?error=invalid", request.url).toString();
+  let checked: { fields: Record<string, string | undefined>; text: string };
+  try {
+    if (!isAuthPostAction(action)) {
+      throw new NotFoundError(`path: /api/auth/${action.slice(0, 100)} takes no POST here.`, { path: ["no such sign-in action"] });
+    }
+    checked = await readForm<Record<string, string | undefined>>(request, authPostForms[action], maxAuthFormBytes);
+  } catch (error) {
+    return errorResponse(error, { url: refusedUrl });
+  }
+  // next-auth reads the body itself: hand it the checked text, unchanged.
+  const forwarded = new NextRequest(request.url, { method: "POST", headers: request.headers, body: checked.text });
+  if (action !== "callback/password") return nextAuth(forwarded, context);
 
-  const form = await request.clone().formData().catch(() => null);
-  const email = String(form?.get("email") ?? "").slice(0, 254);
+  const email = checked.fields.email ?? "";
   const address = clientAddress(request.headers);
   if (await isSignInThrottled(email, address)) {
     const url = new URL("/sign-in?error=throttled", request.url).toString();
     return NextResponse.json({ url, error: "too_many_requests" }, { status: 429, headers: { "Retry-After": "900" } });
   }
-  const response = await nextAuth(request, context);
+  const response = await nextAuth(forwarded, context);
   const location = response.headers.get("location") ?? "";
   if (response.status === 401 || location.includes("error=")) {
     await recordSignInFailure(email, address);
