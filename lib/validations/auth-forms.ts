@@ -51,5 +51,12 @@ export function isAuthPostAction(path: string): path is AuthPostAction {
   return Object.hasOwn(authPostForms, path);
 }
 
+/**
+ * The GET actions Slipway uses: the session, the CSRF token and the provider list (read by next-auth's
+ * client), and sign-in and error, which next-auth sends on to /sign-in. next-auth's own HTML pages
+ * (sign-out, verify-request) and the OAuth callbacks are not served (404).
+ */
+export const authGetActions: ReadonlySet<string> = new Set(["session", "csrf", "providers", "signin", "error"]);
+
 /** A sign-in form is a few hundred bytes; the limit leaves room for a long callbackUrl, encoded. */
 export const maxAuthFormBytes = 32 * 1024;

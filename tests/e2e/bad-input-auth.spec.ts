@@ -34,8 +34,8 @@ function actionCases(action: string, valid: [string, string][]): RefusalCase[] {
   return cases;
 }
 
-test.describe("bad input: next-auth's POST endpoints", () => {
-  test("POST /api/auth/callback/password, callback/link, signout and actions that take no POST", async ({ baseURL }) => {
+test.describe("bad input: next-auth's endpoints", () => {
+  test("POST /api/auth/callback/password, callback/link, signout, and the actions served to neither GET nor POST", async ({ baseURL }) => {
     // The CSRF token must be well-formed for the cases that break something else; its value does not matter.
     const session = await request.newContext({ baseURL });
     // A load-club athlete: its one wrong password below never adds up with other specs' sign-ins.
@@ -88,6 +88,20 @@ test.describe("bad input: next-auth's POST endpoints", () => {
       notTakingPost("/api/auth/callback/no-such-provider"),
       notTakingPost("/api/auth/csrf"),
       notTakingPost("/api/auth/_log"),
+      // GET: only the session, CSRF token, provider list, sign-in and error; next-auth answered a GET of
+      // the credentials callback with a 500 and unknown actions with plain text.
+      ...[
+        "/api/auth/callback/password",
+        "/api/auth/callback/password?code=1&state=2",
+        "/api/auth/callback/no-such-provider",
+        "/api/auth/signout",
+        "/api/auth/verify-request",
+        "/api/auth/_log",
+        "/api/auth/no-such-action",
+        "/api/auth/session/extra",
+        "/api/auth/signin/password",
+        "/api/auth/csrf/%00",
+      ].map((path): RefusalCase => ({ label: `GET ${path}`, field: "path", status: 404, url: path, method: "GET" })),
     ];
     await expectAllRefusedNaming(session, { url: "/api/auth/callback/password", method: "POST" }, cases);
 

@@ -4,7 +4,7 @@ import { authOptions } from "@/lib/auth/options";
 import { clientAddress, isSignInThrottled, recordSignInFailure } from "@/lib/auth/throttle";
 import { NotFoundError } from "@/lib/http/errors";
 import { errorResponse, readForm } from "@/lib/http/route";
-import { authPostForms, isAuthPostAction, maxAuthFormBytes } from "@/lib/validations/auth-forms";
+import { authGetActions, authPostForms, isAuthPostAction, maxAuthFormBytes } from "@/lib/validations/auth-forms";
 
 interface AuthContext {
   params: Promise<{ nextauth: string[] }>;
@@ -14,8 +14,15 @@ function nextAuth(request: Request, context: AuthContext): Promise<Response> {
   return NextAuth(request as never, context as never, authOptions()) as Promise<Response>;
 }
 
-export function GET(request: Request, context: AuthContext): Promise<Response> {
+/** Only the GET actions in authGetActions reach next-auth; anything else is a JSON 404 naming the path. */
+export async function GET(request: Request, context: AuthContext): Promise<Response> {
+  const action = ((await context.params).nextauth ?? []).join("/");
+  if (!authGetActions.has(action)) return errorResponse(notServed(action, "GET"));
   return nextAuth(request, context);
+}
+
+function notServed(action: string, method: string): NotFoundError {
+  return new NotFoundError(`path: /api/auth/${action.slice(0, 100)} takes no ${method} here.`, { path: ["no such sign-in action"] });
 }
 
 /**
@@ -34,7 +41,7 @@ export async function POST(request: Request, context: AuthContext): Promise<Resp
   let checked: { fields: Record<string, string | undefined>; text: string };
   try {
     if (!isAuthPostAction(action)) {
-      throw new NotFoundError(`path: /api/auth/${action.slice(0, 100)} takes no POST here.`, { path: ["no such sign-in action"] });
+      throw notServed(action, "POST");
     }
     checked = await readForm<Record<string, string | undefined>>(request, authPostForms[action], maxAuthFormBytes);
   } catch (error) {
