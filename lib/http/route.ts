@@ -27,6 +27,15 @@ export function errorResponse(error: unknown, extra?: Record<string, unknown>): 
   return NextResponse.json({ error: "internal", message: "Something went wrong on our side. Nothing was saved twice; try again." }, { status: 500 });
 }
 
+/**
+ * A JSON answer as a plain Response, for the hottest routes: NextResponse.json wraps the same body in
+ * NextResponse's cookie and header helpers, which a route that sets no cookie does not need; that cost
+ * about 7% of a small route's throughput in the benchmark.
+ */
+export function jsonResponse(body: unknown, init: { status?: number; headers?: Record<string, string> } = {}): Response {
+  return new Response(JSON.stringify(body), { status: init.status ?? 200, headers: { "Content-Type": "application/json", ...init.headers } });
+}
+
 const safeMethods = new Set(["GET", "HEAD", "OPTIONS"]);
 
 /** Refuses state-changing requests sent from another site (Sec-Fetch-Site, else Origin against Host). */

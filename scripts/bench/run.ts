@@ -23,8 +23,8 @@ import { certificatePdf, registerPdf } from "./measures/pdf";
 const settings = {
   athletes: 1000,
   benchAthletes: 20,
-  submitPoolSize: 5000,
-  writePoolSize: 3000,
+  submitPoolSize: 6000,
+  writePoolSize: 9000,
   lighthouseRuns: 5,
   loadSeconds: 10,
   connections: 10,

@@ -2,7 +2,7 @@ import fs from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTempDataDir } from "@/tests/support/temp-data-dir";
-import { closeDatabase, getSequelize, writeStatement, writeTransaction } from "@/lib/db";
+import { closeDatabase, getSequelize, readStatement, writeStatement, writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { migrateToLatest, migrateToNothing } from "@/lib/migrate";
 import { seedDemoClub, demoMembers } from "@/lib/seed/demo-club";
@@ -116,6 +116,20 @@ describe("the write connection", () => {
     expect(await AuditEvent.count({ where: { action: "test.lone", subjectType: "marked" } })).toBe(20);
     expect(await writeStatement("UPDATE audit_events SET subject_type = ? WHERE action = ?", ["x", "no.such.action"])).toBe(0);
     await expect(writeStatement("UPDATE no_such_table SET x = ?", [1])).rejects.toThrow(/no such table/);
+  });
+
+  it("reads with readStatement on the read connection: committed writes at once, bound values, SQL errors thrown", async () => {
+    const select = "SELECT subject_id AS subjectId FROM audit_events WHERE action = ? ORDER BY subject_id";
+    expect(await readStatement(select, ["test.read"])).toEqual([]);
+    const club = await Club.findOne();
+    await writeTransaction((transaction) =>
+      AuditEvent.create({ clubId: club!.id, actorId: null, action: "test.read", subjectType: "test", subjectId: "r1", details: {} }, { transaction }),
+    );
+    await writeStatement("UPDATE audit_events SET subject_id = ? WHERE action = ?", ["r2", "test.read"]);
+    expect(await readStatement(select, ["test.read"])).toEqual([{ subjectId: "r2" }]);
+    // A value is bound, never spliced into the SQL: this one matches nothing and breaks nothing.
+    expect(await readStatement(select, ["test.read' OR '1'='1"])).toEqual([]);
+    await expect(readStatement("SELECT * FROM no_such_table", [])).rejects.toThrow(/no such table/);
   });
 
   it("replaces the connection when Sequelize destroys it (a commit that failed)", async () => {

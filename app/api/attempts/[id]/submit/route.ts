@@ -1,7 +1,6 @@
-import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
 import { submitAttempt } from "@/lib/data/learning";
-import { lookUpBy, readJson, readParams, route } from "@/lib/http/route";
+import { jsonResponse, lookUpBy, readJson, readParams, route } from "@/lib/http/route";
 import { attemptIdParamSchema } from "@/lib/validations/learning";
 import { quizSubmissionSchema } from "@/lib/validations/quiz";
 
@@ -18,5 +17,5 @@ export const POST = route<Context>(async (request, context) => {
   const { id } = await readParams(context.params, attemptIdParamSchema);
   const { answers } = await readJson(request, quizSubmissionSchema);
   const result = await lookUpBy("id", "attempt", () => submitAttempt(actor, id, answers));
-  return NextResponse.json(result);
+  return jsonResponse(result);
 });
