@@ -122,9 +122,6 @@ export function registerQuerySchemaFor(moduleSlugs: readonly string[]) {
     });
 }
 
-/** A query string for a route that takes no parameters: any parameter is refused, naming it. */
-export const noQuerySchema = z.strictObject({});
-
 export const certificateIdParamSchema = z.strictObject({ id: z.uuid({ error: "not a certificate id" }) });
 export const signOffIdParamSchema = z.strictObject({ id: z.uuid({ error: "not a sign-off id" }) });
 export const evidenceIdParamSchema = z.strictObject({ id: z.uuid({ error: "not a photo id" }) });

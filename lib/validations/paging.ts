@@ -37,3 +37,6 @@ export interface Page<T> {
 export function nextOffsetAfter(offset: number, count: number, total: number): number | null {
   return offset + count < total ? offset + count : null;
 }
+
+/** A query string for a route that takes no parameters: any parameter is refused, naming it. */
+export const noQuerySchema = z.strictObject({});

@@ -151,25 +151,32 @@ test.describe("query strings and path ids are checked: 4xx JSON naming the param
     await stranger.dispose();
   });
 
-  test("GET /api/roster/matrix", async ({ baseURL }) => {
-    const session = await apiSession(baseURL!, demo.coach);
-    const unknown = (label: string, pairs: [string, string][], field: string): RefusalCase => ({ label, field, status: 400, url: withQuery("/api/roster/matrix", pairs) });
-    // The matrix takes no parameters: every one is unknown, whatever its value.
-    const cases: RefusalCase[] = [
-      ...["filter", "q", "limit", "offset", "sort", "module", "athlete", "page", "format", "debug"].flatMap((name) => [
-        unknown(`${name}=NaN`, [[name, "NaN"]], name),
-        unknown(`${name} huge`, [[name, "x".repeat(5000)]], name),
-        unknown(`${name} SQL-looking`, [[name, "' OR 1=1 --"]], name),
-      ]),
-      unknown("repeated parameter", [["limit", "1"], ["limit", "2"]], "limit"),
-      unknown("negative limit", [["limit", "-1"]], "limit"),
-      unknown("array-style parameter", [["filter[]", "all"]], "filter[]"),
-      unknown("constructor parameter", [["constructor", "x"]], "constructor"),
-    ];
-    await expectAllRefusedNaming(session, { url: "/api/roster/matrix" }, cases);
-    expect((await session.get("/api/roster/matrix")).status()).toBe(200);
-    await session.dispose();
-  });
+  /** Routes that take no parameters: every one is unknown, whatever its value. */
+  const noParameterRoutes: [path: string, account: () => string][] = [
+    ["/api/roster/matrix", () => demo.coach],
+    // A load-club athlete: reading progress changes nothing, but keep demo members out of it anyway.
+    ["/api/me/progress", () => loadAthleteEmail(35)],
+  ];
+  for (const [path, account] of noParameterRoutes) {
+    test(`GET ${path} (takes no parameters)`, async ({ baseURL }) => {
+      const session = await apiSession(baseURL!, account());
+      const unknown = (label: string, pairs: [string, string][], field: string): RefusalCase => ({ label, field, status: 400, url: withQuery(path, pairs) });
+      const cases: RefusalCase[] = [
+        ...["filter", "q", "limit", "offset", "sort", "module", "athlete", "page", "format", "debug"].flatMap((name) => [
+          unknown(`${name}=NaN`, [[name, "NaN"]], name),
+          unknown(`${name} huge`, [[name, "x".repeat(5000)]], name),
+          unknown(`${name} SQL-looking`, [[name, "' OR 1=1 --"]], name),
+        ]),
+        unknown("repeated parameter", [["limit", "1"], ["limit", "2"]], "limit"),
+        unknown("negative limit", [["limit", "-1"]], "limit"),
+        unknown("array-style parameter", [["filter[]", "all"]], "filter[]"),
+        unknown("constructor parameter", [["constructor", "x"]], "constructor"),
+      ];
+      await expectAllRefusedNaming(session, { url: path }, cases);
+      expect((await session.get(path)).status()).toBe(200);
+      await session.dispose();
+    });
+  }
 
   test("GET /api/roster/matrix/export", async ({ baseURL }) => {
     const session = await apiSession(baseURL!, demo.coach);

@@ -1,13 +1,18 @@
 import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
 import { courseProgressFor } from "@/lib/data/learning";
-import { route } from "@/lib/http/route";
+import { readQuery, route } from "@/lib/http/route";
+import { noQuerySchema } from "@/lib/validations/paging";
 
 export const dynamic = "force-dynamic";
 
-/** Each module's lesson state, best score, passed flag and attempt count for the signed-in athlete. */
-export const GET = route(async () => {
+/**
+ * Each module's lesson state, best score, passed flag and attempt count for the signed-in athlete.
+ * Takes no parameters (400 naming any), like the roster matrix.
+ */
+export const GET = route(async (request) => {
   const actor = await requireActor();
+  readQuery(request, noQuerySchema);
   const course = await courseProgressFor(actor);
   return NextResponse.json({
     modules: course.map(({ meta, progress }) => ({

@@ -2,7 +2,7 @@ import { NextResponse } from "next/server";
 import { assertMaySeeRoster } from "@/lib/auth/permissions";
 import { requireActor } from "@/lib/auth/session";
 import { readQuery, route } from "@/lib/http/route";
-import { noQuerySchema } from "@/lib/validations/certification";
+import { noQuerySchema } from "@/lib/validations/paging";
 import { rosterMatrix } from "@/lib/data/clearance";
 import type { RosterMatrix } from "@/lib/clearance/roster";
 
