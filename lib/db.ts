@@ -31,6 +31,7 @@ function configuredSqlite(): typeof sqlite3 {
 
 interface DbGlobal {
   slipwaySequelize?: Sequelize;
+  slipwayReadConnection?: Promise<SqliteConnection>;
   slipwayWriteLock?: Mutex;
   slipwayCommittedWrites?: number;
 }
@@ -44,6 +45,7 @@ interface SqliteConnection {
   close(callback?: (err: Error | null) => void): void;
   run(sql: string, values: readonly SqlValue[], callback: (this: { changes: number }, err: Error | null) => void): void;
   all(sql: string, values: readonly SqlValue[], callback: (err: Error | null, rows: unknown[]) => void): void;
+  serialize(callback?: () => void): void;
 }
 
 interface SqliteConnectionManager {
@@ -157,15 +159,38 @@ export async function writeStatement(sql: string, values: readonly SqlValue[]): 
 }
 
 /**
- * One read on Sequelize's shared read connection, straight through sqlite3, outside any transaction
- * (WAL: it sees every committed write). `sequelize.query` cost about 0.3 ms more a statement in the
- * benchmark (its query object, logging hooks and an Error built for every stack), a third of a trivial
- * request; the session check runs one of these on every signed-in request. Rows come back as SQLite
+ * The hot reads' own connection (WAL: it sees every committed write, and reads beside the writer and
+ * beside Sequelize's connection). Not Sequelize's read connection: Sequelize runs each of its statements
+ * serialized, that is only once nothing else is running on that connection, so plain reads started in
+ * parallel there kept its model queries (the roster) waiting for seconds while submissions ran.
+ */
+function readConnection(): Promise<SqliteConnection> {
+  globalStore.slipwayReadConnection ??= new Promise<SqliteConnection>((resolve, reject) => {
+    const { Database } = configuredSqlite();
+    const connection: SqliteConnection = new Database(databaseFile(), undefined, (err) => {
+      if (err) {
+        globalStore.slipwayReadConnection = undefined;
+        reject(err);
+      } else {
+        // One statement at a time, queued by sqlite3 itself: in parallel mode every waiting statement
+        // held one of libuv's four threads, and the writer's and Sequelize's work queued behind them.
+        connection.serialize();
+        resolve(connection);
+      }
+    });
+  });
+  return globalStore.slipwayReadConnection;
+}
+
+/**
+ * One read straight through sqlite3 on the read connection, outside any transaction, in parallel with
+ * other reads. `sequelize.query` cost about 0.3 ms more a statement in the benchmark (its query object,
+ * hooks and an Error built for every stack), and queued every statement behind the others on its
+ * connection; the session check runs one of these on every signed-in request. Rows come back as SQLite
  * gives them, as `sequelize.query` with QueryTypes.SELECT also did.
  */
 export async function readStatement<Row>(sql: string, values: readonly SqlValue[]): Promise<Row[]> {
-  const manager = getSequelize().connectionManager as unknown as SqliteConnectionManager;
-  const connection = await manager.getConnection({});
+  const connection = await readConnection();
   return new Promise<Row[]>((resolve, reject) => {
     connection.all(sql, values, (err, rows) => {
       if (err) reject(err);
@@ -201,6 +226,12 @@ export function committedWrites(): number {
 /** Closes the connection (tests and scripts). */
 export async function closeDatabase(): Promise<void> {
   const instance = globalStore.slipwaySequelize;
+  const reader = globalStore.slipwayReadConnection;
   globalStore.slipwaySequelize = undefined;
+  globalStore.slipwayReadConnection = undefined;
+  if (reader) {
+    const connection = await reader.catch(() => null);
+    if (connection) await new Promise<void>((resolve, reject) => connection.close((err) => (err ? reject(err) : resolve())));
+  }
   if (instance) await instance.close();
 }

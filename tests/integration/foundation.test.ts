@@ -132,6 +132,18 @@ describe("the write connection", () => {
     await expect(readStatement("SELECT * FROM no_such_table", [])).rejects.toThrow(/no such table/);
   });
 
+  it("keeps plain reads off Sequelize's connection, so a model query never waits behind them", async () => {
+    // Sequelize starts a statement only when nothing else runs on its connection: had the 400 reads
+    // shared it, the count would have finished after the last of them.
+    const finished: string[] = [];
+    // Each read counts to 20,000, so that 400 of them take a while on their connection.
+    const slowRead = "WITH RECURSIVE c(x) AS (SELECT 1 UNION ALL SELECT x + 1 FROM c WHERE x < 20000) SELECT COUNT(*) AS n FROM c";
+    const reads = Array.from({ length: 400 }, () => readStatement(slowRead, []).then(() => finished.push("read")));
+    const model = User.count().then(() => finished.push("model"));
+    await Promise.all([...reads, model]);
+    expect(finished.indexOf("model")).toBeLessThan(finished.length / 2);
+  });
+
   it("replaces the connection when Sequelize destroys it (a commit that failed)", async () => {
     const club = await Club.findOne();
     const old = await writeTransaction(async (transaction) => connectionOf(transaction));
