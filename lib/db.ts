@@ -183,10 +183,10 @@ function readConnection(): Promise<SqliteConnection> {
 }
 
 /**
- * One read straight through sqlite3 on the read connection, outside any transaction, in parallel with
- * other reads. `sequelize.query` cost about 0.3 ms more a statement in the benchmark (its query object,
- * hooks and an Error built for every stack), and queued every statement behind the others on its
- * connection; the session check runs one of these on every signed-in request. Rows come back as SQLite
+ * One read straight through sqlite3 on the read connection, outside any transaction, queued behind the
+ * other plain reads only (not behind Sequelize's statements). `sequelize.query` cost about 0.3 ms more a
+ * statement in the benchmark (its query object, hooks and an Error built for every stack); the session
+ * check runs one of these on every signed-in request. Rows come back as SQLite
  * gives them, as `sequelize.query` with QueryTypes.SELECT also did.
  */
 export async function readStatement<Row>(sql: string, values: readonly SqlValue[]): Promise<Row[]> {

@@ -37,15 +37,13 @@ function notServed(action: string, method: string): NotFoundError {
 export async function POST(request: Request, context: AuthContext): Promise<Response> {
   const { nextauth } = await context.params;
   const action = (nextauth ?? []).join("/");
-  const refusedUrl = new URL("/sign-in?error=invalid", request.url).toString();
+  const refused = (error: unknown) => errorResponse(error, { url: new URL("/sign-in?error=invalid", request.url).toString() });
+  if (!isAuthPostAction(action)) return refused(notServed(action, "POST"));
   let checked: { fields: Record<string, string | undefined>; text: string };
   try {
-    if (!isAuthPostAction(action)) {
-      throw notServed(action, "POST");
-    }
     checked = await readForm<Record<string, string | undefined>>(request, authPostForms[action], maxAuthFormBytes);
   } catch (error) {
-    return errorResponse(error, { url: refusedUrl });
+    return refused(error);
   }
   // next-auth reads the body itself: hand it the checked text, unchanged.
   const forwarded = new NextRequest(request.url, { method: "POST", headers: request.headers, body: checked.text });
