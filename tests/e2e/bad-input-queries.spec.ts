@@ -1,4 +1,4 @@
-import { expect, test } from "@playwright/test";
+import { expect, request, test } from "@playwright/test";
 import { demo, otherClub } from "./support/auth";
 import { apiSession } from "./support/api-session";
 import { demoClubRecordId, expectAllRefusedNaming, type RefusalCase } from "./support/bad-input";
@@ -152,14 +152,17 @@ test.describe("query strings and path ids are checked: 4xx JSON naming the param
   });
 
   /** Routes that take no parameters: every one is unknown, whatever its value. */
-  const noParameterRoutes: [path: string, account: () => string][] = [
+  const noParameterRoutes: [path: string, account: (() => string) | null][] = [
     ["/api/roster/matrix", () => demo.coach],
     // A load-club athlete: reading progress changes nothing, but keep demo members out of it anyway.
     ["/api/me/progress", () => loadAthleteEmail(35)],
+    // Public: no session.
+    ["/api/health", null],
+    ["/api/bench/ping", null],
   ];
   for (const [path, account] of noParameterRoutes) {
-    test(`GET ${path} (takes no parameters)`, async ({ baseURL }) => {
-      const session = await apiSession(baseURL!, account());
+    test(`GET ${path} (takes no parameters${account ? "" : ", public"})`, async ({ baseURL }) => {
+      const session = account ? await apiSession(baseURL!, account()) : await request.newContext({ baseURL });
       const unknown = (label: string, pairs: [string, string][], field: string): RefusalCase => ({ label, field, status: 400, url: withQuery(path, pairs) });
       const cases: RefusalCase[] = [
         ...["filter", "q", "limit", "offset", "sort", "module", "athlete", "page", "format", "debug"].flatMap((name) => [
