@@ -1,5 +1,5 @@
 import { PDFHexString, type PDFDocument, type PDFFont } from "pdf-lib";
-import { plainFontkit } from "@/lib/pdf/plain-fontkit";
+import { isDefaultIgnorable, plainFontkit } from "@/lib/pdf/plain-fontkit";
 
 /**
  * OpenType features off: fontkit's full shaping of Inter (contextual alternates, ligatures, kerning)
@@ -42,7 +42,9 @@ export async function embedPlainFont(document: PDFDocument, bytes: Uint8Array): 
     for (const character of text) {
       let code = hexByCharacter.get(character);
       if (code === undefined) {
-        code = encodeOne(character).asString();
+        // A zero-width space, joiner or soft hyphen (pasted names carry them) is not drawn: fontkit's
+        // glyph for it is the space, which pdf-lib would draw at a space's full width.
+        code = isDefaultIgnorable(character.codePointAt(0)!) ? "" : encodeOne(character).asString();
         hexByCharacter.set(character, code);
       }
       hex += code;
@@ -65,7 +67,7 @@ export function textWidth(font: PDFFont, text: string, size: number): number {
   for (const character of text) {
     let characterWidth = cache.get(character);
     if (characterWidth === undefined) {
-      characterWidth = font.widthOfTextAtSize(character, 1);
+      characterWidth = isDefaultIgnorable(character.codePointAt(0)!) ? 0 : font.widthOfTextAtSize(character, 1);
       cache.set(character, characterWidth);
     }
     width += characterWidth;

@@ -6,7 +6,7 @@ import { afterAll, describe, expect, it, vi } from "vitest";
 import { PDFDocument, type PDFFont } from "pdf-lib";
 import fontkit from "@pdf-lib/fontkit";
 import { pdfFonts } from "@/lib/pdf/fonts";
-import { embedPlainFont, plainFeatures } from "@/lib/pdf/text";
+import { embedPlainFont, plainFeatures, textWidth } from "@/lib/pdf/text";
 import { isDefaultIgnorable, plainFontkit } from "@/lib/pdf/plain-fontkit";
 import { renderCertificatePdf, type CertificatePdfInput } from "@/lib/pdf/certificate";
 import { renderRegisterPdf, type RegisterPdfInput } from "@/lib/pdf/register";
@@ -123,6 +123,19 @@ describe("PDF fonts", () => {
     expect(extractedLines(second)).toContain("Noor O’Daventry");
   });
 
+  it("does not draw zero-width characters pasted into a name, nor leave a space for them", async () => {
+    const pasted = "Ada\u200bKent\u00ad-\u200dMoor\ufeff";
+    const fonts = await pdfFonts();
+    const withThem = await renderCertificatePdf({ ...international, athleteName: pasted }, fonts);
+    const without = await renderCertificatePdf({ ...international, athleteName: "AdaKent-Moor" }, fonts);
+    expect(extractedLines(withThem)).toContain("AdaKent-Moor");
+    const document = await PDFDocument.create();
+    const font = await embedPlainFont(document, fonts.regular);
+    expect(textWidth(font, pasted, 12)).toBe(textWidth(font, "AdaKent-Moor", 12));
+    expect(font.encodeText(pasted).asString()).toBe(font.encodeText("AdaKent-Moor").asString());
+    expect(pagePictures(withThem)).toEqual(pagePictures(without));
+  });
+
   it("embeds both Inter faces as subsets with a Unicode map, keeping the certificate small", async () => {
     const bytes = await renderCertificatePdf(international, await pdfFonts());
     const fonts = execFileSync("pdffonts", [writePdf(bytes)], { encoding: "utf8" })
@@ -206,11 +219,12 @@ describe("PDF fonts", () => {
   it("draws every character Inter maps from small subsets exactly as the whole font does", async () => {
     const fonts = await pdfFonts();
     for (const bytes of [fonts.regular, fonts.bold]) {
-      // Controls, spaces and the soft hyphen draw nothing, so they cannot show a lost glyph.
+      // Controls, spaces and the default-ignorable characters (soft hyphen, zero-width space…) draw
+      // nothing, so they cannot show a lost glyph; embedPlainFont leaves the last out altogether (above).
       const characters = fontkit
         .create(bytes)
         .characterSet.filter(
-          (codePoint) => codePoint > 0x20 && !(codePoint >= 0x7f && codePoint <= 0xa0) && codePoint !== 0xad,
+          (codePoint) => codePoint > 0x20 && !(codePoint >= 0x7f && codePoint <= 0xa0) && !isDefaultIgnorable(codePoint),
         )
         .map((codePoint) => String.fromCodePoint(codePoint));
       expect(characters.length).toBeGreaterThan(2000);
