@@ -1,6 +1,8 @@
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
 import { demo, signIn } from "./support/auth";
+import { answerQuiz, openQuiz, storedQuestions } from "./support/attempts";
+import { loadAthleteEmail } from "@/lib/seed/load-athletes";
 
 const wcagTags = ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"];
 const viewports = [
@@ -8,8 +10,57 @@ const viewports = [
   { name: "desk", width: 1280, height: 800 },
 ];
 
-/** Pages and main states, each with the account that sees it (null: signed out). */
-const pages: { path: string; as: string | null; ready?: (page: Page) => Promise<void> }[] = [
+/** Follows the first link on `from` whose address starts with `prefix` (pages addressed by a record's id). */
+function firstLink(from: string, prefix: string) {
+  return async (page: Page) => {
+    await page.goto(from);
+    const link = page.locator(`main a[href^="${prefix}"]`).first();
+    const href = await link.getAttribute("href");
+    expect(href, `a link to ${prefix}… on ${from}`).toBeTruthy();
+    await page.goto(href!);
+  };
+}
+
+/**
+ * Pages and main states, each with the account that sees it (null: signed out). `path` is the page, or
+ * the title of a state that `open` reaches (a record's page through its list, a form after an action).
+ */
+const pages: { path: string; as: string | null; open?: (page: Page) => Promise<void>; ready?: (page: Page) => Promise<void> }[] = [
+  { path: "/sign-in/link", as: null },
+  { path: "/sign-in, after a wrong password", as: null, open: async (page) => {
+      await page.goto("/sign-in");
+      const form = page.getByTestId("password-sign-in");
+      await form.getByLabel("E-mail").fill(demo.athlete);
+      await form.getByLabel("Password").fill("not-the-password-at-all");
+      await form.getByRole("button", { name: "Sign in" }).click();
+      await expect(page.getByRole("alert").or(page.locator("[aria-live]").filter({ hasText: /./ })).first()).toBeVisible();
+    } },
+  { path: "/verify/{code} of a certificate", as: null, open: async (page) => {
+      // The public page, opened as a club's register links to it (the link is absolute: keep its path).
+      await signIn(page, demo.admin);
+      await firstLink("/club/register", "/club/register/")(page);
+      const verifyUrl = await page.locator('main a[href*="/verify/"]').first().getAttribute("href");
+      await page.context().clearCookies();
+      await page.goto(new URL(verifyUrl!).pathname);
+    } },
+  { path: "/verify/{code} unknown", as: null, open: (page) => page.goto("/verify/no-such-code-anywhere-0000").then(() => undefined) },
+  { path: "/learn/setting-inboard", as: demo.athlete },
+  { path: "/learn/secure-and-check", as: demo.athlete },
+  { path: "/learn/{slug}/quiz, handed in and graded", as: loadAthleteEmail(34), open: async (page) => {
+      const { attemptId } = await openQuiz(page, "overall-length");
+      await answerQuiz(page, await storedQuestions(attemptId), false);
+      await page.getByRole("button", { name: "Hand in my answers" }).click();
+      await expect(page.getByTestId("quiz-outcome")).toBeVisible();
+    } },
+  { path: "/rig/boats/{id}", as: demo.athlete, open: firstLink("/rig", "/rig/boats/") },
+  { path: "/roster/athletes/{id}", as: demo.coach, open: firstLink("/roster", "/roster/athletes/") },
+  { path: "/roster/sign-offs/{id}", as: demo.coach, open: firstLink("/roster/sign-offs", "/roster/sign-offs/") },
+  { path: "/roster/fleet/boats/{id}", as: demo.coach, open: firstLink("/roster/fleet", "/roster/fleet/boats/") },
+  { path: "/roster/fleet/boats/new", as: demo.coach },
+  { path: "/roster/fleet/oar-sets/{id}", as: demo.coach, open: firstLink("/roster/fleet", "/roster/fleet/oar-sets/") },
+  { path: "/roster/fleet/oar-sets/new", as: demo.coach },
+  { path: "/club/register/{id}", as: demo.admin, open: firstLink("/club/register", "/club/register/") },
+  { path: "/club/outbox/{id}", as: demo.admin, open: firstLink("/club/outbox", "/club/outbox/") },
   { path: "/", as: null },
   { path: "/sign-in", as: null },
   { path: "/invite/not-a-real-token-at-all", as: null },
@@ -41,7 +92,8 @@ for (const viewport of viewports) {
     for (const entry of pages) {
       test(`${entry.path} (${entry.as ?? "signed out"})`, async ({ page }) => {
         if (entry.as) await signIn(page, entry.as);
-        await page.goto(entry.path);
+        if (entry.open) await entry.open(page);
+        else await page.goto(entry.path);
         // Some pages stream behind a loading state: scan once the page's own heading has arrived.
         await page.getByRole("heading", { level: 1 }).first().waitFor();
         await entry.ready?.(page);
