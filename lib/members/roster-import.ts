@@ -1,6 +1,7 @@
 import Papa from "papaparse";
 import { z } from "zod";
 import { roleLabels, roles, type Role } from "@/lib/auth/roles";
+import { oneLineTextPattern } from "@/lib/validations/text";
 
 /** One upload: at most 200 KB and 500 member rows, so a single request stays small and quick. */
 export const rosterLimits = { maxBytes: 200 * 1024, maxRows: 500 } as const;
@@ -134,6 +135,7 @@ export function checkRoster(text: string, context: RosterContext = {}): RosterCh
     const name = (record.name ?? "").trim();
     if (!name) rowProblems.push({ row, field: "name", message: "Missing name." });
     else if (name.length > maxNameLength) rowProblems.push({ row, field: "name", message: `Name longer than ${maxNameLength} characters.` });
+    else if (!oneLineTextPattern.test(name)) rowProblems.push({ row, field: "name", message: "Name with control characters (invisible characters): retype it." });
 
     const rawEmail = (record.email ?? "").trim();
     const email = rawEmail.toLowerCase();

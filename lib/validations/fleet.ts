@@ -3,6 +3,7 @@ import { z } from "zod";
 import { boatClasses, handleMechanisms, oarTypeOfClass } from "@/lib/fleet/catalogue";
 import { oarTypes } from "@/lib/rigging/types";
 import { saneLengthCm, scullSweepBoundaryCm } from "@/lib/validations/rig";
+import { multiLineTextMessage, multiLineTextPattern, oneLineTextMessage, oneLineTextPattern } from "@/lib/validations/text";
 
 /**
  * Physical bounds, cm. Span and spread match rigPlanRequestSchema, so every boat saved here can be
@@ -17,9 +18,15 @@ const nameField = z
   .string({ error: "Enter a name." })
   .trim()
   .min(1, { error: "Enter a name." })
-  .max(80, { error: "Keep the name under 80 characters." });
+  .max(80, { error: "Keep the name under 80 characters." })
+  .regex(oneLineTextPattern, { error: oneLineTextMessage });
 
-const notesField = z.string().trim().max(500, { error: "Keep the notes under 500 characters." }).default("");
+const notesField = z
+  .string()
+  .trim()
+  .max(500, { error: "Keep the notes under 500 characters." })
+  .regex(multiLineTextPattern, { error: multiLineTextMessage })
+  .default("");
 
 // zod 4 numbers refuse NaN (an empty number input) and Infinity with this message.
 const cmNumber = (label: string) => z.number({ error: `Enter the ${label} as a number of centimetres.` });
