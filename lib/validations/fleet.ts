@@ -3,6 +3,7 @@ import { z } from "zod";
 import { boatClasses, handleMechanisms, oarTypeOfClass } from "@/lib/fleet/catalogue";
 import { oarTypes } from "@/lib/rigging/types";
 import { saneLengthCm, scullSweepBoundaryCm } from "@/lib/validations/rig";
+import { maxRecordId } from "@/lib/validations/ids";
 import { multiLineTextMessage, multiLineTextPattern, oneLineTextMessage, oneLineTextPattern } from "@/lib/validations/text";
 
 /**
@@ -129,4 +130,4 @@ export const archiveSchema = z.strictObject({
 });
 
 /** A record id from a URL segment or a query string. */
-export const recordIdSchema = z.coerce.number().int().positive().max(2_147_483_647);
+export const recordIdSchema = z.coerce.number().int().positive().max(maxRecordId);

@@ -7,9 +7,10 @@ import { changeMemberRole, importRoster, setMemberStatus, type RosterImportRepor
 import type { MemberSummary } from "@/lib/data/members";
 import { roleLabels } from "@/lib/auth/roles";
 import { changeRoleSchema, memberStatusSchema } from "@/lib/validations/member-admin";
-import { fieldErrorsFrom } from "@/lib/validations/issues";
+import { parseActionInput } from "@/lib/validations/issues";
 import { decodeRosterText, rosterFileProblem } from "@/lib/members/roster-import";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
+import { lookUpBy } from "@/lib/http/look-up";
 
 const membersPath = "/club/members";
 
@@ -17,11 +18,10 @@ const membersPath = "/club/members";
 export async function changeMemberRoleAction(input: unknown): Promise<ActionResult<MemberSummary>> {
   try {
     const actor = await requireActor();
-    const parsed = changeRoleSchema.safeParse(input);
-    if (!parsed.success) {
-      return { ok: false, message: "Choose the new role.", fieldErrors: fieldErrorsFrom(parsed.error) };
-    }
-    const member = await changeMemberRole(actor, parsed.data.memberId, parsed.data.role);
+    const parsed = parseActionInput(changeRoleSchema, input);
+    if (!parsed.success) return { ok: false, message: "Choose the new role.", fieldErrors: parsed.fieldErrors };
+    const { memberId, role } = parsed.data;
+    const member = await lookUpBy("memberId", "member of your club", () => changeMemberRole(actor, memberId, role));
     revalidatePath(membersPath);
     return { ok: true, message: `${member.name} is now ${roleLabels[member.role].toLowerCase()}. They sign in again to continue.`, data: member };
   } catch (error) {
@@ -33,11 +33,10 @@ export async function changeMemberRoleAction(input: unknown): Promise<ActionResu
 export async function setMemberStatusAction(input: unknown): Promise<ActionResult<MemberSummary>> {
   try {
     const actor = await requireActor();
-    const parsed = memberStatusSchema.safeParse(input);
-    if (!parsed.success) {
-      return { ok: false, message: "Choose a member.", fieldErrors: fieldErrorsFrom(parsed.error) };
-    }
-    const member = await setMemberStatus(actor, parsed.data.memberId, parsed.data.status);
+    const parsed = parseActionInput(memberStatusSchema, input);
+    if (!parsed.success) return { ok: false, message: "Choose a member.", fieldErrors: parsed.fieldErrors };
+    const { memberId, status } = parsed.data;
+    const member = await lookUpBy("memberId", "member of your club", () => setMemberStatus(actor, memberId, status));
     revalidatePath(membersPath);
     const message =
       member.status === "deactivated"
