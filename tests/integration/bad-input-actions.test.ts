@@ -930,6 +930,75 @@ describe("the club's administration (as an admin)", () => {
 });
 
 // ---------------------------------------------------------------------------------------------------
+// The roster import (admin): a FormData with one CSV file under "roster"
+
+function rosterForm(...parts: [string, string | File][]): FormData {
+  const form = new FormData();
+  for (const [name, value] of parts) form.append(name, value);
+  return form;
+}
+
+function csvFile(body: string | Uint8Array, type = "text/csv", name = "roster.csv"): File {
+  return new File([typeof body === "string" ? body : new Uint8Array(body)], name, { type });
+}
+
+const goodCsv = "name,email,role\nRowan Tidewell,rowan.tidewell@roster-action.example,athlete\n";
+
+describe("the roster import (as an admin)", () => {
+  const good = () => csvFile(goodCsv);
+  const row = (line: string) => csvFile(`name,email,role\n${line}\n`);
+  table("importRosterAction", {
+    action: memberActions.importRosterAction,
+    as: "admin",
+    cases: () => [
+      ...single(
+        [
+          ["undefined", undefined],
+          ["null", null],
+          ["the CSV as text", goodCsv],
+          ["an object holding the file", { roster: good() }],
+          ["an array holding the file", [good()]],
+          ["a number", 42],
+          ["a Map holding the file", new Map([["roster", good()]])],
+          ["the file itself", good()],
+          ["URLSearchParams", new URLSearchParams({ roster: goodCsv })],
+        ].map(([label, input]) => v(`input is ${String(label)}`, input, "_")),
+      ),
+      ...single([
+        v("no fields", rosterForm(), "roster"),
+        v("roster as text", rosterForm(["roster", goodCsv]), "roster"),
+        v("roster an empty string", rosterForm(["roster", ""]), "roster"),
+        v("roster twice", rosterForm(["roster", good()], ["roster", good()]), "roster"),
+        v("the file under another name", rosterForm(["file", good()]), "roster"),
+        v("an extra field", rosterForm(["roster", good()], ["sneaky", "1"]), "sneaky"),
+        v("a __proto__ field", rosterForm(["roster", good()], ["__proto__", "x"]), "__proto__"),
+        v("a constructor field", rosterForm(["roster", good()], ["constructor", "x"]), "constructor"),
+        v("an image", rosterForm(["roster", csvFile(goodCsv, "image/png", "roster.png")]), "roster"),
+        v("JSON", rosterForm(["roster", csvFile(JSON.stringify({ name: "Rowan" }), "application/json", "roster.json")]), "roster"),
+        v("an empty file", rosterForm(["roster", csvFile("")]), "roster"),
+        v("over 200 KB", rosterForm(["roster", csvFile(`name,email\n${"a,b@c.example\n".repeat(16_000)}`)]), "roster"),
+        v("over 500 rows", rosterForm(["roster", csvFile(`name,email\n${Array.from({ length: 501 }, (_, i) => `Rower ${i},rower.${i}@roster-action.example`).join("\n")}`)]), "roster"),
+        v("NUL bytes", rosterForm(["roster", csvFile("name,email\nA\u0000B,ab@roster-action.example\n")]), "roster"),
+        v("not UTF-8", rosterForm(["roster", csvFile(new Uint8Array([0x6e, 0x61, 0x6d, 0x65, 0x0a, 0xff, 0xfe, 0xfd]))]), "roster"),
+        v("UTF-16 text", rosterForm(["roster", csvFile(new Uint8Array(Buffer.from(`\ufeff${goodCsv}`, "utf16le")))]), "roster"),
+        v("a header only", rosterForm(["roster", csvFile("name,email,role\n")]), "roster"),
+        v("no header", rosterForm(["roster", csvFile("Rowan Tidewell,rowan.tidewell@roster-action.example\n")]), "roster"),
+        v("other columns", rosterForm(["roster", csvFile("first,last\nRowan,Tidewell\n")]), "roster"),
+        v("every row without an e-mail", rosterForm(["roster", row("Rowan Tidewell,,athlete")]), "rows.2.email"),
+        v("every row with a bad e-mail", rosterForm(["roster", row("Rowan Tidewell,rowan@,athlete")]), "rows.2.email"),
+        v("every row without a name", rosterForm(["roster", row(",rowan.tidewell@roster-action.example,athlete")]), "rows.2.name"),
+        v("every row with a huge name", rosterForm(["roster", row(`${"n".repeat(5000)},rowan.tidewell@roster-action.example,athlete`)]), "rows.2.name"),
+        v("every row with a control character in the name", rosterForm(["roster", row("Rowan\u0007Tidewell,rowan.tidewell@roster-action.example,athlete")]), "rows.2.name"),
+        v("every row with an unknown role", rosterForm(["roster", row("Rowan Tidewell,rowan.tidewell@roster-action.example,captain")]), "rows.2.role"),
+        v("every row already a member", rosterForm(["roster", row(`Ada Again,${fx.adaEmail},athlete`)]), "rows.2.email"),
+        v("an unclosed quote", rosterForm(["roster", row('"Rowan Tidewell,rowan.tidewell@roster-action.example,athlete')]), "rows.2"),
+      ]),
+    ],
+    valid: () => [rosterForm(["roster", good()])],
+  });
+});
+
+// ---------------------------------------------------------------------------------------------------
 // Signing in and joining (anyone)
 
 describe("signing in and joining (signed out)", () => {

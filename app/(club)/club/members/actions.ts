@@ -8,9 +8,10 @@ import type { MemberSummary } from "@/lib/data/members";
 import { roleLabels } from "@/lib/auth/roles";
 import { changeRoleSchema, memberStatusSchema } from "@/lib/validations/member-admin";
 import { parseActionInput } from "@/lib/validations/issues";
-import { decodeRosterText, rosterFileProblem } from "@/lib/members/roster-import";
+import { decodeRosterText, rosterFileProblem, rosterProblemFields } from "@/lib/members/roster-import";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
 import { lookUpBy } from "@/lib/http/look-up";
+import type { FieldErrors } from "@/lib/http/errors";
 
 const membersPath = "/club/members";
 
@@ -48,13 +49,36 @@ export async function setMemberStatusAction(input: unknown): Promise<ActionResul
   }
 }
 
+/**
+ * The import form's one file: FormData with exactly one field, "roster", holding a file (the form
+ * builds it so). Anything else is a failure naming what is wrong: the input as a whole ("_"), the
+ * roster field, or each unknown field.
+ */
+function rosterFileOf(formData: unknown): { file: File } | { ok: false; message: string; fieldErrors: FieldErrors } {
+  if (!(formData instanceof FormData)) {
+    return { ok: false, message: "Send the roster as a form with one file.", fieldErrors: { _: ["Send a form with one field, roster."] } };
+  }
+  const problems: [string, string[]][] = [...new Set(formData.keys())]
+    .filter((name) => name !== "roster")
+    .map((name) => [name, ["Not a field of this form."]]);
+  const files = formData.getAll("roster");
+  const [file] = files;
+  const rosterProblem = files.length > 1 ? "Choose one CSV file." : file instanceof File ? null : "Choose a CSV file.";
+  if (rosterProblem) problems.unshift(["roster", [rosterProblem]]);
+  if (problems.length > 0 || !(file instanceof File)) {
+    return { ok: false, message: rosterProblem ?? "The form has fields it does not take.", fieldErrors: Object.fromEntries(problems) };
+  }
+  return { file };
+}
+
 /** An admin uploads a roster CSV (field "roster"): good rows become invitations, the rest are reported. */
 export async function importRosterAction(formData: FormData): Promise<ActionResult<RosterImportReport>> {
   try {
     const actor = await requireActor();
     assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators can import a roster.");
-    const file = formData.get("roster");
-    if (!(file instanceof File)) return { ok: false, message: "Choose a CSV file.", fieldErrors: { roster: ["Choose a CSV file."] } };
+    const form = rosterFileOf(formData);
+    if (!("file" in form)) return form;
+    const { file } = form;
     const fileProblem = rosterFileProblem(file);
     if (fileProblem) return { ok: false, message: fileProblem, fieldErrors: { roster: [fileProblem] } };
     const text = decodeRosterText(new Uint8Array(await file.arrayBuffer()));
@@ -64,12 +88,13 @@ export async function importRosterAction(formData: FormData): Promise<ActionResu
     }
     const report = await importRoster(actor, text);
     if (report.fileProblem) return { ok: false, message: report.fileProblem, fieldErrors: { roster: [report.fileProblem] } };
-    revalidatePath(membersPath);
     const invited = report.invited.length;
-    const message =
-      invited === 0
-        ? "No invitations sent: every row had a problem."
-        : `${invited} ${invited === 1 ? "invitation" : "invitations"} sent.${report.problems.length > 0 ? " Some rows were not imported." : ""}`;
+    // As POST /api/members/import answers 400: the problems under rows.<row>.<column>, the report for the form.
+    if (invited === 0) {
+      return { ok: false, message: "No invitations sent: every row had a problem.", fieldErrors: rosterProblemFields(report.problems), data: report };
+    }
+    revalidatePath(membersPath);
+    const message = `${invited} ${invited === 1 ? "invitation" : "invitations"} sent.${report.problems.length > 0 ? " Some rows were not imported." : ""}`;
     return { ok: true, message, data: report };
   } catch (error) {
     return actionFailure(error);
