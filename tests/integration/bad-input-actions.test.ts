@@ -42,6 +42,7 @@ const { settingsToForm } = await import("@/lib/validations/club-settings-form");
 const { Boat, Certificate, Club, Invitation, OarSet, PracticalAssessment, User } = await import("@/models");
 
 const careActions = await import("@/app/(rig)/rig/care/actions");
+const learnActions = await import("@/app/(learn)/learn/[slug]/actions");
 const athleteActions = await import("@/app/(coach)/roster/athletes/[id]/actions");
 const signOffActions = await import("@/app/(coach)/roster/sign-offs/[id]/actions");
 const fleetActions = await import("@/app/(coach)/roster/fleet/actions");
@@ -1040,5 +1041,70 @@ describe("signing in and joining (signed out)", () => {
         ]),
       ),
     valid: () => [validAccept()],
+  });
+});
+
+// ---------------------------------------------------------------------------------------------------
+// "I've read it" (athlete): a plain form action that redirects. Every malformed form must go back to
+// the course page (/learn) without recording a read, never to a quiz, never a thrown error of its own.
+
+describe("finishing a lesson (as an athlete)", () => {
+  function lessonForm(...parts: [string, string | File][]): FormData {
+    return rosterForm(...parts);
+  }
+
+  function redirectProblems(bad: BadCase, answer: unknown, thrown?: unknown): string[] {
+    if (thrown === undefined) return [`${bad.label}: answered ${JSON.stringify(answer)} instead of redirecting`];
+    const digest = (thrown as { digest?: unknown } | null)?.digest;
+    if (typeof digest !== "string" || !digest.startsWith("NEXT_REDIRECT")) return [`${bad.label}: threw ${describeThrown(thrown)}`];
+    const target = digest.split(";")[2];
+    return target === bad.field ? [] : [`${bad.label}: sent to ${target}, not ${bad.field}`];
+  }
+
+  it("sends every malformed form back to the course without recording a read, and a good one on to the quiz", async () => {
+    const course = "/learn";
+    const values: [string, unknown][] = [
+      ["undefined", undefined],
+      ["null", null],
+      ["a string", "slug=overall-length"],
+      ["an object", { slug: "overall-length" }],
+      ["an array", [["slug", "overall-length"]]],
+      ["a number", 42],
+      ["a Map", new Map([["slug", "overall-length"]])],
+      ["URLSearchParams", new URLSearchParams({ slug: "overall-length" })],
+      ["a file", csvFile("slug=overall-length", "text/plain", "form.txt")],
+      ["no fields", lessonForm()],
+      ["slug empty", lessonForm(["slug", ""])],
+      ["slug unknown", lessonForm(["slug", "sculling-backwards"])],
+      ["slug in capitals", lessonForm(["slug", "Overall-Length"])],
+      ["slug with a path", lessonForm(["slug", "../overall-length"])],
+      ["slug with a slash", lessonForm(["slug", "overall-length/quiz"])],
+      ["slug with a query", lessonForm(["slug", "overall-length?x=1"])],
+      ["slug with a space", lessonForm(["slug", "overall length"])],
+      ["slug with a NUL", lessonForm(["slug", "overall-length\u0000"])],
+      ["slug with a line break", lessonForm(["slug", "overall-length\n"])],
+      ["slug with a double hyphen", lessonForm(["slug", "overall--length"])],
+      ["slug huge", lessonForm(["slug", huge])],
+      ["slug just over the limit", lessonForm(["slug", `a${"-b".repeat(30)}`])],
+      ["slug a URL", lessonForm(["slug", "https://elsewhere.example/"])],
+      ["slug a number", lessonForm(["slug", "42"])],
+      ["slug twice, the same", lessonForm(["slug", "overall-length"], ["slug", "overall-length"])],
+      ["slug twice, different", lessonForm(["slug", "overall-length"], ["slug", "setting-inboard"])],
+      ["slug a file", lessonForm(["slug", csvFile("overall-length", "text/plain", "slug.txt")])],
+      ["the slug under another name", lessonForm(["module", "overall-length"])],
+      ["the slug's name in capitals", lessonForm(["Slug", "overall-length"])],
+      ["a __proto__ field only", lessonForm(["__proto__", "overall-length"])],
+    ];
+    const cases: BadCase[] = values.map(([label, input]) => ({ label, args: [input], field: course }));
+    expect(cases.length).toBeGreaterThanOrEqual(30);
+    const problems = await refusalProblems(actionOf(learnActions.finishLessonAction), "athlete", cases, redirectProblems);
+    expect(problems, problems.join("\n")).toEqual([]);
+    const before = await fingerprint();
+    const thrown = await callAs("athlete", () => learnActions.finishLessonAction(lessonForm(["slug", "overall-length"]))).then(
+      () => null,
+      (error: unknown) => error,
+    );
+    expect(redirectProblems({ label: "the lesson's own form", args: [], field: "/learn/overall-length/quiz" }, undefined, thrown)).toEqual([]);
+    expect(await fingerprint(), "the read is recorded").not.toBe(before);
   });
 });
