@@ -247,7 +247,9 @@ export async function acceptInvitation(token: string, name: string, password: st
   return writeTransaction(async (transaction) => {
     const invitation = await Invitation.findOne({ where: { tokenHash: hashToken(token) }, transaction });
     if (!invitation || invitation.acceptedAt || invitation.expiresAt.getTime() < Date.now()) {
-      throw new NotFoundError("This invitation link is no longer valid. Ask your club administrator for a new one.");
+      throw new NotFoundError("This invitation link is no longer valid. Ask your club administrator for a new one.", {
+        token: ["no open invitation has this token"],
+      });
     }
     if (await User.findOne({ where: { email: invitation.email }, transaction })) {
       throw new ConflictError("That e-mail address already has an account. Sign in instead.");

@@ -1,7 +1,7 @@
 import "server-only";
 import { NextResponse } from "next/server";
 import type { ZodType } from "zod";
-import { AppError, PayloadTooLargeError, TooManyRequestsError, UnsupportedMediaError, ValidationError, ForbiddenError, NotFoundError } from "@/lib/http/errors";
+import { AppError, PayloadTooLargeError, TooManyRequestsError, UnsupportedMediaError, ValidationError, ForbiddenError } from "@/lib/http/errors";
 import { validationErrorFrom } from "@/lib/validations/issues";
 
 /**
@@ -169,20 +169,4 @@ export async function readParams<T>(params: Promise<unknown>, schema: ZodType<T>
   const parsed = schema.safeParse(await params);
   if (!parsed.success) throw validationErrorFrom(parsed.error, "params");
   return parsed.data;
-}
-
-/**
- * Runs a look-up addressed by a path parameter; its NotFoundError (missing, or not yours) becomes one
- * that names the parameter: "id: no such certificate". A NotFoundError that already names its own field
- * (a module slug inside a member's request, say) is passed on as it is, so it is not blamed on `param`.
- */
-export async function lookUpBy<T>(param: string, what: string, work: () => Promise<T>): Promise<T> {
-  try {
-    return await work();
-  } catch (error) {
-    if (error instanceof NotFoundError && !error.fieldErrors) {
-      throw new NotFoundError(`${param}: no such ${what}.`, { [param]: [`no such ${what}`] });
-    }
-    throw error;
-  }
 }

@@ -1,6 +1,8 @@
 import Papa from "papaparse";
 import { z } from "zod";
 import { roleLabels, roles, type Role } from "@/lib/auth/roles";
+import { oneLineTextPattern } from "@/lib/validations/text";
+import type { FieldErrors } from "@/lib/http/errors";
 
 /** One upload: at most 200 KB and 500 member rows, so a single request stays small and quick. */
 export const rosterLimits = { maxBytes: 200 * 1024, maxRows: 500 } as const;
@@ -62,6 +64,16 @@ const roleByWord = new Map<string, Role>([
 function normaliseHeader(header: string): string {
   const key = header.replace(/^\uFEFF/, "").trim().toLowerCase();
   return headerAliases[key] ?? key;
+}
+
+/** The problems as field errors, one key a row and column ("rows.3.email"; "rows.3" for the whole row). */
+export function rosterProblemFields(problems: readonly RosterProblem[]): FieldErrors {
+  const fields = new Map<string, string[]>();
+  for (const problem of problems) {
+    const key = problem.field === "row" ? `rows.${problem.row}` : `rows.${problem.row}.${problem.field}`;
+    fields.set(key, [...(fields.get(key) ?? []), problem.message]);
+  }
+  return Object.fromEntries(fields);
 }
 
 /** The file's size and declared type, checked before its text is read. */
@@ -134,6 +146,7 @@ export function checkRoster(text: string, context: RosterContext = {}): RosterCh
     const name = (record.name ?? "").trim();
     if (!name) rowProblems.push({ row, field: "name", message: "Missing name." });
     else if (name.length > maxNameLength) rowProblems.push({ row, field: "name", message: `Name longer than ${maxNameLength} characters.` });
+    else if (!oneLineTextPattern.test(name)) rowProblems.push({ row, field: "name", message: "Name with control characters (invisible characters): retype it." });
 
     const rawEmail = (record.email ?? "").trim();
     const email = rawEmail.toLowerCase();

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { signInSchema } from "@/lib/validations/members";
+import { oneTimeTokenPattern, signInSchema } from "@/lib/validations/members";
 
 /**
  * The forms next-auth's endpoints take by POST, as the next-auth client (`signIn`) and our sign-out
@@ -26,7 +26,7 @@ export const passwordSignInFormSchema = z.strictObject({ ...signInSchema.shape, 
 
 /** The one-time sign-in link's token: 32 random bytes, base64url (lib/auth/tokens.ts). */
 export const linkSignInFormSchema = z.strictObject({
-  token: z.string({ error: "Send the token from the sign-in link." }).regex(/^[A-Za-z0-9_-]{43}$/, {
+  token: z.string({ error: "Send the token from the sign-in link." }).regex(oneTimeTokenPattern, {
     error: "Not a sign-in link token: copy the whole link from the e-mail.",
   }),
   ...options,

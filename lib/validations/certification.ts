@@ -2,6 +2,7 @@ import { z } from "zod";
 import { kebabCaseSchema, type ChecklistItem } from "@/lib/content/module-schema";
 import { checklistVerdicts } from "@/lib/clearance/checklist";
 import { maxModuleSlugLength } from "@/lib/validations/learning";
+import { multiLineTextMessage, multiLineTextPattern, oneLineTextPattern } from "@/lib/validations/text";
 
 /** An athlete asks for a practical sign-off; coachId null means "any coach of the club". */
 export const signOffRequestSchema = z.strictObject({
@@ -28,7 +29,8 @@ export function assessmentSchemaFor(checklist: readonly ChecklistItem[]) {
       note: z
         .string()
         .trim()
-        .max(maxNoteLength, { error: `At most ${maxNoteLength} characters` }),
+        .max(maxNoteLength, { error: `At most ${maxNoteLength} characters` })
+        .regex(multiLineTextPattern, { error: multiLineTextMessage }),
       evidenceIds: z
         .array(z.uuid())
         .max(maxEvidencePhotos, { error: `At most ${maxEvidencePhotos} photos` })
@@ -51,11 +53,17 @@ const reasonSchema = z
   .string()
   .trim()
   .min(3, { error: "Give a reason of at least 3 characters" })
-  .max(500, { error: "At most 500 characters" });
+  .max(500, { error: "At most 500 characters" })
+  .regex(multiLineTextPattern, { error: multiLineTextMessage });
 
 export const suspendClearanceSchema = z.strictObject({ reason: reasonSchema });
 export const liftSuspensionSchema = z.strictObject({
-  note: z.string().trim().max(500, { error: "At most 500 characters" }).default(""),
+  note: z
+    .string()
+    .trim()
+    .max(500, { error: "At most 500 characters" })
+    .regex(multiLineTextPattern, { error: multiLineTextMessage })
+    .default(""),
 });
 export const revokeCertificateSchema = z.strictObject({ reason: reasonSchema });
 
@@ -82,8 +90,6 @@ export const registerFilterSchema = z.object({
 });
 export type RegisterFilter = z.output<typeof registerFilterSchema>;
 
-const noControlCharacters = /^[^\p{Cc}]*$/u;
-
 /**
  * The roster CSV export's query (?filter=&q=), strict: the page only links to good values, so a bad one
  * is a client's mistake and is refused naming the parameter. An empty `q` is no search.
@@ -93,7 +99,7 @@ export const rosterExportQuerySchema = z.strictObject({
   q: z
     .string()
     .max(100, { error: "at most 100 characters" })
-    .regex(noControlCharacters, { error: "must not contain control characters" })
+    .regex(oneLineTextPattern, { error: "must not contain control characters" })
     .transform((text) => text.trim())
     .default(""),
 });

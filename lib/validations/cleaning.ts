@@ -3,6 +3,7 @@ import { z } from "zod";
 import { localIsoDate } from "@/lib/care/calendar";
 import { addDaysIso } from "@/lib/care/dates";
 import { cleaningMethods } from "@/lib/care/methods";
+import { multiLineTextMessage, multiLineTextPattern } from "@/lib/validations/text";
 
 /** How far back a cleaning may be recorded: older ones no longer change whether a set is due. */
 export const cleaningRecordMaxAgeDays = 366;
@@ -19,7 +20,12 @@ export const cleaningRecordSchema = z
     cleanedOn: isoDay("day of the cleaning"),
     cleanedById: z.number().int().positive().optional(),
     method: z.enum(cleaningMethods, { error: "Choose how the handles were cleaned." }),
-    note: z.string().trim().max(300, { error: "Keep the note under 300 characters." }).default(""),
+    note: z
+      .string()
+      .trim()
+      .max(300, { error: "Keep the note under 300 characters." })
+      .regex(multiLineTextPattern, { error: multiLineTextMessage })
+      .default(""),
   })
   .superRefine((record, ctx) => {
     const today = localIsoDate();

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { kebabCaseSchema } from "@/lib/content/module-schema";
+import { maxModuleSlugLength } from "@/lib/validations/learning";
 import type { ClubSettings } from "@/lib/validations/club-settings";
 
 function numberIn(min: number, max: number, unit: string) {
@@ -46,7 +47,10 @@ export const clubSettingsFormSchema = z.strictObject({
     .max(100, { error: "At most 100 %" }),
   clickCm: numberIn(0.1, 2, "cm"),
   halfSwivelCm: numberIn(0, 5, "cm"),
-  clearanceModules: z.array(kebabCaseSchema).min(1, { error: "Choose at least one module" }).max(30),
+  clearanceModules: z
+    .array(kebabCaseSchema.max(maxModuleSlugLength, { error: `At most ${maxModuleSlugLength} characters` }))
+    .min(1, { error: "Choose at least one module" })
+    .max(30),
   clearanceMonths: z
     .number({ error: "Enter a number" })
     .int({ error: "Whole months" })

@@ -3,6 +3,8 @@ import { z } from "zod";
 import { boatClasses, handleMechanisms, oarTypeOfClass } from "@/lib/fleet/catalogue";
 import { oarTypes } from "@/lib/rigging/types";
 import { saneLengthCm, scullSweepBoundaryCm } from "@/lib/validations/rig";
+import { maxRecordId } from "@/lib/validations/ids";
+import { multiLineTextMessage, multiLineTextPattern, oneLineTextMessage, oneLineTextPattern } from "@/lib/validations/text";
 
 /**
  * Physical bounds, cm. Span and spread match rigPlanRequestSchema, so every boat saved here can be
@@ -17,9 +19,15 @@ const nameField = z
   .string({ error: "Enter a name." })
   .trim()
   .min(1, { error: "Enter a name." })
-  .max(80, { error: "Keep the name under 80 characters." });
+  .max(80, { error: "Keep the name under 80 characters." })
+  .regex(oneLineTextPattern, { error: oneLineTextMessage });
 
-const notesField = z.string().trim().max(500, { error: "Keep the notes under 500 characters." }).default("");
+const notesField = z
+  .string()
+  .trim()
+  .max(500, { error: "Keep the notes under 500 characters." })
+  .regex(multiLineTextPattern, { error: multiLineTextMessage })
+  .default("");
 
 // zod 4 numbers refuse NaN (an empty number input) and Infinity with this message.
 const cmNumber = (label: string) => z.number({ error: `Enter the ${label} as a number of centimetres.` });
@@ -122,4 +130,4 @@ export const archiveSchema = z.strictObject({
 });
 
 /** A record id from a URL segment or a query string. */
-export const recordIdSchema = z.coerce.number().int().positive().max(2_147_483_647);
+export const recordIdSchema = z.coerce.number().int().positive().max(maxRecordId);

@@ -1,6 +1,8 @@
 import { z } from "zod";
 import { roles, userStatuses } from "@/lib/auth/roles";
+import { recordIdValueSchema } from "@/lib/validations/ids";
 
+/** A member id in a page address (text). The members page's actions get the number itself: recordIdValueSchema. */
 const memberId = z.coerce.number({ error: "Choose a member." }).int().positive({ error: "Choose a member." });
 const role = z.enum(roles, { error: "Choose athlete, coach or admin." });
 const status = z.enum(userStatuses, { error: "Choose active or deactivated." });
@@ -23,8 +25,8 @@ export const memberUpdateSchema = z
 export type MemberUpdate = z.infer<typeof memberUpdateSchema>;
 
 /** The role form on the members page. */
-export const changeRoleSchema = z.strictObject({ memberId, role });
+export const changeRoleSchema = z.strictObject({ memberId: recordIdValueSchema, role });
 export type ChangeRoleInput = z.input<typeof changeRoleSchema>;
 
 /** Deactivate and reactivate buttons on the members page. */
-export const memberStatusSchema = z.strictObject({ memberId, status });
+export const memberStatusSchema = z.strictObject({ memberId: recordIdValueSchema, status });

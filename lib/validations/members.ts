@@ -1,17 +1,33 @@
 import { z } from "zod";
 import { roles } from "@/lib/auth/roles";
 import { maxPasswordLength, minPasswordLength } from "@/lib/auth/password-rules";
+import { oneLineTextMessage, oneLineTextPattern } from "@/lib/validations/text";
+
+/** A one-time token as lib/auth/tokens.ts makes them (invitations, sign-in links): 32 random bytes, base64url. */
+export const oneTimeTokenPattern = /^[A-Za-z0-9_-]{43}$/;
 
 export const invitationSchema = z.strictObject({
   email: z.email({ error: "Enter an e-mail address like name@example.org." }).max(254),
-  name: z.string().trim().min(1, { error: "Enter the member's name." }).max(120, { error: "Keep the name under 120 characters." }),
+  name: z
+    .string()
+    .trim()
+    .min(1, { error: "Enter the member's name." })
+    .max(120, { error: "Keep the name under 120 characters." })
+    .regex(oneLineTextPattern, { error: oneLineTextMessage }),
   role: z.enum(roles, { error: "Choose athlete, coach or admin." }),
 });
 export type InvitationFormInput = z.input<typeof invitationSchema>;
 
 export const acceptInvitationSchema = z.strictObject({
-  token: z.string().min(10).max(100),
-  name: z.string().trim().min(1, { error: "Enter your name." }).max(120),
+  token: z.string({ error: "Open the link from the invitation e-mail." }).regex(oneTimeTokenPattern, {
+    error: "Not an invitation link: copy the whole link from the e-mail.",
+  }),
+  name: z
+    .string()
+    .trim()
+    .min(1, { error: "Enter your name." })
+    .max(120, { error: "Keep your name under 120 characters." })
+    .regex(oneLineTextPattern, { error: oneLineTextMessage }),
   password: z
     .string()
     .min(minPasswordLength, { error: `Use at least ${minPasswordLength} characters.` })

@@ -443,7 +443,8 @@ export const actionGuardRows: ActionGuardRow[] = [
   {
     file: "app/(auth)/invite/[token]/actions.ts",
     action: "acceptInvitationAction",
-    input: () => ({ token: "not-a-real-invitation-token", name: "Guard Row", password: "heron slipway tidewater" }),
+    // Shaped like a real token (43 base64url characters), so that it is refused as unknown, not as malformed.
+    input: () => ({ token: "no-such-invitation-000000000000000000000000", name: "Guard Row", password: "heron slipway tidewater" }),
     expect: all(404),
     why: "Public: the invitation token is the guard; an unknown one is not found for everyone.",
   },

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
-import { lookUpBy, readQuery } from "@/lib/http/route";
+import { lookUpBy } from "@/lib/http/look-up";
+import { readQuery } from "@/lib/http/route";
 import { NotFoundError, ValidationError } from "@/lib/http/errors";
 import { validationErrorFrom } from "@/lib/validations/issues";
 import { registerQuerySchemaFor, rosterExportQuerySchema } from "@/lib/validations/certification";

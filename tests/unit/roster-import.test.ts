@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { checkRoster, decodeRosterText, rosterFileProblem, rosterLimits } from "@/lib/members/roster-import";
+import { checkRoster, decodeRosterText, rosterFileProblem, rosterLimits, rosterProblemFields } from "@/lib/members/roster-import";
 
 describe("checkRoster", () => {
   it("reads good rows, lower-cases e-mail and defaults the role to athlete", () => {
@@ -101,6 +101,18 @@ describe("checkRoster", () => {
   it("rejects names that are too long", () => {
     const result = checkRoster(`name,email\n${"N".repeat(121)},long@example.org\n`);
     expect(result.problems).toEqual([{ row: 2, field: "name", message: "Name longer than 120 characters." }]);
+  });
+});
+
+describe("rosterProblemFields", () => {
+  it("names each problem by row and column, the whole row by its number, as the import route and action answer", () => {
+    expect(
+      rosterProblemFields([
+        { row: 2, field: "email", message: "Missing e-mail address." },
+        { row: 2, field: "email", message: "Second." },
+        { row: 3, field: "row", message: "A quotation mark is not closed." },
+      ]),
+    ).toEqual({ "rows.2.email": ["Missing e-mail address.", "Second."], "rows.3": ["A quotation mark is not closed."] });
   });
 });
 

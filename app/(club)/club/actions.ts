@@ -4,17 +4,15 @@ import { revalidatePath } from "next/cache";
 import { requireActor } from "@/lib/auth/session";
 import { inviteMember } from "@/lib/data/users";
 import { invitationSchema } from "@/lib/validations/members";
-import { fieldErrorsFrom } from "@/lib/validations/issues";
+import { parseActionInput } from "@/lib/validations/issues";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
 
 /** An admin invites a member; the invitation e-mail goes out at once. */
 export async function inviteMemberAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
-    const parsed = invitationSchema.safeParse(input);
-    if (!parsed.success) {
-      return { ok: false, message: "Check the highlighted fields.", fieldErrors: fieldErrorsFrom(parsed.error) };
-    }
+    const parsed = parseActionInput(invitationSchema, input);
+    if (!parsed.success) return { ok: false, message: "Check the highlighted fields.", fieldErrors: parsed.fieldErrors };
     await inviteMember(actor, parsed.data);
     revalidatePath("/club");
     return { ok: true, message: `Invitation sent to ${parsed.data.email}.` };

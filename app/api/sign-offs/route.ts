@@ -1,6 +1,7 @@
 import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
-import { lookUpBy, readJson, route } from "@/lib/http/route";
+import { lookUpBy } from "@/lib/http/look-up";
+import { readJson, route } from "@/lib/http/route";
 import { requestSignOff, signOffQueue } from "@/lib/data/sign-offs";
 import { signOffRequestSchema } from "@/lib/validations/certification";
 

@@ -7,9 +7,11 @@ import { changeMemberRole, importRoster, setMemberStatus, type RosterImportRepor
 import type { MemberSummary } from "@/lib/data/members";
 import { roleLabels } from "@/lib/auth/roles";
 import { changeRoleSchema, memberStatusSchema } from "@/lib/validations/member-admin";
-import { fieldErrorsFrom } from "@/lib/validations/issues";
-import { decodeRosterText, rosterFileProblem } from "@/lib/members/roster-import";
+import { parseActionInput } from "@/lib/validations/issues";
+import { decodeRosterText, rosterFileProblem, rosterProblemFields } from "@/lib/members/roster-import";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
+import { lookUpBy } from "@/lib/http/look-up";
+import type { FieldErrors } from "@/lib/http/errors";
 
 const membersPath = "/club/members";
 
@@ -17,11 +19,10 @@ const membersPath = "/club/members";
 export async function changeMemberRoleAction(input: unknown): Promise<ActionResult<MemberSummary>> {
   try {
     const actor = await requireActor();
-    const parsed = changeRoleSchema.safeParse(input);
-    if (!parsed.success) {
-      return { ok: false, message: "Choose the new role.", fieldErrors: fieldErrorsFrom(parsed.error) };
-    }
-    const member = await changeMemberRole(actor, parsed.data.memberId, parsed.data.role);
+    const parsed = parseActionInput(changeRoleSchema, input);
+    if (!parsed.success) return { ok: false, message: "Choose the new role.", fieldErrors: parsed.fieldErrors };
+    const { memberId, role } = parsed.data;
+    const member = await lookUpBy("memberId", "member of your club", () => changeMemberRole(actor, memberId, role));
     revalidatePath(membersPath);
     return { ok: true, message: `${member.name} is now ${roleLabels[member.role].toLowerCase()}. They sign in again to continue.`, data: member };
   } catch (error) {
@@ -33,11 +34,10 @@ export async function changeMemberRoleAction(input: unknown): Promise<ActionResu
 export async function setMemberStatusAction(input: unknown): Promise<ActionResult<MemberSummary>> {
   try {
     const actor = await requireActor();
-    const parsed = memberStatusSchema.safeParse(input);
-    if (!parsed.success) {
-      return { ok: false, message: "Choose a member.", fieldErrors: fieldErrorsFrom(parsed.error) };
-    }
-    const member = await setMemberStatus(actor, parsed.data.memberId, parsed.data.status);
+    const parsed = parseActionInput(memberStatusSchema, input);
+    if (!parsed.success) return { ok: false, message: "Choose a member.", fieldErrors: parsed.fieldErrors };
+    const { memberId, status } = parsed.data;
+    const member = await lookUpBy("memberId", "member of your club", () => setMemberStatus(actor, memberId, status));
     revalidatePath(membersPath);
     const message =
       member.status === "deactivated"
@@ -49,13 +49,36 @@ export async function setMemberStatusAction(input: unknown): Promise<ActionResul
   }
 }
 
+/**
+ * The import form's one file: FormData with exactly one field, "roster", holding a file (the form
+ * builds it so). Anything else is a failure naming what is wrong: the input as a whole ("_"), the
+ * roster field, or each unknown field.
+ */
+function rosterFileOf(formData: unknown): { file: File } | { ok: false; message: string; fieldErrors: FieldErrors } {
+  if (!(formData instanceof FormData)) {
+    return { ok: false, message: "Send the roster as a form with one file.", fieldErrors: { _: ["Send a form with one field, roster."] } };
+  }
+  const problems: [string, string[]][] = [...new Set(formData.keys())]
+    .filter((name) => name !== "roster")
+    .map((name) => [name, ["Not a field of this form."]]);
+  const files = formData.getAll("roster");
+  const [file] = files;
+  const rosterProblem = files.length > 1 ? "Choose one CSV file." : file instanceof File ? null : "Choose a CSV file.";
+  if (rosterProblem) problems.unshift(["roster", [rosterProblem]]);
+  if (problems.length > 0 || !(file instanceof File)) {
+    return { ok: false, message: rosterProblem ?? "The form has fields it does not take.", fieldErrors: Object.fromEntries(problems) };
+  }
+  return { file };
+}
+
 /** An admin uploads a roster CSV (field "roster"): good rows become invitations, the rest are reported. */
 export async function importRosterAction(formData: FormData): Promise<ActionResult<RosterImportReport>> {
   try {
     const actor = await requireActor();
     assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators can import a roster.");
-    const file = formData.get("roster");
-    if (!(file instanceof File)) return { ok: false, message: "Choose a CSV file.", fieldErrors: { roster: ["Choose a CSV file."] } };
+    const form = rosterFileOf(formData);
+    if (!("file" in form)) return form;
+    const { file } = form;
     const fileProblem = rosterFileProblem(file);
     if (fileProblem) return { ok: false, message: fileProblem, fieldErrors: { roster: [fileProblem] } };
     const text = decodeRosterText(new Uint8Array(await file.arrayBuffer()));
@@ -65,12 +88,13 @@ export async function importRosterAction(formData: FormData): Promise<ActionResu
     }
     const report = await importRoster(actor, text);
     if (report.fileProblem) return { ok: false, message: report.fileProblem, fieldErrors: { roster: [report.fileProblem] } };
-    revalidatePath(membersPath);
     const invited = report.invited.length;
-    const message =
-      invited === 0
-        ? "No invitations sent: every row had a problem."
-        : `${invited} ${invited === 1 ? "invitation" : "invitations"} sent.${report.problems.length > 0 ? " Some rows were not imported." : ""}`;
+    // As POST /api/members/import answers 400: the problems under rows.<row>.<column>, the report for the form.
+    if (invited === 0) {
+      return { ok: false, message: "No invitations sent: every row had a problem.", fieldErrors: rosterProblemFields(report.problems), data: report };
+    }
+    revalidatePath(membersPath);
+    const message = `${invited} ${invited === 1 ? "invitation" : "invitations"} sent.${report.problems.length > 0 ? " Some rows were not imported." : ""}`;
     return { ok: true, message, data: report };
   } catch (error) {
     return actionFailure(error);

@@ -4,20 +4,15 @@ import { revalidatePath } from "next/cache";
 import { requireActor } from "@/lib/auth/session";
 import { updateClubSettings } from "@/lib/data/club-admin-settings";
 import { clubSettingsFormSchema } from "@/lib/validations/club-settings-form";
-import { fieldErrorsFrom } from "@/lib/validations/issues";
+import { parseActionInput } from "@/lib/validations/issues";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
 
 /** An admin saves the club's settings; past results keep their own pass marks and dates. */
 export async function saveClubSettingsAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
-    const parsed = clubSettingsFormSchema.safeParse(input);
-    if (!parsed.success)
-      return {
-        ok: false,
-        message: "Check the highlighted fields.",
-        fieldErrors: fieldErrorsFrom(parsed.error),
-      };
+    const parsed = parseActionInput(clubSettingsFormSchema, input);
+    if (!parsed.success) return { ok: false, message: "Check the highlighted fields.", fieldErrors: parsed.fieldErrors };
     const { changed } = await updateClubSettings(actor, parsed.data);
     revalidatePath("/club/settings");
     return {

@@ -6,9 +6,11 @@ import { createBoat, createOarSet, setBoatArchived, setOarSetArchived, updateBoa
 import { addRaceDay, removeRaceDay, setHumidSpell } from "@/lib/data/cleaning";
 import { sendCleaningDigestNow } from "@/lib/data/cleaning-digest";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
+import { lookUpBy } from "@/lib/http/look-up";
 import { humidSpellSchema, raceDaySchema, removeRaceDaySchema } from "@/lib/validations/cleaning";
-import { archiveSchema, boatSchema, oarSetSchema, recordIdSchema } from "@/lib/validations/fleet";
-import { fieldErrorsFrom } from "@/lib/validations/issues";
+import { archiveSchema, boatSchema, oarSetSchema } from "@/lib/validations/fleet";
+import { recordIdValueSchema } from "@/lib/validations/ids";
+import { parseActionArgument, parseActionInput } from "@/lib/validations/issues";
 
 const checkFields = "Check the highlighted fields.";
 
@@ -29,8 +31,8 @@ function savedMessage(what: string, saved: SavedFleetRecord): ActionResult<Saved
 export async function createBoatAction(input: unknown): Promise<ActionResult<SavedFleetRecord>> {
   try {
     const actor = await requireActor();
-    const parsed = boatSchema.safeParse(input);
-    if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: fieldErrorsFrom(parsed.error) };
+    const parsed = parseActionInput(boatSchema, input);
+    if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: parsed.fieldErrors };
     const saved = await createBoat(actor, parsed.data);
     refreshFleetPages();
     return savedMessage("Boat", saved);
@@ -43,11 +45,11 @@ export async function createBoatAction(input: unknown): Promise<ActionResult<Sav
 export async function updateBoatAction(boatId: unknown, input: unknown): Promise<ActionResult<SavedFleetRecord>> {
   try {
     const actor = await requireActor();
-    const id = recordIdSchema.safeParse(boatId);
-    const parsed = boatSchema.safeParse(input);
-    if (!id.success) return { ok: false, message: "That boat does not exist.", fieldErrors: {} };
-    if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: fieldErrorsFrom(parsed.error) };
-    const saved = await updateBoat(actor, id.data, parsed.data);
+    const id = parseActionArgument("boatId", recordIdValueSchema, boatId);
+    if (!id.success) return { ok: false, message: "That boat does not exist.", fieldErrors: id.fieldErrors };
+    const parsed = parseActionInput(boatSchema, input);
+    if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: parsed.fieldErrors };
+    const saved = await lookUpBy("boatId", "boat in your club", () => updateBoat(actor, id.data, parsed.data));
     refreshFleetPages();
     return savedMessage("Boat", saved);
   } catch (error) {
@@ -59,9 +61,10 @@ export async function updateBoatAction(boatId: unknown, input: unknown): Promise
 export async function setBoatArchivedAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
-    const parsed = archiveSchema.safeParse(input);
-    if (!parsed.success) return { ok: false, message: "That boat does not exist.", fieldErrors: fieldErrorsFrom(parsed.error) };
-    await setBoatArchived(actor, parsed.data.id, parsed.data.archived);
+    const parsed = parseActionInput(archiveSchema, input);
+    if (!parsed.success) return { ok: false, message: "That boat does not exist.", fieldErrors: parsed.fieldErrors };
+    const { id, archived } = parsed.data;
+    await lookUpBy("id", "boat in your club", () => setBoatArchived(actor, id, archived));
     refreshFleetPages();
     return { ok: true, message: parsed.data.archived ? "Boat archived." : "Boat restored." };
   } catch (error) {
@@ -73,8 +76,8 @@ export async function setBoatArchivedAction(input: unknown): Promise<ActionResul
 export async function createOarSetAction(input: unknown): Promise<ActionResult<SavedFleetRecord>> {
   try {
     const actor = await requireActor();
-    const parsed = oarSetSchema.safeParse(input);
-    if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: fieldErrorsFrom(parsed.error) };
+    const parsed = parseActionInput(oarSetSchema, input);
+    if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: parsed.fieldErrors };
     const saved = await createOarSet(actor, parsed.data);
     refreshFleetPages();
     return savedMessage("Oar set", saved);
@@ -87,11 +90,11 @@ export async function createOarSetAction(input: unknown): Promise<ActionResult<S
 export async function updateOarSetAction(oarSetId: unknown, input: unknown): Promise<ActionResult<SavedFleetRecord>> {
   try {
     const actor = await requireActor();
-    const id = recordIdSchema.safeParse(oarSetId);
-    const parsed = oarSetSchema.safeParse(input);
-    if (!id.success) return { ok: false, message: "That oar set does not exist.", fieldErrors: {} };
-    if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: fieldErrorsFrom(parsed.error) };
-    const saved = await updateOarSet(actor, id.data, parsed.data);
+    const id = parseActionArgument("oarSetId", recordIdValueSchema, oarSetId);
+    if (!id.success) return { ok: false, message: "That oar set does not exist.", fieldErrors: id.fieldErrors };
+    const parsed = parseActionInput(oarSetSchema, input);
+    if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: parsed.fieldErrors };
+    const saved = await lookUpBy("oarSetId", "oar set in your club", () => updateOarSet(actor, id.data, parsed.data));
     refreshFleetPages();
     return savedMessage("Oar set", saved);
   } catch (error) {
@@ -103,9 +106,10 @@ export async function updateOarSetAction(oarSetId: unknown, input: unknown): Pro
 export async function setOarSetArchivedAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
-    const parsed = archiveSchema.safeParse(input);
-    if (!parsed.success) return { ok: false, message: "That oar set does not exist.", fieldErrors: fieldErrorsFrom(parsed.error) };
-    await setOarSetArchived(actor, parsed.data.id, parsed.data.archived);
+    const parsed = parseActionInput(archiveSchema, input);
+    if (!parsed.success) return { ok: false, message: "That oar set does not exist.", fieldErrors: parsed.fieldErrors };
+    const { id, archived } = parsed.data;
+    await lookUpBy("id", "oar set in your club", () => setOarSetArchived(actor, id, archived));
     refreshFleetPages();
     return { ok: true, message: parsed.data.archived ? "Oar set archived." : "Oar set restored." };
   } catch (error) {
@@ -117,8 +121,8 @@ export async function setOarSetArchivedAction(input: unknown): Promise<ActionRes
 export async function addRaceDayAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
-    const parsed = raceDaySchema.safeParse(input);
-    if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: fieldErrorsFrom(parsed.error) };
+    const parsed = parseActionInput(raceDaySchema, input);
+    if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: parsed.fieldErrors };
     await addRaceDay(actor, parsed.data.raceDay);
     refreshFleetPages();
     return { ok: true, message: "Race day added." };
@@ -131,8 +135,8 @@ export async function addRaceDayAction(input: unknown): Promise<ActionResult> {
 export async function removeRaceDayAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
-    const parsed = removeRaceDaySchema.safeParse(input);
-    if (!parsed.success) return { ok: false, message: "That is not a race day.", fieldErrors: fieldErrorsFrom(parsed.error) };
+    const parsed = parseActionInput(removeRaceDaySchema, input);
+    if (!parsed.success) return { ok: false, message: "That is not a race day.", fieldErrors: parsed.fieldErrors };
     await removeRaceDay(actor, parsed.data.raceDay);
     refreshFleetPages();
     return { ok: true, message: "Race day removed." };
@@ -145,8 +149,8 @@ export async function removeRaceDayAction(input: unknown): Promise<ActionResult>
 export async function setHumidSpellAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
-    const parsed = humidSpellSchema.safeParse(input);
-    if (!parsed.success) return { ok: false, message: "Choose on or off.", fieldErrors: fieldErrorsFrom(parsed.error) };
+    const parsed = parseActionInput(humidSpellSchema, input);
+    if (!parsed.success) return { ok: false, message: "Choose on or off.", fieldErrors: parsed.fieldErrors };
     await setHumidSpell(actor, parsed.data.humidSpell);
     refreshFleetPages();
     return { ok: true, message: parsed.data.humidSpell ? "Humid spell on: every set is due daily." : "Humid spell off." };
@@ -155,10 +159,14 @@ export async function setHumidSpellAction(input: unknown): Promise<ActionResult>
   }
 }
 
-/** A coach or admin sends the club's cleaning digest now (it counts as this week's). */
-export async function sendDigestNowAction(): Promise<ActionResult> {
+/**
+ * A coach or admin sends the club's cleaning digest now (it counts as this week's). It takes no input,
+ * so any argument is refused rather than ignored, as GET /api/me/progress refuses any parameter.
+ */
+export async function sendDigestNowAction(...input: unknown[]): Promise<ActionResult> {
   try {
     const actor = await requireActor();
+    if (input.length > 0) return { ok: false, message: "Sending the digest takes no input.", fieldErrors: { _: ["Send no input."] } };
     const { recipients, isoWeek } = await sendCleaningDigestNow(actor);
     return { ok: true, message: `Digest for ${isoWeek} sent to ${recipients} ${recipients === 1 ? "coach or admin" : "coaches and admins"}.` };
   } catch (error) {

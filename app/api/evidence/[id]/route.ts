@@ -1,6 +1,7 @@
 import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
-import { lookUpBy, readParams, route } from "@/lib/http/route";
+import { lookUpBy } from "@/lib/http/look-up";
+import { readParams, route } from "@/lib/http/route";
 import { evidenceIdParamSchema } from "@/lib/validations/certification";
 import { deleteEvidencePhoto, readEvidencePhoto } from "@/lib/data/evidence";
 

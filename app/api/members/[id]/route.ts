@@ -2,7 +2,8 @@ import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
 import { assertAllowed, canManageClub } from "@/lib/auth/permissions";
 import { changeMemberRole, setMemberStatus } from "@/lib/data/member-admin";
-import { lookUpBy, readJson, readParams, route } from "@/lib/http/route";
+import { lookUpBy } from "@/lib/http/look-up";
+import { readJson, readParams, route } from "@/lib/http/route";
 import { memberIdSchema, memberUpdateSchema } from "@/lib/validations/member-admin";
 
 interface MemberContext {

@@ -3,8 +3,8 @@ import { requireActor } from "@/lib/auth/session";
 import { assertAllowed, canManageClub } from "@/lib/auth/permissions";
 import { importRoster } from "@/lib/data/member-admin";
 import { readBodyBytes, route } from "@/lib/http/route";
-import { AppError, UnsupportedMediaError, ValidationError, type FieldErrors } from "@/lib/http/errors";
-import { decodeRosterText, rosterLimits } from "@/lib/members/roster-import";
+import { AppError, UnsupportedMediaError, ValidationError } from "@/lib/http/errors";
+import { decodeRosterText, rosterLimits, rosterProblemFields } from "@/lib/members/roster-import";
 
 /**
  * Admins import a roster: the body is the CSV itself (text/csv or text/plain, UTF-8, at most 200 KB).
@@ -20,11 +20,7 @@ export const POST = route(async (request) => {
   const report = await importRoster(actor, text);
   if (report.fileProblem) throw new ValidationError(`file: ${report.fileProblem}`, { file: [report.fileProblem] });
   if (report.invited.length === 0) {
-    const fields: FieldErrors = {};
-    for (const problem of report.problems) {
-      const key = problem.field === "row" ? `rows.${problem.row}` : `rows.${problem.row}.${problem.field}`;
-      fields[key] = [...(fields[key] ?? []), problem.message];
-    }
+    const fields = rosterProblemFields(report.problems);
     const first = Object.entries(fields)[0];
     const message = first ? `${first[0]}: ${first[1][0]} No row could be invited.` : "file: no row could be invited.";
     throw new AppError(400, "invalid_input", message, fields, { report });

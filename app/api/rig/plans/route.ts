@@ -2,7 +2,8 @@ import { NextResponse } from "next/server";
 import { assertMayReviewRigPlans } from "@/lib/auth/permissions";
 import { requireActor } from "@/lib/auth/session";
 import { listRigPlans, saveRigPlan } from "@/lib/data/rig-plans";
-import { lookUpBy, readJson, readQuery, route } from "@/lib/http/route";
+import { lookUpBy } from "@/lib/http/look-up";
+import { readJson, readQuery, route } from "@/lib/http/route";
 import { savedRigPlanSchema, savedRigPlansQuerySchema } from "@/lib/validations/rig-plans";
 
 export const dynamic = "force-dynamic";

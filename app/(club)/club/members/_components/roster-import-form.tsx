@@ -83,11 +83,9 @@ export function RosterImportForm() {
     data.set("roster", file);
     const result = await importRosterAction(data);
     setSending(false);
-    if (!result.ok) {
-      setOutcome({ ok: false, message: result.message });
-      return;
-    }
-    setOutcome({ ok: true, message: result.message ?? "Done." });
+    setOutcome(result.ok ? { ok: true, message: result.message ?? "Done." } : { ok: false, message: result.message });
+    // A refusal with a report (no row could be invited) is shown like an import; any other keeps the file to try again.
+    if (!result.ok && !result.data) return;
     setReport(result.data ?? null);
     setPreview(null);
     setFile(null);

@@ -3,21 +3,20 @@
 import { requireActor } from "@/lib/auth/session";
 import { revokeCertificate } from "@/lib/data/certificates";
 import { revokeCertificateSchema } from "@/lib/validations/certification";
-import { fieldErrorsFrom } from "@/lib/validations/issues";
+import { uuidValueSchema } from "@/lib/validations/ids";
+import { parseActionArgument, parseActionInput } from "@/lib/validations/issues";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
+import { lookUpBy } from "@/lib/http/look-up";
 
 /** An admin revokes a certificate with a reason; its public check page says so at once. */
 export async function revokeCertificateAction(certificateId: string, input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
-    const parsed = revokeCertificateSchema.safeParse(input);
-    if (!parsed.success)
-      return {
-        ok: false,
-        message: "Check the highlighted fields.",
-        fieldErrors: fieldErrorsFrom(parsed.error),
-      };
-    const { revoked } = await revokeCertificate(actor, String(certificateId), parsed.data.reason);
+    const id = parseActionArgument("certificateId", uuidValueSchema, certificateId);
+    if (!id.success) return { ok: false, message: "That certificate does not exist.", fieldErrors: id.fieldErrors };
+    const parsed = parseActionInput(revokeCertificateSchema, input);
+    if (!parsed.success) return { ok: false, message: "Check the highlighted fields.", fieldErrors: parsed.fieldErrors };
+    const { revoked } = await lookUpBy("certificateId", "certificate", () => revokeCertificate(actor, id.data, parsed.data.reason));
     return {
       ok: true,
       message:

@@ -3,28 +3,22 @@
 import { requireActor } from "@/lib/auth/session";
 import { liftSuspension, suspendClearance } from "@/lib/data/clearance";
 import { liftSuspensionSchema, suspendClearanceSchema } from "@/lib/validations/certification";
-import { fieldErrorsFrom } from "@/lib/validations/issues";
+import { recordIdValueSchema } from "@/lib/validations/ids";
+import { parseActionArgument, parseActionInput } from "@/lib/validations/issues";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
+import { lookUpBy } from "@/lib/http/look-up";
 
-function athleteIdFrom(value: unknown): number | null {
-  const id = Number(value);
-  return Number.isInteger(id) && id > 0 ? id : null;
-}
+const checkFields = "Check the highlighted fields.";
 
 /** A coach suspends an athlete's clearance with a reason. */
 export async function suspendClearanceAction(athleteId: number, input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
-    const id = athleteIdFrom(athleteId);
-    const parsed = suspendClearanceSchema.safeParse(input);
-    if (!parsed.success || id === null) {
-      return {
-        ok: false,
-        message: "Check the highlighted fields.",
-        fieldErrors: parsed.success ? {} : fieldErrorsFrom(parsed.error),
-      };
-    }
-    await suspendClearance(actor, id, parsed.data.reason);
+    const id = parseActionArgument("athleteId", recordIdValueSchema, athleteId);
+    if (!id.success) return { ok: false, message: "That athlete does not exist.", fieldErrors: id.fieldErrors };
+    const parsed = parseActionInput(suspendClearanceSchema, input);
+    if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: parsed.fieldErrors };
+    await lookUpBy("athleteId", "athlete in your club", () => suspendClearance(actor, id.data, parsed.data.reason));
     return { ok: true, message: "Clearance suspended. The athlete rigs with a coach until you lift it." };
   } catch (error) {
     return actionFailure(error);
@@ -35,16 +29,11 @@ export async function suspendClearanceAction(athleteId: number, input: unknown):
 export async function liftSuspensionAction(athleteId: number, input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
-    const id = athleteIdFrom(athleteId);
-    const parsed = liftSuspensionSchema.safeParse(input);
-    if (!parsed.success || id === null) {
-      return {
-        ok: false,
-        message: "Check the highlighted fields.",
-        fieldErrors: parsed.success ? {} : fieldErrorsFrom(parsed.error),
-      };
-    }
-    await liftSuspension(actor, id, parsed.data.note);
+    const id = parseActionArgument("athleteId", recordIdValueSchema, athleteId);
+    if (!id.success) return { ok: false, message: "That athlete does not exist.", fieldErrors: id.fieldErrors };
+    const parsed = parseActionInput(liftSuspensionSchema, input);
+    if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: parsed.fieldErrors };
+    await lookUpBy("athleteId", "athlete in your club", () => liftSuspension(actor, id.data, parsed.data.note));
     return { ok: true, message: "Suspension lifted." };
   } catch (error) {
     return actionFailure(error);

@@ -3,8 +3,10 @@
 import { requireActor } from "@/lib/auth/session";
 import { assessmentForCoach, recordAssessment } from "@/lib/data/sign-offs";
 import { assessmentSchemaFor } from "@/lib/validations/certification";
-import { fieldErrorsFrom } from "@/lib/validations/issues";
+import { uuidValueSchema } from "@/lib/validations/ids";
+import { parseActionArgument, parseActionInput } from "@/lib/validations/issues";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
+import { lookUpBy } from "@/lib/http/look-up";
 
 /**
  * A coach records the observed assessment; the module's checklist gives the schema. No revalidatePath:
@@ -16,16 +18,12 @@ export async function recordAssessmentAction(
 ): Promise<ActionResult<{ outcome: string; serials: string[] }>> {
   try {
     const actor = await requireActor();
-    const detail = await assessmentForCoach(actor, String(assessmentId));
-    const parsed = assessmentSchemaFor(detail.checklist).safeParse(input);
-    if (!parsed.success) {
-      return {
-        ok: false,
-        message: "Check the highlighted items.",
-        fieldErrors: fieldErrorsFrom(parsed.error),
-      };
-    }
-    const recorded = await recordAssessment(actor, detail.id, parsed.data);
+    const id = parseActionArgument("assessmentId", uuidValueSchema, assessmentId);
+    if (!id.success) return { ok: false, message: "That sign-off does not exist.", fieldErrors: id.fieldErrors };
+    const detail = await lookUpBy("assessmentId", "sign-off", () => assessmentForCoach(actor, id.data));
+    const parsed = parseActionInput(assessmentSchemaFor(detail.checklist), input);
+    if (!parsed.success) return { ok: false, message: "Check the highlighted items.", fieldErrors: parsed.fieldErrors };
+    const recorded = await lookUpBy("assessmentId", "sign-off", () => recordAssessment(actor, detail.id, parsed.data));
     const serials = recorded.certificates.map((certificate) => certificate.serial);
     const message =
       recorded.outcome === "passed"

@@ -1,6 +1,7 @@
 import { requireActor } from "@/lib/auth/session";
 import { submitAttempt } from "@/lib/data/learning";
-import { jsonResponse, lookUpBy, readJson, readParams, route } from "@/lib/http/route";
+import { lookUpBy } from "@/lib/http/look-up";
+import { jsonResponse, readJson, readParams, route } from "@/lib/http/route";
 import { attemptIdParamSchema } from "@/lib/validations/learning";
 import { quizSubmissionSchema } from "@/lib/validations/quiz";
 

@@ -1,6 +1,7 @@
 import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
-import { lookUpBy, readParams, route } from "@/lib/http/route";
+import { lookUpBy } from "@/lib/http/look-up";
+import { readParams, route } from "@/lib/http/route";
 import { certificateIdParamSchema } from "@/lib/validations/certification";
 import { certificatePdfFor } from "@/lib/data/certificates";
 

@@ -1,7 +1,8 @@
 import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
 import { startOrResumeAttempt } from "@/lib/data/learning";
-import { lookUpBy, readParams, route } from "@/lib/http/route";
+import { lookUpBy } from "@/lib/http/look-up";
+import { readParams, route } from "@/lib/http/route";
 import { moduleSlugParamSchema } from "@/lib/validations/learning";
 
 interface Context {

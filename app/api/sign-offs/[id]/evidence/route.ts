@@ -1,6 +1,7 @@
 import { NextResponse } from "next/server";
 import { requireActor } from "@/lib/auth/session";
-import { lookUpBy, readParams, route } from "@/lib/http/route";
+import { lookUpBy } from "@/lib/http/look-up";
+import { readParams, route } from "@/lib/http/route";
 import { signOffIdParamSchema } from "@/lib/validations/certification";
 import { readUploadedFile, sniffImageType } from "@/lib/http/upload";
 import { addEvidencePhoto, assertCanAddEvidence, maxEvidenceBytes } from "@/lib/data/evidence";
