@@ -2,7 +2,7 @@ import fs from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTempDataDir } from "@/tests/support/temp-data-dir";
-import { closeDatabase, getSequelize, readStatement, writeStatement, writeTransaction } from "@/lib/db";
+import { closeDatabase, committedWrites, getSequelize, readStatement, writeStatement, writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { migrateToLatest, migrateToNothing } from "@/lib/migrate";
 import { seedDemoClub, demoMembers } from "@/lib/seed/demo-club";
@@ -116,6 +116,26 @@ describe("the write connection", () => {
     expect(await AuditEvent.count({ where: { action: "test.lone", subjectType: "marked" } })).toBe(20);
     expect(await writeStatement("UPDATE audit_events SET subject_type = ? WHERE action = ?", ["x", "no.such.action"])).toBe(0);
     await expect(writeStatement("UPDATE no_such_table SET x = ?", [1])).rejects.toThrow(/no such table/);
+  });
+
+  it("commits statements that queue up together in one group, each answered on its own", async () => {
+    const club = await Club.findOne();
+    await writeTransaction((transaction) =>
+      AuditEvent.bulkCreate(
+        Array.from({ length: 40 }, (_, index) => ({ clubId: club!.id, actorId: null, action: "test.group", subjectType: "test", subjectId: String(index), details: {} })),
+        { transaction },
+      ),
+    );
+    const commitsBefore = committedWrites();
+    const mark = (index: number) => writeStatement("UPDATE audit_events SET subject_type = ? WHERE action = ? AND subject_id = ?", ["grouped", "test.group", String(index)]);
+    // One statement breaks a NOT NULL constraint: it alone is refused, the rest of its group is stored.
+    const broken = writeStatement("UPDATE audit_events SET action = NULL WHERE action = ? AND subject_id = ?", ["test.group", "0"]);
+    const outcomes = await Promise.allSettled([...Array.from({ length: 40 }, (_, index) => mark(index)), broken]);
+    expect(outcomes.slice(0, 40).map((outcome) => (outcome.status === "fulfilled" ? outcome.value : outcome.reason))).toEqual(Array(40).fill(1));
+    expect(outcomes[40]).toMatchObject({ status: "rejected", reason: { code: "SQLITE_CONSTRAINT" } });
+    expect(await AuditEvent.count({ where: { action: "test.group", subjectType: "grouped" } })).toBe(40);
+    // The first statement commits alone (nothing was queued yet); the other 40 wait for it and go together.
+    expect(committedWrites() - commitsBefore).toBeLessThanOrEqual(2);
   });
 
   it("reads with readStatement on the read connection: committed writes at once, bound values, SQL errors thrown", async () => {
