@@ -32,7 +32,7 @@ const { closeDatabase, committedWrites, getSequelize } = await import("@/lib/db"
 const { databaseReady } = await import("@/lib/data/database");
 const { seedDemoClub, demoPassword } = await import("@/lib/seed/demo-club");
 const { seedSecondClub, secondClubPassword } = await import("@/lib/seed/second-club");
-const { seedDemoFleet } = await import("@/lib/seed/demo-fleet");
+const { demoOarSets, seedDemoFleet } = await import("@/lib/seed/demo-fleet");
 const { seedDemoCertification } = await import("@/lib/seed/demo-certification");
 const { localIsoDate } = await import("@/lib/care/calendar");
 const { addDaysIso } = await import("@/lib/care/dates");
@@ -517,16 +517,11 @@ const validOarSet = (fixtures: Fixtures) => ({
   boatIds: [fixtures.heronId],
   notes: "",
 });
-const shortLoomAsSeeded = (fixtures: Fixtures) => ({
-  name: "Short-loom sculls",
-  oarType: "sculling",
-  oarCount: 2,
-  targetLengthCm: 286,
-  targetInboardCm: 87,
-  clickCm: 0.5,
-  handleMechanism: "end-screw",
-  boatIds: [fixtures.heronId],
-});
+/** The seeded short-loom sculls (lib/seed/demo-fleet.ts) as the edit form sends them, still linked to Heron only. */
+const shortLoomAsSeeded = (fixtures: Fixtures) => {
+  const { name, oarType, oarCount, targetLengthCm, targetInboardCm, clickCm, handleMechanism } = demoOarSets.find((set) => set.name === "Short-loom sculls")!;
+  return { name, oarType, oarCount, targetLengthCm, targetInboardCm, clickCm, handleMechanism, boatIds: [fixtures.heronId] };
+};
 const oarSetSpecs: Record<string, FieldSpec> = {
   name: { kind: "name" },
   oarType: { kind: "choice" },
