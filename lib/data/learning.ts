@@ -1,7 +1,7 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
 import { Op } from "sequelize";
-import { writeStatement, writeTransaction } from "@/lib/db";
+import { writeKeyedUpdate, writeTransaction, type KeyedUpdate } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { rawBoolean, rawDate, rawJson, selectRows, sqliteDateTime } from "@/lib/data/sql";
 import { settingsForClub } from "@/lib/data/club-settings";
@@ -154,6 +154,14 @@ function alreadySubmitted(row: AttemptRow): ConflictError {
 const selectAttempt =
   "SELECT id, user_id, questions, pass_mark, score, passed, results, submitted_at FROM quiz_attempts WHERE id = ?";
 
+/** Stores a grade only while the attempt is open (the write queue merges these, see writeKeyedUpdate). */
+const storeGrade: KeyedUpdate = {
+  table: "quiz_attempts",
+  key: "id",
+  columns: ["answers", "score", "passed", "results", "submitted_at"],
+  condition: "target.submitted_at IS NULL",
+};
+
 /**
  * Grades and stores a submission. The attempt id is the idempotency key: a second submission of the
  * same attempt changes nothing and is refused with 409, carrying the stored result.
@@ -161,8 +169,8 @@ const selectAttempt =
  * The attempt is read and graded outside the write queue (its questions never change once started);
  * inside, one conditional UPDATE stores the grade only if the attempt is still open, so of two
  * submissions racing for the same attempt exactly one is stored and the other gets the stored result.
- * Both statements are plain SQL (lib/data/sql.ts) and the UPDATE runs alone (`writeStatement`): this is
- * the busiest write.
+ * Both statements are plain SQL (lib/data/sql.ts), and the UPDATE goes through `writeKeyedUpdate`,
+ * which merges submissions that queue up together into one statement: this is the busiest write.
  */
 export async function submitAttempt(actor: Actor, attemptId: string, answers: Record<string, unknown>): Promise<AttemptResult> {
   await databaseReady();
@@ -175,11 +183,14 @@ export async function submitAttempt(actor: Actor, attemptId: string, answers: Re
   const grade = gradeQuiz(questions, relevant, attempt.pass_mark);
   const results: StoredResult[] = grade.results.map(({ id, correct, expected, explanation }) => ({ id, correct, expected, explanation }));
   const submittedAt = new Date();
-  const changed = await writeStatement(
-    "UPDATE quiz_attempts SET answers = ?, score = ?, passed = ?, results = ?, submitted_at = ? WHERE id = ? AND submitted_at IS NULL",
-    [JSON.stringify(relevant), grade.score, grade.passed ? 1 : 0, JSON.stringify(results), sqliteDateTime(submittedAt), attemptId],
-  );
-  if (changed !== 1) {
+  const stored = await writeKeyedUpdate(storeGrade, attemptId, [
+    JSON.stringify(relevant),
+    grade.score,
+    grade.passed ? 1 : 0,
+    JSON.stringify(results),
+    sqliteDateTime(submittedAt),
+  ]);
+  if (!stored) {
     const [winner] = await selectRows<AttemptRow>(selectAttempt, [attemptId]);
     throw alreadySubmitted(winner!);
   }

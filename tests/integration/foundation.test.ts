@@ -1,8 +1,19 @@
+import type { EventEmitter } from "node:events";
 import fs from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTempDataDir } from "@/tests/support/temp-data-dir";
-import { closeDatabase, committedWrites, getSequelize, readStatement, writeStatement, writeTransaction } from "@/lib/db";
+import {
+  closeDatabase,
+  committedWrites,
+  getSequelize,
+  maxKeyedRows,
+  readStatement,
+  writeKeyedUpdate,
+  writeStatement,
+  writeTransaction,
+  type KeyedUpdate,
+} from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { migrateToLatest, migrateToNothing } from "@/lib/migrate";
 import { seedDemoClub, demoMembers } from "@/lib/seed/demo-club";
@@ -136,6 +147,94 @@ describe("the write connection", () => {
     expect(await AuditEvent.count({ where: { action: "test.group", subjectType: "grouped" } })).toBe(40);
     // The first statement commits alone (nothing was queued yet); the other 40 wait for it and go together.
     expect(committedWrites() - commitsBefore).toBeLessThanOrEqual(2);
+  });
+
+  describe("keyed updates", () => {
+    // Sets an event's subject only while it is still "open", as a quiz submission stores a grade once.
+    const markEvent: KeyedUpdate = { table: "audit_events", key: "id", columns: ["subject_type", "subject_id"], condition: "target.subject_type = 'open'" };
+
+    async function openEvents(action: string, count: number): Promise<number[]> {
+      const club = await Club.findOne();
+      const created = await writeTransaction((transaction) =>
+        AuditEvent.bulkCreate(
+          Array.from({ length: count }, (_, index) => ({ clubId: club!.id, actorId: null, action, subjectType: "open", subjectId: String(index), details: {} })),
+          { transaction },
+        ),
+      );
+      return created.map((event) => event.id);
+    }
+
+    const subjects = (action: string) =>
+      readStatement<{ subjectType: string; subjectId: string }>(
+        "SELECT subject_type AS subjectType, subject_id AS subjectId FROM audit_events WHERE action = ? ORDER BY id",
+        [action],
+      );
+
+    it("merges updates that queue up together into a few statements, each answered on its own", async () => {
+      const ids = await openEvents("test.keyed", 40);
+      // sqlite3 reports each statement the write connection runs.
+      const writer = (await writeTransaction(async (transaction) => connectionOf(transaction))) as EventEmitter;
+      const updates: string[] = [];
+      const trace = (sql: string) => {
+        if (sql.startsWith("UPDATE audit_events")) updates.push(sql);
+      };
+      writer.on("trace", trace);
+      const commitsBefore = committedWrites();
+      const outcomes = await Promise.all(ids.map((id, index) => writeKeyedUpdate(markEvent, id, ["marked", `m${index}`])));
+      writer.off("trace", trace);
+      // The trace shows each statement with its values: every row once, at most maxKeyedRows to a statement.
+      const rowsPerStatement = updates.map((sql) => sql.match(/'marked'/g)?.length ?? 0);
+      expect(rowsPerStatement.reduce((sum, rows) => sum + rows, 0)).toBe(40);
+      expect(Math.max(...rowsPerStatement)).toBe(maxKeyedRows);
+      expect(updates.length).toBeLessThanOrEqual(1 + Math.ceil(39 / maxKeyedRows));
+      expect(outcomes).toEqual(Array(40).fill(true));
+      expect(await subjects("test.keyed")).toEqual(ids.map((_, index) => ({ subjectType: "marked", subjectId: `m${index}` })));
+      // One group commit, or two if the first update got its turn before the others queued up.
+      expect(committedWrites() - commitsBefore).toBeLessThanOrEqual(2);
+      // The condition holds the row now: a second update of the same rows changes nothing.
+      expect(await Promise.all(ids.slice(0, 3).map((id) => writeKeyedUpdate(markEvent, id, ["again", "x"])))).toEqual([false, false, false]);
+      expect(await writeKeyedUpdate(markEvent, -1, ["missing", "x"])).toBe(false);
+    });
+
+    it("lets the first of two updates of one row win, as it would alone", async () => {
+      const [id] = await openEvents("test.keyed-twice", 1);
+      // A slow transaction first, so that both updates queue up in one group behind it.
+      const blocker = writeTransaction(() => new Promise((resolve) => setTimeout(resolve, 50)));
+      const [first, second] = await Promise.all([writeKeyedUpdate(markEvent, id!, ["first", "1"]), writeKeyedUpdate(markEvent, id!, ["second", "2"]), blocker]);
+      expect([first, second]).toEqual([true, false]);
+      expect(await subjects("test.keyed-twice")).toEqual([{ subjectType: "first", subjectId: "1" }]);
+    });
+
+    it("rejects only the row that breaks a constraint and stores the rest of its batch", async () => {
+      const ids = await openEvents("test.keyed-broken", maxKeyedRows);
+      const blocker = writeTransaction(() => new Promise((resolve) => setTimeout(resolve, 50)));
+      // subject_type is NOT NULL: the third row's update is refused, the statement it was merged into is retried row by row.
+      const outcomes = await Promise.allSettled(ids.map((id, index) => writeKeyedUpdate(markEvent, id, [index === 2 ? null : "kept", String(index)])));
+      await blocker;
+      expect(outcomes[2]).toMatchObject({ status: "rejected", reason: { code: "SQLITE_CONSTRAINT" } });
+      expect(outcomes.filter((outcome) => outcome.status === "fulfilled" && outcome.value === true)).toHaveLength(maxKeyedRows - 1);
+      expect((await subjects("test.keyed-broken")).map((row) => row.subjectType)).toEqual(ids.map((_, index) => (index === 2 ? "open" : "kept")));
+    });
+
+    it("keeps the order of plain statements and keyed updates queued between them", async () => {
+      const [id] = await openEvents("test.keyed-order", 1);
+      const blocker = writeTransaction(() => new Promise((resolve) => setTimeout(resolve, 50)));
+      const results = await Promise.all([
+        writeKeyedUpdate(markEvent, id!, ["step", "1"]),
+        writeStatement("UPDATE audit_events SET subject_type = 'open', subject_id = subject_id || '+2' WHERE id = ?", [id!]),
+        writeKeyedUpdate(markEvent, id!, ["step", "1+2+3"]),
+        blocker,
+      ]);
+      expect(results.slice(0, 3)).toEqual([true, 1, true]);
+      expect(await subjects("test.keyed-order")).toEqual([{ subjectType: "step", subjectId: "1+2+3" }]);
+    });
+
+    it("refuses a wrong number of values and a name that is not plain SQL, before anything is queued", async () => {
+      await expect(writeKeyedUpdate(markEvent, 1, ["only one"])).rejects.toThrow(/2 values expected, 1 given/);
+      const unsafe: KeyedUpdate = { table: "audit_events; DROP TABLE users", key: "id", columns: ["subject_type"] };
+      await expect(writeKeyedUpdate(unsafe, 1, ["x"])).rejects.toThrow(/not a plain SQL name/);
+      expect(await User.count()).toBe(demoMembers.length);
+    });
   });
 
   it("reads with readStatement on the read connection: committed writes at once, bound values, SQL errors thrown", async () => {
