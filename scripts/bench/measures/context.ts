@@ -17,12 +17,15 @@ export interface BenchContext {
   minimalPath: string;
   lighthouseRuns: number;
   loadSeconds: number;
+  /** Rounds of (trivial route, quiz submit) taken in turn, and the seconds of each run in a round. */
+  apiRounds: number;
+  roundSeconds: number;
   connections: number;
   lighthouse(): Promise<LighthouseSession>;
   log(message: string): void;
   memo: {
     pages?: Promise<{ lesson: PageFigures; staticLesson: PageFigures; minimal: PageFigures }>;
-    trivial?: Promise<LoadResult>;
+    submitRounds?: Promise<{ trivial: LoadResult[]; submit: LoadResult[]; ratios: number[]; trivialSummary: LoadResult; submitSummary: LoadResult }>;
     roster?: Promise<LoadResult>;
   };
   /** Raw figures for bench-out/last.json. */
