@@ -3,6 +3,7 @@ import { databaseReady } from "@/lib/data/database";
 import { assertMayListMembers, type Actor } from "@/lib/auth/permissions";
 import type { Role, UserStatus } from "@/lib/auth/roles";
 import { Club, User } from "@/models";
+import { selectRows } from "@/lib/data/sql";
 import { nextOffsetAfter, type Page, type PageQuery } from "@/lib/validations/paging";
 
 export interface MemberSummary {
@@ -43,25 +44,25 @@ export async function listClubMembers(actor: Actor, role?: Role): Promise<Member
   return users.map(memberSummary);
 }
 
+type MemberRow = Pick<User, (typeof memberColumns)[number]>;
+
+/**
+ * The roster's page in plain SQL on the read connection (lib/data/sql.ts): coaches load it while quiz
+ * submissions are being written, and Sequelize's own connection takes one statement at a time.
+ */
+const countMembers = "SELECT COUNT(*) AS total FROM users WHERE club_id = ? AND role = ?";
+const pageOfMembers =
+  "SELECT id, name, email, role, status, last_sign_in_at AS lastSignInAt FROM users WHERE club_id = ? AND role = ? ORDER BY name ASC, id ASC LIMIT ? OFFSET ?";
+
 /** One page of the club's members of a role, by name (then id, so pages never overlap). */
 export async function pageOfClubMembers(actor: Actor, role: Role, page: PageQuery): Promise<Page<MemberSummary>> {
   await databaseReady();
   assertMayListMembers(actor);
-  const where = { clubId: actor.clubId, role };
-  const [total, users] = await Promise.all([
-    User.count({ where }),
-    User.findAll({
-      where,
-      attributes: [...memberColumns],
-      order: [
-        ["name", "ASC"],
-        ["id", "ASC"],
-      ],
-      limit: page.limit,
-      offset: page.offset,
-      raw: true,
-    }),
+  const [counted, users] = await Promise.all([
+    selectRows<{ total: number }>(countMembers, [actor.clubId, role]),
+    selectRows<MemberRow>(pageOfMembers, [actor.clubId, role, page.limit, page.offset]),
   ]);
+  const total = counted[0]?.total ?? 0;
   return {
     items: users.map(memberSummary),
     total,
