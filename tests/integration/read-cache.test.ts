@@ -71,6 +71,40 @@ describe("versionedReadCache", () => {
     expect(await cache.read("k", compute)).toEqual({ run: 3 });
   });
 
+  it("runs one computation at a time per key: reads after a write wait for the running one and share the next", async () => {
+    const cache = versionedReadCache<{ run: number; events: number }>(8);
+    let runs = 0;
+    let running = 0;
+    let mostAtOnce = 0;
+    let releaseFirst!: () => void;
+    const firstMayFinish = new Promise<void>((resolve) => (releaseFirst = resolve));
+    const compute = async () => {
+      const run = ++runs;
+      running += 1;
+      mostAtOnce = Math.max(mostAtOnce, running);
+      const events = await AuditEvent.count({ where: { action: "test.cache" } });
+      if (run === 1) await firstMayFinish;
+      running -= 1;
+      return { run, events };
+    };
+    const before = await AuditEvent.count({ where: { action: "test.cache" } });
+    const first = cache.read("k", compute);
+    await new Promise((resolve) => setTimeout(resolve, 20));
+    await writeAuditEvent("during");
+    // Three reads after the write, while the first computation (from before it) still runs.
+    const later = Promise.all([cache.read("k", compute), cache.read("k", compute), cache.read("k", compute)]);
+    await new Promise((resolve) => setTimeout(resolve, 20));
+    expect(runs).toBe(1);
+    releaseFirst();
+    expect(await first).toEqual({ run: 1, events: before });
+    const [a, b, c] = await later;
+    expect(a).toEqual({ run: 2, events: before + 1 });
+    expect(b).toBe(a);
+    expect(c).toBe(a);
+    expect(runs).toBe(2);
+    expect(mostAtOnce).toBe(1);
+  });
+
   it("does not keep a failed computation", async () => {
     const cache = versionedReadCache<{ ok: boolean }>(8);
     await expect(cache.read("k", () => Promise.reject(new Error("database busy")))).rejects.toThrow("database busy");
