@@ -1,7 +1,7 @@
 import bcrypt from "bcryptjs";
 import zxcvbn from "zxcvbn";
 
-import { maxPasswordLength, minPasswordLength } from "@/lib/auth/password-rules";
+import { fitsPasswordHash, maxPasswordLength, minPasswordLength, newPasswordTooLongMessage } from "@/lib/auth/password-rules";
 
 export { maxPasswordLength, minPasswordLength };
 const bcryptCost = 11;
@@ -12,7 +12,7 @@ const bcryptCost = 11;
  */
 export function passwordProblem(password: string): string | null {
   if (password.length < minPasswordLength) return `Use at least ${minPasswordLength} characters.`;
-  if (password.length > maxPasswordLength) return `Use at most ${maxPasswordLength} characters.`;
+  if (!fitsPasswordHash(password)) return newPasswordTooLongMessage;
   const estimate = zxcvbn(password.slice(0, 100));
   const wholeIsCommon = estimate.sequence.some(
     (match) =>

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { roles } from "@/lib/auth/roles";
-import { maxPasswordLength, minPasswordLength } from "@/lib/auth/password-rules";
+import { fitsPasswordHash, maxPasswordLength, minPasswordLength, newPasswordTooLongMessage } from "@/lib/auth/password-rules";
 import { oneLineTextMessage, oneLineTextPattern } from "@/lib/validations/text";
 
 /** A one-time token as lib/auth/tokens.ts makes them (invitations, sign-in links): 32 random bytes, base64url. */
@@ -31,7 +31,8 @@ export const acceptInvitationSchema = z.strictObject({
   password: z
     .string()
     .min(minPasswordLength, { error: `Use at least ${minPasswordLength} characters.` })
-    .max(maxPasswordLength, { error: `Use at most ${maxPasswordLength} characters.` }),
+    .max(maxPasswordLength, { error: newPasswordTooLongMessage })
+    .refine(fitsPasswordHash, { error: newPasswordTooLongMessage }),
 });
 
 export const signInSchema = z.strictObject({

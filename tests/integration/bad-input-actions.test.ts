@@ -1029,6 +1029,8 @@ describe("signing in and joining (signed out)", () => {
           v("name too long", { ...validAccept(), name: "n".repeat(121) }, "name"),
           v("password too short", { ...validAccept(), password: "short" }, "password"),
           v("password too long", { ...validAccept(), password: "p".repeat(129) }, "password"),
+          v("password over bcrypt's 72 bytes", { ...validAccept(), password: "heron collar ".repeat(6) }, "password"),
+          v("password of 37 two-byte letters (74 bytes)", { ...validAccept(), password: "é".repeat(37) }, "password"),
           v("password a common one", { ...validAccept(), password: "password123" }, "password"),
           v("a confirm field", { ...validAccept(), confirm: validAccept().password }, "confirm"),
           v("an email field", { ...validAccept(), email: "someone@else.example" }, "email"),

@@ -27,6 +27,20 @@ describe("password rules", () => {
     expect(passwordProblem("x".repeat(129))).toMatch(/at most/);
   });
 
+  // bcrypt hashes only the first 72 bytes of a password (the bcrypt algorithm's input limit; bcryptjs's
+  // README, checked here against the library itself): a longer new password is refused, counted in UTF-8.
+  it("refuses new passwords over the 72 bytes bcrypt uses, counting UTF-8 bytes", async () => {
+    const start = "heron collar tidewater ".repeat(4).slice(0, 72);
+    const hash = await hashPassword(`${start}one ending`);
+    expect(await verifyPassword(`${start}another ending`, hash)).toBe(true);
+    expect(passwordProblem(start)).toBeNull();
+    expect(passwordProblem(`${start}x`)).toMatch(/at most 72/);
+    // Letters from À to ÿ (U+00C0–U+00FF, taken out of order) take 2 bytes each: 36 of them are 72 bytes, 37 are 74.
+    const accented = (count: number) => Array.from({ length: count }, (_, index) => String.fromCharCode(0xc0 + ((index * 7) % 64))).join("");
+    expect(passwordProblem(accented(36))).toBeNull();
+    expect(passwordProblem(accented(37))).toMatch(/at most 72/);
+  });
+
   it("stores bcrypt hashes that verify only the right password", async () => {
     const hash = await hashPassword("heron collar tidewater");
     expect(hash).toMatch(/^\$2[aby]\$11\$/);
