@@ -179,6 +179,9 @@ async function updateCalendar(
     const settings = readClubSettings(club.settings);
     const next = change({ raceDays: settings.raceDays, humidSpell: settings.humidSpell });
     const raceDays = [...new Set(next.raceDays)].sort();
+    const unchanged = next.humidSpell === settings.humidSpell && raceDays.join() === [...settings.raceDays].sort().join();
+    // Adding a day already there, removing one that is not, or setting the spell as it is: nothing to write or audit.
+    if (unchanged) return { raceDays, humidSpell: next.humidSpell };
     // Only these two keys change; every other stored setting is kept as it was.
     await club.update({ settings: { ...club.settings, raceDays, humidSpell: next.humidSpell } }, { transaction });
     await recordAudit(

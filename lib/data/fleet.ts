@@ -240,6 +240,8 @@ export async function setBoatArchived(actor: Actor, boatId: number, archived: bo
   assertAllowed(canManageFleet(actor, actor.clubId), "Only coaches and administrators can archive boats.");
   await writeTransaction(async (transaction) => {
     const boat = await boatOfClub(actor, boatId, transaction);
+    // Already so: the archive date and the audit trail stay as they are.
+    if ((boat.archivedAt !== null) === archived) return;
     if (!archived) await assertNameFree("boat", actor, boat.name, boatId, transaction);
     await boat.update({ archivedAt: archived ? new Date() : null }, { transaction });
     await recordAudit(
@@ -339,6 +341,7 @@ export async function setOarSetArchived(actor: Actor, oarSetId: number, archived
   assertAllowed(canManageFleet(actor, actor.clubId), "Only coaches and administrators can archive oar sets.");
   await writeTransaction(async (transaction) => {
     const set = await oarSetOfClub(actor, oarSetId, transaction);
+    if ((set.archivedAt !== null) === archived) return;
     if (!archived) await assertNameFree("oar set", actor, set.name, oarSetId, transaction);
     await set.update({ archivedAt: archived ? new Date() : null }, { transaction });
     await recordAudit(

@@ -24,7 +24,7 @@ import { planRigChange } from "@/lib/rigging/plan";
 import { POST as planRoute } from "@/app/api/rig/plan/route";
 import { encode } from "next-auth/jwt";
 import { authOptions } from "@/lib/auth/options";
-import { Boat, CleaningDigest, Club, OarSet, RigPlan, User } from "@/models";
+import { AuditEvent, Boat, CleaningDigest, Club, OarSet, RigPlan, User } from "@/models";
 import type { Actor } from "@/lib/auth/permissions";
 import { ForbiddenError, NotFoundError, TooManyRequestsError, ValidationError } from "@/lib/http/errors";
 import { boatSchema, oarSetSchema } from "@/lib/validations/fleet";
@@ -166,7 +166,16 @@ describe("boats and oar sets", () => {
     expect((await listFleet(athlete)).oarSets.map((s) => s.name)).not.toContain("Test sculls");
     expect((await listFleet(coach, { includeArchived: true })).oarSets.find((s) => s.name === "Test sculls")?.archived).toBe(true);
     await expect(listFleet(athlete, { includeArchived: true })).rejects.toBeInstanceOf(ForbiddenError);
+    // Archiving it again changes nothing: the archive date stays, and no second audit row is written.
+    const archivedAt = (await OarSet.findByPk(set!.id))!.archivedAt;
+    const audits = () => AuditEvent.count({ where: { subjectType: "oar_set", subjectId: String(set!.id) } });
+    const auditsBefore = await audits();
+    await new Promise((resolve) => setTimeout(resolve, 5));
+    await setOarSetArchived(coach, set!.id, true);
+    expect((await OarSet.findByPk(set!.id))!.archivedAt).toEqual(archivedAt);
+    expect(await audits()).toBe(auditsBefore);
     await setOarSetArchived(coach, set!.id, false);
+    expect(await audits()).toBe(auditsBefore + 1);
     expect(await OarSet.findByPk(set!.id)).not.toBeNull();
     expect((await listFleet(athlete)).oarSets.map((s) => s.name)).toContain("Test sculls");
   });
@@ -250,6 +259,12 @@ describe("grip-cleaning log", () => {
     await expect(addRaceDay(athlete, race)).rejects.toBeInstanceOf(ForbiddenError);
     expect((await addRaceDay(coach, race)).raceDays).toContain(race);
     expect((await removeRaceDay(coach, race)).raceDays).not.toContain(race);
+    // A day that is not there, and the humid spell as it already is: answered, but nothing written or audited.
+    const calendarAudits = () => AuditEvent.count({ where: { subjectType: "club", action: ["club.race-day-removed", "club.humid-spell"] } });
+    const calendarAuditsBefore = await calendarAudits();
+    expect((await removeRaceDay(coach, race)).raceDays).not.toContain(race);
+    expect((await setHumidSpell(coach, false)).humidSpell).toBe(false);
+    expect(await calendarAudits()).toBe(calendarAuditsBefore);
     await setHumidSpell(coach, true);
     const humid = await cleaningOverview(athlete, today);
     // Cleaned today: during a humid spell still fine today, due again tomorrow.
