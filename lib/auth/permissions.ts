@@ -105,9 +105,20 @@ export function canReviewRigPlans(actor: Actor, clubId: number): boolean {
 }
 
 /*
- * The club-wide lists, as assertions: the data functions call them, and so do their routes before reading
- * a query, so that a role that may not see the list gets 403 whatever it sends, never a 400 about the query.
+ * Role checks as assertions: the data functions call them (or the rule behind them), and so do their
+ * routes and server actions before reading a query or an input, so that a role that may not act gets
+ * 403 whatever it sends, never a 400 about fields it may not fill in.
  */
+
+/** 403 unless coach or admin: boats, oar sets, the cleaning calendar and digest (the actor's club). */
+export function assertMayManageFleet(actor: Actor): void {
+  assertAllowed(canManageFleet(actor, actor.clubId), "Only coaches and administrators look after the fleet and its cleaning calendar.");
+}
+
+/** 403 unless an admin: members, invitations, club settings, certificates (the admin's own club). */
+export function assertMayManageClub(actor: Actor): void {
+  assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators can do this.");
+}
 
 /** 403 unless coach or admin: the member lists (GET /api/roster). */
 export function assertMayListMembers(actor: Actor): void {

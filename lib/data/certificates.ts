@@ -168,6 +168,17 @@ export async function certificateForAdmin(
 }
 
 /**
+ * 404 unless the certificate is of the actor's club (no hint that another club's exists), then 403
+ * unless the actor is its admin. The revoke action checks this before it reads the reason.
+ */
+export async function assertMayRevokeCertificate(actor: Actor, certificateId: string): Promise<void> {
+  await databaseReady();
+  const existing = await Certificate.findByPk(certificateId);
+  assertVisible(!!existing && existing.clubId === actor.clubId);
+  assertAllowed(canManageClub(actor, existing.clubId), "Only club administrators can revoke certificates.");
+}
+
+/**
  * An admin revokes a certificate with a reason (audited). A revoked module certificate no longer counts
  * as a pass, so a current clearance certificate standing on that module is revoked with it.
  */
@@ -176,10 +187,7 @@ export async function revokeCertificate(
   certificateId: string,
   reason: string,
 ): Promise<{ revoked: string[] }> {
-  await databaseReady();
-  const existing = await Certificate.findByPk(certificateId);
-  assertVisible(!!existing && existing.clubId === actor.clubId);
-  assertAllowed(canManageClub(actor, existing.clubId), "Only club administrators can revoke certificates.");
+  await assertMayRevokeCertificate(actor, certificateId);
   const now = new Date();
   const today = isoDateOf(now);
   return writeTransaction(async (transaction) => {

@@ -220,6 +220,31 @@ describe.each(actionGuardRows.map((row) => [`${row.action} in ${row.file}`, row]
   });
 });
 
+/**
+ * A caller the table refuses (401 signed out, 403 wrong role) is refused the same way when the input is
+ * malformed too: the permission is checked before the input, so a refusal never depends on (or tells
+ * anything about) what the form would have accepted.
+ */
+const refusedActionCases = actionGuardRows.flatMap((row) =>
+  guardRoles.filter((role) => row.expect[role] === 401 || row.expect[role] === 403).map((role) => [`${row.action} as ${role}`, row, role, row.expect[role]] as const),
+);
+describe.each(refusedActionCases)("%s, with malformed input", (_label, row, role, status) => {
+  it(`answers ${status} before looking at the input`, async () => {
+    const actions = (await import(/* @vite-ignore */ path.join(projectRoot, row.file))) as Record<string, (...args: unknown[]) => Promise<{ ok: boolean; message?: string }>>;
+    lastActionError.current = null;
+    const given = fixtures();
+    // The input malformed; an action addressed by an id argument (updateBoatAction's boatId, say) keeps
+    // the real one, as the record decides between 404 and 403 there.
+    const junk = { unexpected: "<not a field>", id: -1 };
+    const malformed = row.args ? [...row.args(given).slice(0, -1), junk] : [junk];
+    const headers = { cookie: cookies[role] ?? "", "x-forwarded-for": `203.0.113.${calls % 250}` };
+    const result = await withRequest(new Request(`${testOrigin}/`, { headers }), () => actions[row.action]!(...malformed));
+    const error = lastActionError.current;
+    expect(result.ok).toBe(false);
+    expect(error instanceof AppError ? error.status : 400, result.message).toBe(status);
+  });
+});
+
 describe("after every row", () => {
   it("has left the home-club records the rows aim at as they were seeded", async () => {
     const boat = (await Boat.findByPk(home.homeBoatId))!;

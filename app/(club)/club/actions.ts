@@ -1,6 +1,7 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
+import { assertMayManageClub } from "@/lib/auth/permissions";
 import { requireActor } from "@/lib/auth/session";
 import { inviteMember } from "@/lib/data/users";
 import { invitationSchema } from "@/lib/validations/members";
@@ -11,6 +12,7 @@ import { actionFailure, type ActionResult } from "@/lib/http/action-result";
 export async function inviteMemberAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
+    assertMayManageClub(actor);
     const parsed = parseActionInput(invitationSchema, input);
     if (!parsed.success) return { ok: false, message: "Check the highlighted fields.", fieldErrors: parsed.fieldErrors };
     await inviteMember(actor, parsed.data);

@@ -2,7 +2,7 @@
 
 import { revalidatePath } from "next/cache";
 import { requireActor } from "@/lib/auth/session";
-import { assertAllowed, canManageClub } from "@/lib/auth/permissions";
+import { assertAllowed, assertMayManageClub, canManageClub } from "@/lib/auth/permissions";
 import { changeMemberRole, importRoster, setMemberStatus, type RosterImportReport } from "@/lib/data/member-admin";
 import type { MemberSummary } from "@/lib/data/members";
 import { roleLabels } from "@/lib/auth/roles";
@@ -19,6 +19,7 @@ const membersPath = "/club/members";
 export async function changeMemberRoleAction(input: unknown): Promise<ActionResult<MemberSummary>> {
   try {
     const actor = await requireActor();
+    assertMayManageClub(actor);
     const parsed = parseActionInput(changeRoleSchema, input);
     if (!parsed.success) return { ok: false, message: "Choose the new role.", fieldErrors: parsed.fieldErrors };
     const { memberId, role } = parsed.data;
@@ -34,6 +35,7 @@ export async function changeMemberRoleAction(input: unknown): Promise<ActionResu
 export async function setMemberStatusAction(input: unknown): Promise<ActionResult<MemberSummary>> {
   try {
     const actor = await requireActor();
+    assertMayManageClub(actor);
     const parsed = parseActionInput(memberStatusSchema, input);
     if (!parsed.success) return { ok: false, message: "Choose a member.", fieldErrors: parsed.fieldErrors };
     const { memberId, status } = parsed.data;

@@ -1,6 +1,7 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
+import { assertMayManageClub } from "@/lib/auth/permissions";
 import { requireActor } from "@/lib/auth/session";
 import { updateClubSettings } from "@/lib/data/club-admin-settings";
 import { clubSettingsFormSchema } from "@/lib/validations/club-settings-form";
@@ -11,6 +12,7 @@ import { actionFailure, type ActionResult } from "@/lib/http/action-result";
 export async function saveClubSettingsAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
+    assertMayManageClub(actor);
     const parsed = parseActionInput(clubSettingsFormSchema, input);
     if (!parsed.success) return { ok: false, message: "Check the highlighted fields.", fieldErrors: parsed.fieldErrors };
     const { changed } = await updateClubSettings(actor, parsed.data);

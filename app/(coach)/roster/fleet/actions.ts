@@ -1,6 +1,7 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
+import { assertMayManageFleet } from "@/lib/auth/permissions";
 import { requireActor } from "@/lib/auth/session";
 import { createBoat, createOarSet, setBoatArchived, setOarSetArchived, updateBoat, updateOarSet, type SavedFleetRecord } from "@/lib/data/fleet";
 import { addRaceDay, removeRaceDay, setHumidSpell } from "@/lib/data/cleaning";
@@ -31,6 +32,7 @@ function savedMessage(what: string, saved: SavedFleetRecord): ActionResult<Saved
 export async function createBoatAction(input: unknown): Promise<ActionResult<SavedFleetRecord>> {
   try {
     const actor = await requireActor();
+    assertMayManageFleet(actor);
     const parsed = parseActionInput(boatSchema, input);
     if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: parsed.fieldErrors };
     const saved = await createBoat(actor, parsed.data);
@@ -45,6 +47,7 @@ export async function createBoatAction(input: unknown): Promise<ActionResult<Sav
 export async function updateBoatAction(boatId: unknown, input: unknown): Promise<ActionResult<SavedFleetRecord>> {
   try {
     const actor = await requireActor();
+    assertMayManageFleet(actor);
     const id = parseActionArgument("boatId", recordIdValueSchema, boatId);
     if (!id.success) return { ok: false, message: "That boat does not exist.", fieldErrors: id.fieldErrors };
     const parsed = parseActionInput(boatSchema, input);
@@ -61,6 +64,7 @@ export async function updateBoatAction(boatId: unknown, input: unknown): Promise
 export async function setBoatArchivedAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
+    assertMayManageFleet(actor);
     const parsed = parseActionInput(archiveSchema, input);
     if (!parsed.success) return { ok: false, message: "That boat does not exist.", fieldErrors: parsed.fieldErrors };
     const { id, archived } = parsed.data;
@@ -76,6 +80,7 @@ export async function setBoatArchivedAction(input: unknown): Promise<ActionResul
 export async function createOarSetAction(input: unknown): Promise<ActionResult<SavedFleetRecord>> {
   try {
     const actor = await requireActor();
+    assertMayManageFleet(actor);
     const parsed = parseActionInput(oarSetSchema, input);
     if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: parsed.fieldErrors };
     const saved = await createOarSet(actor, parsed.data);
@@ -90,6 +95,7 @@ export async function createOarSetAction(input: unknown): Promise<ActionResult<S
 export async function updateOarSetAction(oarSetId: unknown, input: unknown): Promise<ActionResult<SavedFleetRecord>> {
   try {
     const actor = await requireActor();
+    assertMayManageFleet(actor);
     const id = parseActionArgument("oarSetId", recordIdValueSchema, oarSetId);
     if (!id.success) return { ok: false, message: "That oar set does not exist.", fieldErrors: id.fieldErrors };
     const parsed = parseActionInput(oarSetSchema, input);
@@ -106,6 +112,7 @@ export async function updateOarSetAction(oarSetId: unknown, input: unknown): Pro
 export async function setOarSetArchivedAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
+    assertMayManageFleet(actor);
     const parsed = parseActionInput(archiveSchema, input);
     if (!parsed.success) return { ok: false, message: "That oar set does not exist.", fieldErrors: parsed.fieldErrors };
     const { id, archived } = parsed.data;
@@ -121,6 +128,7 @@ export async function setOarSetArchivedAction(input: unknown): Promise<ActionRes
 export async function addRaceDayAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
+    assertMayManageFleet(actor);
     const parsed = parseActionInput(raceDaySchema, input);
     if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: parsed.fieldErrors };
     await addRaceDay(actor, parsed.data.raceDay);
@@ -135,6 +143,7 @@ export async function addRaceDayAction(input: unknown): Promise<ActionResult> {
 export async function removeRaceDayAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
+    assertMayManageFleet(actor);
     const parsed = parseActionInput(removeRaceDaySchema, input);
     if (!parsed.success) return { ok: false, message: "That is not a race day.", fieldErrors: parsed.fieldErrors };
     await removeRaceDay(actor, parsed.data.raceDay);
@@ -149,6 +158,7 @@ export async function removeRaceDayAction(input: unknown): Promise<ActionResult>
 export async function setHumidSpellAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
+    assertMayManageFleet(actor);
     const parsed = parseActionInput(humidSpellSchema, input);
     if (!parsed.success) return { ok: false, message: "Choose on or off.", fieldErrors: parsed.fieldErrors };
     await setHumidSpell(actor, parsed.data.humidSpell);
@@ -166,6 +176,7 @@ export async function setHumidSpellAction(input: unknown): Promise<ActionResult>
 export async function sendDigestNowAction(...input: unknown[]): Promise<ActionResult> {
   try {
     const actor = await requireActor();
+    assertMayManageFleet(actor);
     if (input.length > 0) return { ok: false, message: "Sending the digest takes no input.", fieldErrors: { _: ["Send no input."] } };
     const { recipients, isoWeek } = await sendCleaningDigestNow(actor);
     return { ok: true, message: `Digest for ${isoWeek} sent to ${recipients} ${recipients === 1 ? "coach or admin" : "coaches and admins"}.` };

@@ -1,7 +1,7 @@
 "use server";
 
 import { requireActor } from "@/lib/auth/session";
-import { revokeCertificate } from "@/lib/data/certificates";
+import { assertMayRevokeCertificate, revokeCertificate } from "@/lib/data/certificates";
 import { revokeCertificateSchema } from "@/lib/validations/certification";
 import { uuidValueSchema } from "@/lib/validations/ids";
 import { parseActionArgument, parseActionInput } from "@/lib/validations/issues";
@@ -14,6 +14,8 @@ export async function revokeCertificateAction(certificateId: string, input: unkn
     const actor = await requireActor();
     const id = parseActionArgument("certificateId", uuidValueSchema, certificateId);
     if (!id.success) return { ok: false, message: "That certificate does not exist.", fieldErrors: id.fieldErrors };
+    // Who may revoke it is settled before the reason is read (404 for another club's, 403 for non-admins).
+    await lookUpBy("certificateId", "certificate", () => assertMayRevokeCertificate(actor, id.data));
     const parsed = parseActionInput(revokeCertificateSchema, input);
     if (!parsed.success) return { ok: false, message: "Check the highlighted fields.", fieldErrors: parsed.fieldErrors };
     const { revoked } = await lookUpBy("certificateId", "certificate", () => revokeCertificate(actor, id.data, parsed.data.reason));
