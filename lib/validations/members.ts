@@ -31,7 +31,6 @@ export const acceptInvitationSchema = z.strictObject({
   password: z
     .string()
     .min(minPasswordLength, { error: `Use at least ${minPasswordLength} characters.` })
-    .max(maxPasswordLength, { error: newPasswordTooLongMessage })
     .refine(fitsPasswordHash, { error: newPasswordTooLongMessage }),
 });
 

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { hashPassword, passwordProblem, verifyPassword } from "@/lib/auth/password";
 import { safeCallbackPath } from "@/lib/http/safe-redirect";
+import { acceptInvitationSchema } from "@/lib/validations/members";
 
 // Rules after NIST SP 800-63B (2017), 5.1.1.2: a minimum length, a check against common passwords,
 // no composition rules.
@@ -39,6 +40,9 @@ describe("password rules", () => {
     const accented = (count: number) => Array.from({ length: count }, (_, index) => String.fromCharCode(0xc0 + ((index * 7) % 64))).join("");
     expect(passwordProblem(accented(36))).toBeNull();
     expect(passwordProblem(accented(37))).toMatch(/at most 72/);
+    // The invitation form's schema says so once (a second length rule used to repeat the message).
+    const tooLong = acceptInvitationSchema.shape.password.safeParse(`${start}x`);
+    expect(tooLong.error?.issues.map((issue) => issue.message)).toEqual([expect.stringMatching(/at most 72/)]);
   });
 
   it("stores bcrypt hashes that verify only the right password", async () => {
