@@ -463,13 +463,7 @@ function readConnection(): Promise<SqliteConnection> {
  * gives them, as `sequelize.query` with QueryTypes.SELECT also did.
  */
 export async function readStatement<Row>(sql: string, values: readonly SqlValue[]): Promise<Row[]> {
-  const statement = await preparedOn(await readConnection(), sql);
-  return new Promise<Row[]>((resolve, reject) => {
-    statement.all(values, (err, rows) => {
-      if (err) reject(err);
-      else resolve(rows as Row[]);
-    });
-  });
+  return (await allOn(await readConnection(), sql, values)) as Row[];
 }
 
 /**

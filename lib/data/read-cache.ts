@@ -45,10 +45,7 @@ export function versionedReadCache<T extends object>(max: number) {
       let next = waiting.get(key);
       if (!next) {
         next = last.result
-          .then(
-            () => undefined,
-            () => undefined,
-          )
+          .catch(() => undefined)
           .then(() => {
             waiting.delete(key);
             return read(key, compute);
