@@ -1,6 +1,6 @@
 import { describeStatuses, runLoad, type LoadResult } from "../load";
 import { fixed, median, notAvailable, type Row } from "../stats";
-import { attemptQueue, type BenchContext } from "./context";
+import { attemptQueue, type BenchContext, type SubmitRounds } from "./context";
 
 export const trivialPath = "/api/bench/ping";
 /** The roster routes the bench knows; each one missing from this build prints "n/a (route not present)". */
@@ -22,17 +22,6 @@ function allOk(result: LoadResult): boolean {
 
 async function pause(): Promise<void> {
   await new Promise((resolve) => setTimeout(resolve, 1000));
-}
-
-/** The trivial route and quiz submissions, measured in alternating rounds (see `submitRounds`). */
-interface SubmitRounds {
-  trivial: LoadResult[];
-  submit: LoadResult[];
-  /** Each round's submit req/s over that round's trivial req/s. */
-  ratios: number[];
-  /** The median round's figures (by req/s), with the worst p99 of all rounds. */
-  trivialSummary: LoadResult;
-  submitSummary: LoadResult;
 }
 
 function medianRound(results: readonly LoadResult[]): LoadResult {

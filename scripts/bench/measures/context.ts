@@ -2,6 +2,17 @@ import type { Dataset, PoolAttempt } from "../dataset";
 import type { LighthouseSession, PageFigures } from "../lighthouse";
 import type { LoadResult } from "../load";
 
+/** The trivial route and quiz submissions, measured in alternating rounds (see `submitRounds` in api.ts). */
+export interface SubmitRounds {
+  trivial: LoadResult[];
+  submit: LoadResult[];
+  /** Each round's submit req/s over that round's trivial req/s. */
+  ratios: number[];
+  /** The median round's figures (by req/s), with the worst p99 of all rounds. */
+  trivialSummary: LoadResult;
+  submitSummary: LoadResult;
+}
+
 /** Everything a measure function may use; results measured once and shared (baselines) are memoised here. */
 export interface BenchContext {
   baseUrl: string;
@@ -25,7 +36,7 @@ export interface BenchContext {
   log(message: string): void;
   memo: {
     pages?: Promise<{ lesson: PageFigures; staticLesson: PageFigures; minimal: PageFigures }>;
-    submitRounds?: Promise<{ trivial: LoadResult[]; submit: LoadResult[]; ratios: number[]; trivialSummary: LoadResult; submitSummary: LoadResult }>;
+    submitRounds?: Promise<SubmitRounds>;
     roster?: Promise<LoadResult>;
   };
   /** Raw figures for bench-out/last.json. */
