@@ -38,6 +38,7 @@ export interface BenchContext {
     pages?: Promise<{ lesson: PageFigures; staticLesson: PageFigures; minimal: PageFigures }>;
     submitRounds?: Promise<SubmitRounds>;
     roster?: Promise<LoadResult>;
+    pdf?: Promise<{ certificate: { times: number[]; bytes: number }; register: { times: number[]; bytes: number } }>;
   };
   /** Raw figures for bench-out/last.json. */
   raw: Record<string, unknown>;
