@@ -4,6 +4,7 @@ import { PageTitle } from "@/components/ui/page-title";
 import { CertificateStatusBadge } from "@/components/certify/status-badge";
 import { requirePageActor } from "@/lib/auth/session";
 import { certificateForAdmin } from "@/lib/data/certificates";
+import { orNotFound } from "@/lib/http/page-not-found";
 import { formatLongDate, isoDateOf } from "@/lib/clearance/dates";
 import { RevokeCertificateForm } from "./_components/revoke-form";
 
@@ -13,7 +14,7 @@ export const metadata: Metadata = { title: "Certificate" };
 export default async function CertificatePage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const actor = await requirePageActor("admin", `/club/register/${id}`);
-  const certificate = await certificateForAdmin(actor, id);
+  const certificate = await orNotFound(certificateForAdmin(actor, id));
   return (
     <div className="space-y-6">
       <PageTitle lead={certificate.title}>Certificate {certificate.serial}</PageTitle>

@@ -5,6 +5,7 @@ import { PageTitle } from "@/components/ui/page-title";
 import { CertificateStatusBadge, ClearanceBadge, ModuleStatusBadge } from "@/components/certify/status-badge";
 import { requirePageActor } from "@/lib/auth/session";
 import { athleteRecordFor } from "@/lib/data/clearance";
+import { orNotFound } from "@/lib/http/page-not-found";
 import { formatLongDate, isoDateOf } from "@/lib/clearance/dates";
 import { SuspensionControl } from "./_components/suspension-forms";
 
@@ -33,7 +34,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
   const actor = await requirePageActor("coach", `/roster/athletes/${id}`);
   const athleteId = Number(id);
   if (!Number.isInteger(athleteId) || athleteId <= 0) notFound();
-  const record = await athleteRecordFor(actor, athleteId);
+  const record = await orNotFound(athleteRecordFor(actor, athleteId));
   const { clearance } = record.standing;
   const activeSuspension = record.suspensions.find((entry) => entry.liftedAt === null);
   const sectionClasses = "space-y-3 rounded-lg bg-white p-4 shadow-sm";

@@ -4,6 +4,7 @@ import { PageTitle } from "@/components/ui/page-title";
 import { Notice } from "@/components/ui/notice";
 import { requirePageActor } from "@/lib/auth/session";
 import { assessmentForCoach } from "@/lib/data/sign-offs";
+import { orNotFound } from "@/lib/http/page-not-found";
 import { checklistVerdictLabels } from "@/lib/clearance/checklist";
 import { formatLongDate, isoDateOf } from "@/lib/clearance/dates";
 import { AssessmentForm } from "./_components/assessment-form";
@@ -14,7 +15,7 @@ export const metadata: Metadata = { title: "Practical sign-off" };
 export default async function AssessmentPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const actor = await requirePageActor("coach", `/roster/sign-offs/${id}`);
-  const detail = await assessmentForCoach(actor, id);
+  const detail = await orNotFound(assessmentForCoach(actor, id));
   const asked = formatLongDate(isoDateOf(new Date(detail.requestedAt)));
   return (
     <div className="space-y-6">
