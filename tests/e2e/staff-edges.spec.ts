@@ -16,4 +16,34 @@ test.describe("coach and admin edges", () => {
     await expect(admin.getByRole("heading", { level: 1 })).toHaveText("Not found");
     await adminContext.close();
   });
+
+  test("a coach whose page is stale when another coach suspends sees the suspension after the refusal", async ({
+    browser,
+  }) => {
+    const first = await signedInContext(browser, demo.coach);
+    const second = await signedInContext(browser, "coach.ines@lantern-reach.example");
+    await first.page.goto("/roster");
+    await first.page.getByRole("link", { name: "Femi Ashdown" }).click();
+    await expect(first.page.getByTestId("athlete-clearance-state")).toContainText("May rig unsupervised");
+    const athletePath = new URL(first.page.url()).pathname;
+    await second.page.goto(athletePath);
+    await expect(second.page.getByTestId("athlete-clearance-state")).toContainText("May rig unsupervised");
+
+    await first.page.getByLabel("Reason for suspending").fill("Clamp screw left loose on the rack");
+    await first.page.getByRole("button", { name: "Suspend clearance" }).click();
+    await expect(first.page.getByTestId("athlete-clearance-state")).toContainText("Suspended by a coach");
+
+    // The second coach's page still offers to suspend: the refusal must also show the real state.
+    await second.page.getByLabel("Reason for suspending").fill("Also saw the loose screw");
+    await second.page.getByRole("button", { name: "Suspend clearance" }).click();
+    await expect(second.page.getByTestId("suspension-status")).toContainText("already suspended");
+    await expect(second.page.getByTestId("athlete-clearance-state")).toContainText("Suspended by a coach");
+    await expect(second.page.getByTestId("athlete-clearance")).toContainText("Clamp screw left loose on the rack");
+
+    // Put the demo athlete back as the other specs expect her.
+    await second.page.getByRole("button", { name: "Lift the suspension" }).click();
+    await expect(second.page.getByTestId("athlete-clearance-state")).toContainText("May rig unsupervised");
+    await first.context.close();
+    await second.context.close();
+  });
 });

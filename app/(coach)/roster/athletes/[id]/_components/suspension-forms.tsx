@@ -52,8 +52,9 @@ function SuspendClearanceForm({
   const onSubmit = form.handleSubmit(async (values) => {
     const outcome = await suspendClearanceAction(athleteId, values);
     onDone(outcome);
-    if (outcome.ok) router.refresh();
-    else if (outcome.fieldErrors.reason) form.setError("reason", { message: outcome.fieldErrors.reason[0] });
+    if (!outcome.ok && outcome.fieldErrors.reason) form.setError("reason", { message: outcome.fieldErrors.reason[0] });
+    // Also after a refusal: another coach may have suspended meanwhile, and this page must not keep showing a clearance.
+    else router.refresh();
   });
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-3" data-testid="suspend-form">
@@ -85,7 +86,9 @@ function LiftSuspensionForm({
   const onSubmit = form.handleSubmit(async (values) => {
     const outcome = await liftSuspensionAction(athleteId, values);
     onDone(outcome);
-    if (outcome.ok) router.refresh();
+    if (!outcome.ok && outcome.fieldErrors.note) form.setError("note", { message: outcome.fieldErrors.note[0] });
+    // Also after a refusal: another coach may have lifted it meanwhile.
+    else router.refresh();
   });
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-3" data-testid="lift-form">
