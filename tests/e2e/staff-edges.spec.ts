@@ -1,5 +1,5 @@
 import { expect, test } from "@playwright/test";
-import { demo, signedInContext } from "./support/auth";
+import { demo, signIn, signedInContext } from "./support/auth";
 
 /** Edges of the coach's and the administrator's pages: stale links, stale pages, stale messages. */
 test.describe("coach and admin edges", () => {
@@ -45,5 +45,21 @@ test.describe("coach and admin edges", () => {
     await expect(second.page.getByTestId("athlete-clearance-state")).toContainText("May rig unsupervised");
     await first.context.close();
     await second.context.close();
+  });
+
+  test("the invitation form drops the last answer when the next try fails its own check", async ({ page }) => {
+    await signIn(page, demo.admin);
+    await page.goto("/club");
+    const form = page.getByTestId("invite-form");
+    await form.getByLabel("Name").fill("Ada Again");
+    await form.getByLabel("E-mail").fill(demo.athlete);
+    await form.getByRole("button", { name: "Send invitation" }).click();
+    await expect(page.getByTestId("invite-status")).toContainText("already a member");
+
+    await form.getByLabel("Name").fill("Someone New");
+    await form.getByLabel("E-mail").fill("not-an-address");
+    await form.getByRole("button", { name: "Send invitation" }).click();
+    await expect(form.getByText("Enter an e-mail address like name@example.org.")).toBeVisible();
+    await expect(page.getByTestId("invite-status")).not.toContainText("already a member");
   });
 });

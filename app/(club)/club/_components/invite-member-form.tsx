@@ -20,7 +20,7 @@ export function InviteMemberForm() {
   });
   const { errors, isSubmitting } = form.formState;
 
-  const onSubmit = form.handleSubmit(async (values) => {
+  const submit = form.handleSubmit(async (values) => {
     const outcome = await inviteMemberAction(values);
     setResult(outcome);
     if (outcome.ok) form.reset();
@@ -29,6 +29,11 @@ export function InviteMemberForm() {
         if (field === "email" || field === "name" || field === "role") form.setError(field, { message: messages[0] });
       }
   });
+  // Drop the last answer first: it spoke of the previous entry, even when this one fails its own check.
+  const onSubmit = (event: React.FormEvent<HTMLFormElement>) => {
+    setResult(null);
+    return submit(event);
+  };
 
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-4 sm:grid-cols-2" data-testid="invite-form">
