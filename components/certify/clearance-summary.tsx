@@ -1,7 +1,7 @@
 import Link from "next/link";
 import type { Actor } from "@/lib/auth/permissions";
 import { clearanceOf } from "@/lib/data/clearance";
-import { formatLongDate } from "@/lib/clearance/dates";
+import { formatLongDate, lastValidDay } from "@/lib/clearance/dates";
 import { ClearanceBadge } from "@/components/certify/status-badge";
 
 /** The athlete's "may rig unsupervised" state with what is still missing, for the learning page. */
@@ -25,7 +25,8 @@ export async function ClearanceSummary({ actor }: { actor: Actor }) {
       </div>
       {clearance.state === "cleared" && clearance.expiresOn && (
         <p>
-          You may rig your own oars within the club&apos;s limits until {formatLongDate(clearance.expiresOn)}.
+          You may rig your own oars within the club&apos;s limits up to and including{" "}
+          {formatLongDate(lastValidDay(clearance.expiresOn))}.
           Check every collar and screw before each outing.
         </p>
       )}

@@ -1,4 +1,4 @@
-import { daysBetweenIso, isoDateToDayNumber } from "@/lib/care/dates";
+import { addDaysIso, daysBetweenIso, isoDateToDayNumber } from "@/lib/care/dates";
 
 /** The calendar date (UTC) of an instant, YYYY-MM-DD. Slipway keeps every certification date in UTC. */
 export function isoDateOf(instant: Date): string {
@@ -35,4 +35,12 @@ const longDate = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "long
 /** A date for people: "14 March 2027". */
 export function formatLongDate(isoDate: string): string {
   return longDate.format(new Date(`${isoDate}T00:00:00Z`));
+}
+
+/**
+ * The last day something that expires on `expiresOn` still counts: the day before, since `expiresOn` is
+ * the first day it no longer does. Say "up to and including" this day, never "until" the expiry day.
+ */
+export function lastValidDay(expiresOn: string): string {
+  return addDaysIso(expiresOn, -1);
 }

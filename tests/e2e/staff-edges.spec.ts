@@ -47,6 +47,23 @@ test.describe("coach and admin edges", () => {
     await second.context.close();
   });
 
+  test("a coach reads the last day a clearance holds, never 'until' the day it has already run out", async ({
+    page,
+  }) => {
+    // Greta (lib/seed/demo-certification.ts) is cleared; her first pass expires within 30 days.
+    await signIn(page, demo.coach);
+    await page.goto("/roster");
+    const row = page.getByRole("row", { name: /Greta Quennell/ });
+    await expect(row).toContainText("May rig unsupervised");
+    await expect(row).toContainText(/expires \d{1,2} \w+ \d{4}/);
+    await expect(row).not.toContainText("until");
+
+    await row.getByRole("link", { name: "Greta Quennell" }).click();
+    const clearance = page.getByTestId("athlete-clearance");
+    await expect(clearance).toContainText(/Cleared up to and including (\d{1,2} \w+ \d{4}): the first required pass expires on/);
+    await expect(clearance).not.toContainText("until");
+  });
+
   test("the invitation form drops the last answer when the next try fails its own check", async ({ page }) => {
     await signIn(page, demo.admin);
     await page.goto("/club");

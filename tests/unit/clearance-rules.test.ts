@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { addMonthsIso, daysUntil, formatLongDate, isoDateOf } from "@/lib/clearance/dates";
+import { addMonthsIso, daysUntil, formatLongDate, isoDateOf, lastValidDay } from "@/lib/clearance/dates";
 import {
   clearanceFor,
   expiresWithin,
@@ -33,6 +33,15 @@ describe("dates", () => {
     expect(daysUntil("2026-12-31", "2027-01-30")).toBe(30);
     expect(isoDateOf(new Date("2026-06-30T23:59:59Z"))).toBe("2026-06-30");
     expect(formatLongDate("2027-03-14")).toBe("14 March 2027");
+  });
+
+  it("names the last day a pass counts: the day before it expires", () => {
+    const pass = { moduleSlug: "overall-length", signedOffOn: "2025-12-16", expiresOn: "2026-12-16" };
+    expect(lastValidDay(pass.expiresOn)).toBe("2026-12-15");
+    expect(isPassCurrent(pass, lastValidDay(pass.expiresOn))).toBe(true);
+    expect(isPassCurrent(pass, pass.expiresOn)).toBe(false);
+    expect(lastValidDay("2027-03-01")).toBe("2027-02-28");
+    expect(lastValidDay("2027-01-01")).toBe("2026-12-31");
   });
 });
 

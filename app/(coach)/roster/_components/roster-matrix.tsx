@@ -129,7 +129,7 @@ export function RosterMatrixView() {
             <span className="flex flex-col items-start gap-1">
               <ClearanceBadge state={clearance.state} />
               {clearance.state === "cleared" && clearance.expiresOn && (
-                <span className="text-xs text-slate-700">until {shortDate(clearance.expiresOn)}</span>
+                <span className="text-xs text-slate-700">expires {shortDate(clearance.expiresOn)}</span>
               )}
               {clearance.suspendedReason && (
                 <span className="max-w-48 text-xs text-slate-700">{clearance.suspendedReason}</span>
@@ -158,7 +158,7 @@ export function RosterMatrixView() {
                   label={rosterCellLabels[cell.status]}
                 />
                 {cell.expiresOn && (
-                  <span className="text-xs text-slate-700">until {shortDate(cell.expiresOn)}</span>
+                  <span className="text-xs text-slate-700">expires {shortDate(cell.expiresOn)}</span>
                 )}
               </span>
             );

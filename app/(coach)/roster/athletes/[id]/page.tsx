@@ -6,7 +6,7 @@ import { CertificateStatusBadge, ClearanceBadge, ModuleStatusBadge } from "@/com
 import { requirePageActor } from "@/lib/auth/session";
 import { athleteRecordFor } from "@/lib/data/clearance";
 import { orNotFound } from "@/lib/http/page-not-found";
-import { formatLongDate, isoDateOf } from "@/lib/clearance/dates";
+import { formatLongDate, isoDateOf, lastValidDay } from "@/lib/clearance/dates";
 import { SuspensionControl } from "./_components/suspension-forms";
 
 export const metadata: Metadata = { title: "Athlete" };
@@ -55,7 +55,10 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
           <ClearanceBadge state={clearance.state} testId="athlete-clearance-state" />
         </div>
         {clearance.state === "cleared" && clearance.expiresOn && (
-          <p>Cleared until {formatLongDate(clearance.expiresOn)} (when the first required pass expires).</p>
+          <p>
+            Cleared up to and including {formatLongDate(lastValidDay(clearance.expiresOn))}: the first required
+            pass expires on {formatLongDate(clearance.expiresOn)}.
+          </p>
         )}
         {clearance.missingModules.length > 0 && (
           <p>
