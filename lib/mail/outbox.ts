@@ -2,6 +2,7 @@ import "server-only";
 import fs from "node:fs/promises";
 import path from "node:path";
 import { outboxDir } from "@/lib/env";
+import { sentAtOfOutboxId } from "@/lib/mail/outbox-names";
 
 export interface OutboxMessage {
   id: string;
@@ -29,7 +30,7 @@ function toMessage(id: string, stored: StoredJsonMail): OutboxMessage {
     to,
     subject: stored.subject ?? "(no subject)",
     text: stored.text ?? "",
-    sentAt: stored.date ?? "",
+    sentAt: stored.date ?? sentAtOfOutboxId(id) ?? "",
     attachments: (stored.attachments ?? []).map((file) => file.filename ?? "attachment"),
   };
 }

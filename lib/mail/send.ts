@@ -4,6 +4,7 @@ import path from "node:path";
 import { randomUUID } from "node:crypto";
 import nodemailer from "nodemailer";
 import { isDemoMail, outboxDir } from "@/lib/env";
+import { outboxMessageId } from "@/lib/mail/outbox-names";
 
 export interface OutgoingMail {
   to: string;
@@ -27,7 +28,7 @@ export async function sendMail(mail: OutgoingMail): Promise<void> {
   }
   const transport = nodemailer.createTransport({ jsonTransport: true });
   const info = await transport.sendMail({ from: fromAddress, ...mail });
-  const id = `${new Date().toISOString().replace(/[:.]/g, "-")}-${randomUUID().slice(0, 8)}`;
+  const id = outboxMessageId(new Date(), randomUUID().slice(0, 8));
   const file = path.join(outboxDir(), `${id}.json`);
   await fs.writeFile(file, String(info.message), "utf8");
 }

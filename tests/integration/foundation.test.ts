@@ -311,8 +311,11 @@ describe("accounts and invitations", () => {
     await expect(taken).rejects.toMatchObject({ fieldErrors: { email: ["Already a member."] } });
 
     await inviteMember(admin, { email: "Rowan.New@lantern-reach.example", name: "Rowan New", role: "athlete" });
+    const before = Date.now();
     const [mail] = await listOutbox();
     expect(mail?.to).toBe("rowan.new@lantern-reach.example");
+    // The outbox list shows when each message was written (the JSON transport stores no date).
+    expect(Math.abs(Date.parse(mail!.sentAt) - before)).toBeLessThan(60_000);
     const token = /\/invite\/(\S+)/.exec(mail!.text)?.[1];
     expect(token).toBeTruthy();
     expect(await findPendingInvitation(token!)).toMatchObject({ email: "rowan.new@lantern-reach.example", role: "athlete" });

@@ -25,7 +25,8 @@ export default async function OutboxPage() {
               <Link href={`/club/outbox/${message.id}`} className="block min-h-11 px-4 py-3 hover:bg-river-50">
                 <span className="block font-semibold">{message.subject}</span>
                 <span className="block text-sm text-slate-700">
-                  To {message.to} · {message.sentAt ? new Date(message.sentAt).toLocaleString("en-GB") : ""}
+                  To {message.to}
+                  {message.sentAt && ` · ${new Date(message.sentAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" })} UTC`}
                 </span>
               </Link>
             </li>
