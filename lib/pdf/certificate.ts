@@ -1,7 +1,7 @@
 import { PDFDocument, degrees, rgb, type PDFFont, type PDFImage, type PDFPage } from "pdf-lib";
 import QRCode from "qrcode";
 import type { FontBytes } from "@/lib/pdf/fonts";
-import { embedPlainFont, fitText, textWidth, wrapCharacters, wrapText } from "@/lib/pdf/text";
+import { embedPlainFont, fitText, fitTextShrinking, textWidth, wrapCharacters, wrapText } from "@/lib/pdf/text";
 import { formatLongDate } from "@/lib/clearance/dates";
 
 /** A4 in PDF points. */
@@ -154,7 +154,8 @@ export async function renderCertificatePdf(
   y -= 52;
   centred(page, "awarded to", regular, 12, y, muted);
   y -= 40;
-  centred(page, fitText(bold, input.athleteName, 30, right - left), bold, 30, y);
+  const name = fitTextShrinking(bold, input.athleteName, 30, 16, right - left);
+  centred(page, name.text, bold, name.size, y);
   y -= 38;
   const statement =
     input.kind === "module"
@@ -211,10 +212,11 @@ export async function renderCertificatePdf(
       borderWidth: 0.75,
     });
     page.drawText(label, { x: x + 10, y: top - 16, size: 8.5, font: regular, color: muted });
-    page.drawText(fitText(bold, value, 13, boxWidth - 20), {
+    const fitted = fitTextShrinking(bold, value, 13, 9, boxWidth - 20);
+    page.drawText(fitted.text, {
       x: x + 10,
       y: top - 35,
-      size: 13,
+      size: fitted.size,
       font: bold,
       color: ink,
     });

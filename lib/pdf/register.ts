@@ -1,6 +1,6 @@
 import { PDFDocument, rgb, type PDFFont, type PDFPage } from "pdf-lib";
 import type { FontBytes } from "@/lib/pdf/fonts";
-import { embedPlainFont, fitText, textWidth } from "@/lib/pdf/text";
+import { embedPlainFont, fitText, textWidth, wrapTextLines } from "@/lib/pdf/text";
 import { pageLabel, paginate, rowsPerPage } from "@/lib/pdf/pagination";
 
 /** A4 landscape in PDF points: the register's columns need the width. */
@@ -35,6 +35,8 @@ const titleBlockHeight = 46;
 const columnHeaderHeight = 20;
 const rowHeight = 22;
 const cellSize = 8.5;
+/** Two lines of this size fit a row. */
+const wrappedCellSize = 7;
 
 interface Column {
   header: string;
@@ -106,6 +108,22 @@ function drawHeader(page: PDFPage, input: RegisterPdfInput, regular: PDFFont, bo
 }
 
 /**
+ * One cell on one line; a text too wide for it (a long name or title) goes onto two smaller lines
+ * rather than being cut, and only what does not fit even then ends in an ellipsis.
+ */
+function drawCell(page: PDFPage, font: PDFFont, text: string, x: number, rowTop: number, maxWidth: number): void {
+  if (textWidth(font, text, cellSize) <= maxWidth) {
+    page.drawText(text, { x, y: rowTop - 14.5, size: cellSize, font, color: ink });
+    return;
+  }
+  const lines = wrapTextLines(font, text, wrappedCellSize, maxWidth, 2);
+  const baselines = lines.length === 1 ? [rowTop - 14] : [rowTop - 9.5, rowTop - 18];
+  lines.forEach((line, index) =>
+    page.drawText(line, { x, y: baselines[index]!, size: wrappedCellSize, font, color: ink }),
+  );
+}
+
+/**
  * The paper induction register: A4 landscape pages, the title block and column header repeated on
  * every page, "Page n of m" in the footer, and an empty signature cell on each row. Fonts are embedded
  * once for the whole document (a 500-row register renders well under a second).
@@ -144,13 +162,7 @@ export async function renderRegisterPdf(input: RegisterPdfInput, fonts: FontByte
         });
       let x = margin.left;
       for (const column of columns) {
-        page.drawText(fitText(regular, column.value(row), cellSize, column.width - 8), {
-          x: x + 4,
-          y: y - 14.5,
-          size: cellSize,
-          font: regular,
-          color: ink,
-        });
+        drawCell(page, regular, column.value(row), x + 4, y, column.width - 8);
         x += column.width;
       }
       page.drawLine({

@@ -91,6 +91,32 @@ export function fitText(font: PDFFont, text: string, size: number, maxWidth: num
   return low === 0 ? ellipsis : characters.slice(0, low).join("").trimEnd() + ellipsis;
 }
 
+/**
+ * The largest size from `size` down to `minSize` (in half points) at which the text fits `maxWidth` on
+ * one line; only a text too wide even at `minSize` is cut with an ellipsis. For names, which must not be cut.
+ */
+export function fitTextShrinking(
+  font: PDFFont,
+  text: string,
+  size: number,
+  minSize: number,
+  maxWidth: number,
+): { text: string; size: number } {
+  for (let candidate = size; candidate >= minSize; candidate -= 0.5) {
+    if (textWidth(font, text, candidate) <= maxWidth) return { text, size: candidate };
+  }
+  return { text: fitText(font, text, minSize, maxWidth), size: minSize };
+}
+
+/** At most `maxLines` wrapped lines; what does not fit goes onto the last one, cut with an ellipsis. */
+export function wrapTextLines(font: PDFFont, text: string, size: number, maxWidth: number, maxLines: number): string[] {
+  const lines = wrapText(font, text, size, maxWidth);
+  if (lines.length <= maxLines) return lines;
+  const kept = lines.slice(0, maxLines - 1);
+  const rest = text.split(/\s+/).filter(Boolean).slice(kept.join(" ").split(/\s+/).filter(Boolean).length).join(" ");
+  return [...kept, fitText(font, rest, size, maxWidth)];
+}
+
 /** Words wrapped into lines no wider than `maxWidth`; a single over-long word is cut to fit. */
 export function wrapText(font: PDFFont, text: string, size: number, maxWidth: number): string[] {
   const lines: string[] = [];

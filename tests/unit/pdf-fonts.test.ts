@@ -165,6 +165,28 @@ describe("PDF fonts", () => {
     }
   });
 
+  it("prints a long name whole, on the certificate and in the register, instead of cutting it", async () => {
+    // Invented; 37 characters, the kind of double-barrelled name a club meets.
+    const longName = "Alexandra Konstantinopoulou-Whitfield";
+    const longCoach = "Bartholomew Fitzwilliam-Ashcombe";
+    const certificate = await renderCertificatePdf(
+      { ...international, athleteName: longName, coachName: longCoach },
+      await pdfFonts(),
+    );
+    expect(extractedLines(certificate)).toEqual(expect.arrayContaining([longName, longCoach]));
+    const register = await renderRegisterPdf(
+      {
+        ...internationalRegister,
+        rows: [{ ...internationalRegister.rows[0]!, athleteName: longName, signedOffByName: longCoach }],
+      },
+      await pdfFonts(),
+    );
+    // The register may wrap a long name over the row's two lines; every word must be there, uncut.
+    const text = execFileSync("pdftotext", ["-layout", writePdf(register), "-"], { encoding: "utf8" });
+    expect(text).not.toContain("…");
+    for (const word of [...longName.split(" "), ...longCoach.split(" ")]) expect(text).toContain(word);
+  });
+
   it("draws the certificate and the register exactly as whole faces would", async () => {
     const fonts = await pdfFonts();
     const render = async (wholeFaces: boolean) => {
