@@ -47,6 +47,28 @@ test.describe("coach and admin edges", () => {
     await second.context.close();
   });
 
+  test("an admin's stale certificate page shows the revocation after the refusal", async ({ browser }) => {
+    const { context, page: first } = await signedInContext(browser, demo.admin);
+    await first.goto("/club/register");
+    // Lena's (lib/seed/demo-certification.ts) long-expired grip-cleaning pass: no other spec reads it.
+    await first.getByRole("row", { name: /Lena Fairbrother.*Cleaning the grips/ }).getByRole("link").click();
+    await expect(first.getByTestId("certificate-status")).toContainText("Expired");
+    const second = await context.newPage();
+    await second.goto(first.url());
+    await expect(second.getByTestId("certificate-status")).toContainText("Expired");
+
+    await first.getByLabel("Reason for revoking").fill("Issued against the wrong athlete");
+    await first.getByRole("button", { name: "Revoke certificate" }).click();
+    await expect(first.getByTestId("certificate-status")).toContainText("Revoked");
+
+    await second.getByLabel("Reason for revoking").fill("Issued against the wrong athlete");
+    await second.getByRole("button", { name: "Revoke certificate" }).click();
+    await expect(second.getByTestId("revoke-status")).toContainText("already revoked");
+    await expect(second.getByTestId("certificate-status")).toContainText("Revoked");
+    await expect(second.getByTestId("revoke-form")).toHaveCount(0);
+    await context.close();
+  });
+
   test("a coach reads the last day a clearance holds, never 'until' the day it has already run out", async ({
     page,
   }) => {

@@ -34,8 +34,9 @@ export function RevokeCertificateForm({
   const onSubmit = form.handleSubmit(async (values) => {
     const outcome = await revokeCertificateAction(certificateId, values);
     setResult(outcome);
-    if (outcome.ok) router.refresh();
-    else if (outcome.fieldErrors.reason) form.setError("reason", { message: outcome.fieldErrors.reason[0] });
+    if (!outcome.ok && outcome.fieldErrors.reason) form.setError("reason", { message: outcome.fieldErrors.reason[0] });
+    // Also after a refusal: it may have been revoked meanwhile, and the page must not keep calling it valid.
+    else router.refresh();
   });
   const status = (
     <LiveStatus testId="revoke-status">
