@@ -239,8 +239,10 @@ export async function renderCertificatePdf(
     page.drawText(line, { x: textX, y: urlY, size: 9.5, font: regular, color: ink });
     urlY -= 13;
   }
+  // A clearance can also be suspended by a coach, and its page then says so.
+  const states = input.kind === "clearance" ? "valid, expired, suspended or revoked" : "valid, expired or revoked";
   page.drawText(
-    "Scan the code or type the address. The page shows whether it is valid, expired or revoked.",
+    `Scan the code or type the address. The page shows whether it is ${states}.`,
     {
       x: textX,
       y: urlY - 6,
@@ -248,6 +250,7 @@ export async function renderCertificatePdf(
       font: regular,
       color: muted,
       maxWidth: right - textX,
+      lineHeight: 10.5,
     },
   );
 

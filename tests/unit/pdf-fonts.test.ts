@@ -187,6 +187,15 @@ describe("PDF fonts", () => {
     for (const word of [...longName.split(" "), ...longCoach.split(" ")]) expect(text).toContain(word);
   });
 
+  it("tells the reader of a clearance certificate that its page can also say suspended", async () => {
+    const fonts = await pdfFonts();
+    const text = (bytes: Uint8Array) => extractedLines(bytes).join(" ");
+    expect(text(await renderCertificatePdf({ ...international, kind: "clearance" }, fonts))).toContain(
+      "whether it is valid, expired, suspended or revoked",
+    );
+    expect(text(await renderCertificatePdf(international, fonts))).toContain("whether it is valid, expired or revoked.");
+  });
+
   it("draws the certificate and the register exactly as whole faces would", async () => {
     const fonts = await pdfFonts();
     const render = async (wholeFaces: boolean) => {
