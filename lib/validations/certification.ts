@@ -128,6 +128,23 @@ export function registerQuerySchemaFor(moduleSlugs: readonly string[]) {
     });
 }
 
+/**
+ * Why the register page's filters would be refused by its downloads (`registerQuerySchemaFor`), in
+ * the page's own words; empty when the CSV and PDF links will answer. The page itself is lenient.
+ */
+export function registerDownloadProblems(filter: RegisterFilter, moduleSlugs: readonly string[]): string[] {
+  const query = Object.fromEntries(Object.entries(filter).filter(([, value]) => value !== "" && value !== "all"));
+  const parsed = registerQuerySchemaFor(moduleSlugs).safeParse(query);
+  if (parsed.success) return [];
+  return parsed.error.issues.map((issue) =>
+    issue.path[0] === "to"
+      ? "“Issued to” is before “Issued from”: swap the two dates."
+      : issue.path[0] === "module"
+        ? "The course has no such module: choose one from the list."
+        : `The filter “${String(issue.path[0])}” is not one the register knows.`,
+  );
+}
+
 export const certificateIdParamSchema = z.strictObject({ id: z.uuid({ error: "not a certificate id" }) });
 export const signOffIdParamSchema = z.strictObject({ id: z.uuid({ error: "not a sign-off id" }) });
 export const evidenceIdParamSchema = z.strictObject({ id: z.uuid({ error: "not a photo id" }) });

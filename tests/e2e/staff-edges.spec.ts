@@ -69,6 +69,28 @@ test.describe("coach and admin edges", () => {
     await context.close();
   });
 
+  test("register filters with the dates swapped say so instead of offering downloads that fail", async ({ page }) => {
+    await signIn(page, demo.admin);
+    await page.goto("/club/register");
+    const filters = page.getByTestId("register-filters");
+    await filters.getByLabel("Issued from").fill("2026-12-01");
+    await filters.getByLabel("Issued to").fill("2026-11-01");
+    await filters.getByRole("button", { name: "Show" }).click();
+    await expect(page.getByTestId("register-filter-problem")).toContainText(
+      "“Issued to” is before “Issued from”",
+    );
+    await expect(page.getByRole("link", { name: "Print-ready PDF" })).toHaveCount(0);
+    await expect(page.getByRole("link", { name: "Download CSV" })).toHaveCount(0);
+
+    // Good filters keep both downloads, and they answer.
+    await filters.getByLabel("Issued to").fill("2099-12-31");
+    await filters.getByRole("button", { name: "Show" }).click();
+    const pdf = page.getByRole("link", { name: "Print-ready PDF" });
+    await expect(pdf).toBeVisible();
+    const response = await page.request.get((await pdf.getAttribute("href"))!);
+    expect(response.status()).toBe(200);
+  });
+
   test("a coach reads the last day a clearance holds, never 'until' the day it has already run out", async ({
     page,
   }) => {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import {
   assessmentSchemaFor,
+  registerDownloadProblems,
   registerFilterSchema,
   rosterQuerySchema,
   signOffRequestSchema,
@@ -95,6 +96,19 @@ describe("other certification inputs", () => {
       from: "2026-01-01",
       to: "",
     });
+  });
+
+  it("says which register filters its downloads would refuse, in the page's words", () => {
+    const slugs = ["overall-length", "setting-inboard"];
+    const filter = (input: Record<string, string>) => registerFilterSchema.parse(input);
+    expect(registerDownloadProblems(filter({}), slugs)).toEqual([]);
+    expect(registerDownloadProblems(filter({ module: "overall-length", from: "2026-01-01", to: "2026-01-01" }), slugs)).toEqual([]);
+    expect(registerDownloadProblems(filter({ from: "2026-12-01", to: "2026-11-01" }), slugs)).toEqual([
+      "“Issued to” is before “Issued from”: swap the two dates.",
+    ]);
+    expect(registerDownloadProblems(filter({ module: "no-such-module" }), slugs)).toEqual([
+      "The course has no such module: choose one from the list.",
+    ]);
   });
 });
 

@@ -6,7 +6,8 @@ import { requirePageActor } from "@/lib/auth/session";
 import { registerFor } from "@/lib/data/register";
 import { listModules } from "@/lib/content/modules";
 import { certificateStatusLabels } from "@/lib/certificates/status";
-import { queryObject, registerFilterSchema, registerStatuses } from "@/lib/validations/certification";
+import { Notice } from "@/components/ui/notice";
+import { queryObject, registerDownloadProblems, registerFilterSchema, registerStatuses } from "@/lib/validations/certification";
 
 export const metadata: Metadata = { title: "Induction register" };
 
@@ -26,6 +27,7 @@ export default async function RegisterPage({
     Object.entries(filter).filter(([, value]) => value !== "" && value !== "all"),
   ).toString();
   const suffix = query ? `?${query}` : "";
+  const problems = registerDownloadProblems(filter, modules.map((meta) => meta.slug));
 
   return (
     <div className="space-y-6">
@@ -116,19 +118,28 @@ export default async function RegisterPage({
         <p className="mr-auto" role="status">
           {register.entries.length} certificates · {register.summary}
         </p>
-        <a
-          href={`/api/register/csv${suffix}`}
-          className="inline-flex min-h-11 items-center rounded-md border border-river-700 px-4 font-semibold text-river-800 hover:bg-river-100"
-        >
-          Download CSV
-        </a>
-        <a
-          href={`/api/register/pdf${suffix}`}
-          className="inline-flex min-h-11 items-center rounded-md border border-river-700 px-4 font-semibold text-river-800 hover:bg-river-100"
-        >
-          Print-ready PDF
-        </a>
+        {problems.length === 0 && (
+          <>
+            <a
+              href={`/api/register/csv${suffix}`}
+              className="inline-flex min-h-11 items-center rounded-md border border-river-700 px-4 font-semibold text-river-800 hover:bg-river-100"
+            >
+              Download CSV
+            </a>
+            <a
+              href={`/api/register/pdf${suffix}`}
+              className="inline-flex min-h-11 items-center rounded-md border border-river-700 px-4 font-semibold text-river-800 hover:bg-river-100"
+            >
+              Print-ready PDF
+            </a>
+          </>
+        )}
       </div>
+      {problems.length > 0 && (
+        <Notice tone="error" title="Check the filters" testId="register-filter-problem">
+          {problems.join(" ")}
+        </Notice>
+      )}
 
       {register.entries.length === 0 ? (
         <p data-testid="register-empty">No certificates match these filters.</p>
