@@ -170,7 +170,7 @@ async function updateCalendar(
   actor: Actor,
   change: (current: { raceDays: string[]; humidSpell: boolean }) => { raceDays: string[]; humidSpell: boolean },
   action: string,
-): Promise<{ raceDays: string[]; humidSpell: boolean }> {
+): Promise<{ raceDays: string[]; humidSpell: boolean; changed: boolean }> {
   await databaseReady();
   assertAllowed(canManageFleet(actor, actor.clubId), "Only coaches and administrators change the race days and humid spell.");
   return writeTransaction(async (transaction) => {
@@ -181,14 +181,14 @@ async function updateCalendar(
     const raceDays = [...new Set(next.raceDays)].sort();
     const unchanged = next.humidSpell === settings.humidSpell && raceDays.join() === [...settings.raceDays].sort().join();
     // Adding a day already there, removing one that is not, or setting the spell as it is: nothing to write or audit.
-    if (unchanged) return { raceDays, humidSpell: next.humidSpell };
+    if (unchanged) return { raceDays, humidSpell: next.humidSpell, changed: false };
     // Only these two keys change; every other stored setting is kept as it was.
     await club.update({ settings: { ...club.settings, raceDays, humidSpell: next.humidSpell } }, { transaction });
     await recordAudit(
       { clubId: actor.clubId, actorId: actor.id, action, subjectType: "club", subjectId: club.id, details: { raceDays, humidSpell: next.humidSpell } },
       transaction,
     );
-    return { raceDays, humidSpell: next.humidSpell };
+    return { raceDays, humidSpell: next.humidSpell, changed: true };
   });
 }
 

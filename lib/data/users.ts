@@ -118,8 +118,12 @@ export interface InvitationInput {
   role: Role;
 }
 
-/** An admin invites someone to their club; the invitation link arrives by e-mail. */
-export async function inviteMember(actor: Actor, input: InvitationInput): Promise<{ invitationId: number }> {
+/**
+ * An admin invites someone to their club; the invitation link arrives by e-mail. An invitation to the
+ * same address that is still open is withdrawn in the same write (its link stops working), so a second
+ * try with another role or a corrected name is the one that counts; `replaced` says whether there was one.
+ */
+export async function inviteMember(actor: Actor, input: InvitationInput): Promise<{ invitationId: number; replaced: boolean }> {
   await databaseReady();
   assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators can invite members.");
   const email = normaliseEmail(input.email);
@@ -129,7 +133,12 @@ export async function inviteMember(actor: Actor, input: InvitationInput): Promis
   const club = await Club.findByPk(actor.clubId);
   if (!club) throw new NotFoundError();
   const token = newToken();
-  const invitation = await writeTransaction(async (transaction) => {
+  const { invitation, replaced } = await writeTransaction(async (transaction) => {
+    const now = new Date();
+    const [withdrawn] = await Invitation.update(
+      { expiresAt: now },
+      { where: { clubId: actor.clubId, email, acceptedAt: null, expiresAt: { [Op.gt]: now } }, transaction },
+    );
     const created = await Invitation.create(
       {
         clubId: actor.clubId,
@@ -143,13 +152,20 @@ export async function inviteMember(actor: Actor, input: InvitationInput): Promis
       { transaction },
     );
     await recordAudit(
-      { clubId: actor.clubId, actorId: actor.id, action: "member.invited", subjectType: "invitation", subjectId: created.id, details: { email, role: input.role } },
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action: "member.invited",
+        subjectType: "invitation",
+        subjectId: created.id,
+        details: { email, role: input.role, ...(withdrawn > 0 ? { replacedOpenInvitations: withdrawn } : {}) },
+      },
       transaction,
     );
-    return created;
+    return { invitation: created, replaced: withdrawn > 0 };
   });
   await sendInvitationMail({ to: email, name: input.name.trim(), inviterName: actor.name, clubName: club.name, token });
-  return { invitationId: invitation.id };
+  return { invitationId: invitation.id, replaced };
 }
 
 function sendInvitationMail(mail: { to: string; name: string; inviterName: string; clubName: string; token: string }) {

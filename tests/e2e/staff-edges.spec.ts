@@ -1,5 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { demo, signIn, signedInContext } from "./support/auth";
+import { formatIsoDate, localIsoDate } from "@/lib/care/calendar";
+import { addDaysIso } from "@/lib/care/dates";
 
 /** Edges of the coach's and the administrator's pages: stale links, stale pages, stale messages. */
 test.describe("coach and admin edges", () => {
@@ -91,6 +93,24 @@ test.describe("coach and admin edges", () => {
     expect(response.status()).toBe(200);
   });
 
+  test("on a desk screen the register shows every column without scrolling sideways", async ({ page }) => {
+    await page.setViewportSize({ width: 1280, height: 800 });
+    await signIn(page, demo.admin);
+    await page.goto("/club/register");
+    const region = page.getByRole("region", { name: "Register, scrolls sideways" });
+    await expect(page.getByTestId("register-table")).toBeVisible();
+    const fits = () => region.evaluate((element) => element.scrollWidth <= element.clientWidth);
+    expect(await fits(), "the register table fits its box at 1280 px").toBe(true);
+    const box = (await region.boundingBox())!;
+    expect(box.x, "the wider box stays inside the window").toBeGreaterThanOrEqual(0);
+    expect(box.x + box.width).toBeLessThanOrEqual(1280);
+
+    // A phone keeps the page's width: the table scrolls inside its box, the page does not.
+    await page.setViewportSize({ width: 390, height: 844 });
+    const pageScrolls = await page.evaluate(() => document.documentElement.scrollWidth > window.innerWidth);
+    expect(pageScrolls, "no sideways scrolling of the page at 390 px").toBe(false);
+  });
+
   test("a coach reads the last day a clearance holds, never 'until' the day it has already run out", async ({
     page,
   }) => {
@@ -106,6 +126,10 @@ test.describe("coach and admin edges", () => {
     const clearance = page.getByTestId("athlete-clearance");
     await expect(clearance).toContainText(/Cleared up to and including (\d{1,2} \w+ \d{4}): the first required pass expires on/);
     await expect(clearance).not.toContainText("until");
+    // Her certificates give the day each one expires, not a range that reads as including it.
+    const certificates = page.getByTestId("athlete-certificates");
+    await expect(certificates).toContainText(/Issued \d{1,2} \w+ \d{4} · expires \d{1,2} \w+ \d{4}/);
+    await expect(certificates).not.toContainText(/\d{4} to \d/);
   });
 
   test("the invitation form drops the last answer when the next try fails its own check", async ({ page }) => {
@@ -122,5 +146,46 @@ test.describe("coach and admin edges", () => {
     await form.getByRole("button", { name: "Send invitation" }).click();
     await expect(form.getByText("Enter an e-mail address like name@example.org.")).toBeVisible();
     await expect(page.getByTestId("invite-status")).not.toContainText("already a member");
+  });
+
+  test("the race-day form says when a day is already on the calendar, and drops its last answer", async ({ page }) => {
+    await signIn(page, demo.coach);
+    await page.goto("/roster/fleet/care");
+    const form = page.getByTestId("race-day-form");
+    const status = page.getByTestId("race-day-status");
+    const day = addDaysIso(localIsoDate(), 400); // the form takes days up to two years ahead
+    const add = async (value: string) => {
+      await form.getByLabel("Add a race day").fill(value);
+      await form.getByRole("button", { name: "Add race day" }).click();
+    };
+    await add(day);
+    await expect(status).toHaveText("✓ Race day added.");
+    await add(day);
+    await expect(status).toHaveText("✓ That day is already a race day.");
+    await expect(page.getByTestId("race-days").getByRole("listitem").filter({ hasText: formatIsoDate(day) })).toHaveCount(1);
+
+    // A day the form itself refuses (blank) leaves no earlier answer standing beside its error.
+    await add("");
+    await expect(status).toBeEmpty();
+
+    // Leave the calendar as the other specs expect it.
+    await page.getByRole("button", { name: `Remove the race day ${formatIsoDate(day)}` }).click();
+    await expect(status).toHaveText("✓ Race day removed.");
+  });
+
+  test("inviting an address again with another role says the earlier link no longer works", async ({ page }) => {
+    await signIn(page, demo.admin);
+    await page.goto("/club");
+    const form = page.getByTestId("invite-form");
+    const invite = async (role: string) => {
+      await form.getByLabel("Name").fill("Wren Salter");
+      await form.getByLabel("E-mail").fill("wren.salter@lantern-reach.example");
+      await form.getByLabel("Role").selectOption(role);
+      await form.getByRole("button", { name: "Send invitation" }).click();
+    };
+    await invite("coach");
+    await expect(page.getByTestId("invite-status")).toHaveText("✓ Invitation sent to wren.salter@lantern-reach.example.");
+    await invite("athlete");
+    await expect(page.getByTestId("invite-status")).toContainText("The earlier invitation to this address no longer works.");
   });
 });

@@ -327,4 +327,28 @@ describe("accounts and invitations", () => {
     expect(await findPendingInvitation(token!)).toBeNull();
     expect(await AuditEvent.count({ where: { action: "member.invited" } })).toBe(1);
   });
+
+  it("withdraws an open invitation to the same address when the admin invites it again", async () => {
+    const admin = await actorFor("admin@lantern-reach.example");
+    const first = await inviteMember(admin, { email: "Zoe.Marsh@lantern-reach.example", name: "Zoe Marsh", role: "coach" });
+    expect(first.replaced).toBe(false);
+    const [firstMail] = await listOutbox();
+    const firstToken = /\/invite\/(\S+)/.exec(firstMail!.text)![1]!;
+
+    // The second try (another role, the address in other capitals) is the one that counts.
+    const second = await inviteMember(admin, { email: "zoe.marsh@lantern-reach.example", name: "Zoe Marsh", role: "athlete" });
+    expect(second.replaced).toBe(true);
+    const secondMail = (await listOutbox()).find((mail) => !mail.text.includes(firstToken));
+    const secondToken = /\/invite\/(\S+)/.exec(secondMail!.text)![1]!;
+    expect(await findPendingInvitation(firstToken)).toBeNull();
+    expect(await findPendingInvitation(secondToken)).toMatchObject({ email: "zoe.marsh@lantern-reach.example", role: "athlete" });
+    await expect(acceptInvitation(firstToken, "Zoe Marsh", "oarlock heron tidewater")).rejects.toBeInstanceOf(NotFoundError);
+    await acceptInvitation(secondToken, "Zoe Marsh", "oarlock heron tidewater");
+    expect(await authenticateWithPassword("zoe.marsh@lantern-reach.example", "oarlock heron tidewater")).toMatchObject({ role: "athlete" });
+
+    const audits = (await AuditEvent.findAll({ where: { action: "member.invited" }, order: [["id", "ASC"]] })).filter(
+      (audit) => (audit.details as Record<string, unknown>).email === "zoe.marsh@lantern-reach.example",
+    );
+    expect(audits.map((audit) => (audit.details as Record<string, unknown>).replacedOpenInvitations ?? 0)).toEqual([0, 1]);
+  });
 });

@@ -15,9 +15,10 @@ export async function inviteMemberAction(input: unknown): Promise<ActionResult> 
     assertMayManageClub(actor);
     const parsed = parseActionInput(invitationSchema, input);
     if (!parsed.success) return { ok: false, message: "Check the highlighted fields.", fieldErrors: parsed.fieldErrors };
-    await inviteMember(actor, parsed.data);
+    const { replaced } = await inviteMember(actor, parsed.data);
     revalidatePath("/club");
-    return { ok: true, message: `Invitation sent to ${parsed.data.email}.` };
+    const earlier = replaced ? " The earlier invitation to this address no longer works." : "";
+    return { ok: true, message: `Invitation sent to ${parsed.data.email}.${earlier}` };
   } catch (error) {
     return actionFailure(error);
   }

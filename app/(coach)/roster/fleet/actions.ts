@@ -131,9 +131,9 @@ export async function addRaceDayAction(input: unknown): Promise<ActionResult> {
     assertMayManageFleet(actor);
     const parsed = parseActionInput(raceDaySchema, input);
     if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: parsed.fieldErrors };
-    await addRaceDay(actor, parsed.data.raceDay);
+    const { changed } = await addRaceDay(actor, parsed.data.raceDay);
     refreshFleetPages();
-    return { ok: true, message: "Race day added." };
+    return { ok: true, message: changed ? "Race day added." : "That day is already a race day." };
   } catch (error) {
     return actionFailure(error);
   }
@@ -146,9 +146,9 @@ export async function removeRaceDayAction(input: unknown): Promise<ActionResult>
     assertMayManageFleet(actor);
     const parsed = parseActionInput(removeRaceDaySchema, input);
     if (!parsed.success) return { ok: false, message: "That is not a race day.", fieldErrors: parsed.fieldErrors };
-    await removeRaceDay(actor, parsed.data.raceDay);
+    const { changed } = await removeRaceDay(actor, parsed.data.raceDay);
     refreshFleetPages();
-    return { ok: true, message: "Race day removed." };
+    return { ok: true, message: changed ? "Race day removed." : "That day was no longer a race day." };
   } catch (error) {
     return actionFailure(error);
   }

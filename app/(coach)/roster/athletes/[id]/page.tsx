@@ -186,7 +186,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
                     {certificate.serial}: {certificate.title}
                   </span>
                   <span className="block text-sm text-slate-700">
-                    {formatLongDate(certificate.issuedOn)} to {formatLongDate(certificate.expiresOn)} ·{" "}
+                    Issued {formatLongDate(certificate.issuedOn)} · expires {formatLongDate(certificate.expiresOn)} ·{" "}
                     {certificate.signedOffByName}
                     {certificate.revokeReason && ` · revoked: ${certificate.revokeReason}`}
                   </span>

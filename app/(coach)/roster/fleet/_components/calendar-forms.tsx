@@ -23,7 +23,7 @@ export function RaceDaysForm({ raceDays, today }: { raceDays: string[]; today: s
   const form = useForm<RaceDayInput>({ resolver: zodResolver(raceDaySchema), defaultValues: { raceDay: "" } });
   const { errors, isSubmitting } = form.formState;
 
-  const onSubmit = form.handleSubmit(async (values) => {
+  const submit = form.handleSubmit(async (values) => {
     const outcome = await addRaceDayAction(values);
     setStatus(outcome);
     if (outcome.ok) {
@@ -33,6 +33,11 @@ export function RaceDaysForm({ raceDays, today }: { raceDays: string[]; today: s
       form.setError("raceDay", { message: outcome.fieldErrors.raceDay[0] });
     }
   });
+  // The last answer spoke of the previous day; drop it, even when this one fails the form's own check.
+  const onSubmit = (event: React.FormEvent<HTMLFormElement>) => {
+    setStatus(null);
+    return submit(event);
+  };
 
   return (
     <div className="space-y-3">
