@@ -145,7 +145,8 @@ test.describe("certification", () => {
     await register.getByRole("link", { name: serial }).click();
     await expect(admin.getByTestId("certificate-status")).toContainText("Valid");
     await admin.getByLabel("Reason for revoking").fill("Recorded against the wrong module");
-    await admin.getByRole("button", { name: "Revoke certificate" }).click();
+    await admin.getByRole("button", { name: "Revoke certificate…" }).click();
+    await admin.getByTestId("revoke-dialog").getByRole("button", { name: "Yes, revoke it" }).click();
     await expect(admin.getByTestId("revoke-status")).toContainText("Revoked");
 
     const visitor = await browser.newContext();

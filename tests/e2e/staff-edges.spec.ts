@@ -59,12 +59,25 @@ test.describe("coach and admin edges", () => {
     await second.goto(first.url());
     await expect(second.getByTestId("certificate-status")).toContainText("Expired");
 
+    // Revoking asks once more, with the reason; "Keep it" (where focus starts) changes nothing.
     await first.getByLabel("Reason for revoking").fill("Issued against the wrong athlete");
-    await first.getByRole("button", { name: "Revoke certificate" }).click();
+    await first.getByRole("button", { name: "Revoke certificate…" }).click();
+    const dialog = first.getByTestId("revoke-dialog");
+    await expect(dialog).toContainText("“Issued against the wrong athlete”");
+    await expect(dialog.getByRole("button", { name: "Keep it" })).toBeFocused();
+    await first.keyboard.press("Enter");
+    await expect(dialog).toBeHidden();
+    await first.reload();
+    await expect(first.getByTestId("certificate-status")).toContainText("Expired");
+
+    await first.getByLabel("Reason for revoking").fill("Issued against the wrong athlete");
+    await first.getByRole("button", { name: "Revoke certificate…" }).click();
+    await first.getByTestId("revoke-dialog").getByRole("button", { name: "Yes, revoke it" }).click();
     await expect(first.getByTestId("certificate-status")).toContainText("Revoked");
 
     await second.getByLabel("Reason for revoking").fill("Issued against the wrong athlete");
-    await second.getByRole("button", { name: "Revoke certificate" }).click();
+    await second.getByRole("button", { name: "Revoke certificate…" }).click();
+    await second.getByTestId("revoke-dialog").getByRole("button", { name: "Yes, revoke it" }).click();
     await expect(second.getByTestId("revoke-status")).toContainText("already revoked");
     await expect(second.getByTestId("certificate-status")).toContainText("Revoked");
     await expect(second.getByTestId("revoke-form")).toHaveCount(0);

@@ -63,6 +63,7 @@ export default async function CertificatePage({ params }: { params: Promise<{ id
         {certificate.revokedAt && <p>The public check page says this certificate is revoked.</p>}
         <RevokeCertificateForm
           certificateId={certificate.id}
+          serial={certificate.serial}
           kind={certificate.kind}
           revoked={certificate.revokedAt !== null}
         />
