@@ -2,7 +2,7 @@ import { z } from "zod";
 
 import { boatClasses, handleMechanisms, oarTypeOfClass } from "@/lib/fleet/catalogue";
 import { oarTypes } from "@/lib/rigging/types";
-import { saneLengthCm, scullSweepBoundaryCm } from "@/lib/validations/rig";
+import { oarLengthProblem, saneLengthCm } from "@/lib/validations/rig";
 import { maxRecordId } from "@/lib/validations/ids";
 import { multiLineTextMessage, multiLineTextPattern, oneLineTextMessage, oneLineTextPattern } from "@/lib/validations/text";
 
@@ -91,19 +91,17 @@ export const oarSetSchema = z
   .superRefine((set, ctx) => {
     const sane = saneLengthCm[set.oarType];
     const lengthCm = set.targetLengthCm;
-    if (set.oarType === "sculling" && lengthCm >= scullSweepBoundaryCm) {
+    const problem = oarLengthProblem(set.oarType, lengthCm);
+    if (problem === "other-type") {
       ctx.addIssue({
         code: "custom",
         path: ["targetLengthCm"],
-        message: `${lengthCm} cm is a sweep oar's length, not a scull's: check the oar type and the tape.`,
+        message:
+          set.oarType === "sculling"
+            ? `${lengthCm} cm is a sweep oar's length, not a scull's: check the oar type and the tape.`
+            : `${lengthCm} cm is a scull's length, not a sweep oar's: check the oar type and the tape.`,
       });
-    } else if (set.oarType === "sweep" && lengthCm <= scullSweepBoundaryCm) {
-      ctx.addIssue({
-        code: "custom",
-        path: ["targetLengthCm"],
-        message: `${lengthCm} cm is a scull's length, not a sweep oar's: check the oar type and the tape.`,
-      });
-    } else if (lengthCm < sane.min || lengthCm > sane.max) {
+    } else if (problem === "out-of-range") {
       ctx.addIssue({
         code: "custom",
         path: ["targetLengthCm"],

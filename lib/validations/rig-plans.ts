@@ -2,13 +2,15 @@ import { z } from "zod";
 
 import { roundTo } from "@/lib/rigging/round";
 import { wholeNumberParam } from "@/lib/validations/paging";
-import { rigPlanRequestSchema } from "@/lib/validations/rig";
+import { oarLengthProblem, rigPlanRequestSchema } from "@/lib/validations/rig";
 
 /**
  * The rig-plan request as the plan route and the helper accept it: rigPlanRequestSchema plus the one case
  * the engine would refuse with a RangeError, a handle move longer than the measured inboard.
  */
 export const rigPlanRouteSchema = rigPlanRequestSchema.superRefine((request, ctx) => {
+  // A measured length that is no oar's (a typo) is already reported; blaming the inboard too would mislead.
+  if (oarLengthProblem(request.oarType, request.measured.lengthCm) !== null) return;
   const inboardAfterHandleCm = request.measured.inboardCm + roundTo(request.target.lengthCm - request.measured.lengthCm, 1);
   if (inboardAfterHandleCm <= 0) {
     ctx.addIssue({

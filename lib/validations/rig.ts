@@ -1,6 +1,6 @@
 import { z } from "zod";
 
-import { oarTypes } from "@/lib/rigging/types";
+import { oarTypes, type OarType } from "@/lib/rigging/types";
 
 /** Sane overall lengths by oar type, cm; an oar of 300 cm or more cannot be a scull, one of 300 cm or less cannot be a sweep oar. */
 export const saneLengthCm = {
@@ -10,6 +10,22 @@ export const saneLengthCm = {
 
 /** The type boundary, cm: sculls are shorter, sweep oars longer. */
 export const scullSweepBoundaryCm = 300;
+
+/**
+ * What is wrong with an overall length for an oar type: "other-type" when it lies past the type boundary
+ * but within the other type's sane range (a scull of 300–400 cm, a sweep oar of 250–300 cm), so the oar
+ * type or the tape is wrong; "out-of-range" for any other length outside the type's sane range (a typo
+ * such as 28.7 or 2870 is no oar at all); null when the length is sane.
+ */
+export function oarLengthProblem(oarType: OarType, lengthCm: number): "other-type" | "out-of-range" | null {
+  const otherType =
+    oarType === "sculling"
+      ? lengthCm >= scullSweepBoundaryCm && lengthCm <= saneLengthCm.sweep.max
+      : lengthCm <= scullSweepBoundaryCm && lengthCm >= saneLengthCm.sculling.min;
+  if (otherType) return "other-type";
+  const sane = saneLengthCm[oarType];
+  return lengthCm < sane.min || lengthCm > sane.max ? "out-of-range" : null;
+}
 
 const cmField = (label: string) =>
   z
@@ -60,19 +76,17 @@ export const rigPlanRequestSchema = z
         });
       }
       const sane = saneLengthCm[request.oarType];
-      if (request.oarType === "sculling" && lengthCm >= scullSweepBoundaryCm) {
+      const problem = oarLengthProblem(request.oarType, lengthCm);
+      if (problem === "other-type") {
         ctx.addIssue({
           code: "custom",
           path: [which, "lengthCm"],
-          message: `A ${label} length of ${lengthCm} cm is a sweep oar's length, not a scull's: check the oar type and the tape`,
+          message:
+            request.oarType === "sculling"
+              ? `A ${label} length of ${lengthCm} cm is a sweep oar's length, not a scull's: check the oar type and the tape`
+              : `A ${label} length of ${lengthCm} cm is a scull's length, not a sweep oar's: check the oar type and the tape`,
         });
-      } else if (request.oarType === "sweep" && lengthCm <= scullSweepBoundaryCm) {
-        ctx.addIssue({
-          code: "custom",
-          path: [which, "lengthCm"],
-          message: `A ${label} length of ${lengthCm} cm is a scull's length, not a sweep oar's: check the oar type and the tape`,
-        });
-      } else if (lengthCm < sane.min || lengthCm > sane.max) {
+      } else if (problem === "out-of-range") {
         ctx.addIssue({
           code: "custom",
           path: [which, "lengthCm"],

@@ -57,6 +57,13 @@ describe("oarSetSchema", () => {
 
   it("refuses a 3 m scull, a 2 m sweep oar and an inboard of half the oar or more", () => {
     expect(fieldsOf(oarSetSchema.safeParse({ ...sculls, targetLengthCm: 300 }))).toEqual(["targetLengthCm"]);
+    // A typo is out of range, not "a sweep oar's length" or "a scull's length".
+    expect(oarSetSchema.safeParse({ ...sculls, targetLengthCm: 2880, targetInboardCm: 88 }).error?.issues[0]?.message).toBe(
+      "2880 cm is outside 250–300 cm: measure from the blade tip to the handle end.",
+    );
+    expect(oarSetSchema.safeParse({ ...sculls, oarType: "sweep", targetLengthCm: 37.4, targetInboardCm: 116 }).error?.issues.find((issue) => issue.path[0] === "targetLengthCm")?.message).toBe(
+      "37.4 cm is outside 330–400 cm: measure from the blade tip to the handle end.",
+    );
     expect(fieldsOf(oarSetSchema.safeParse({ ...sculls, oarType: "sweep", targetLengthCm: 200, targetInboardCm: 80 }))).toEqual(["targetLengthCm"]);
     expect(fieldsOf(oarSetSchema.safeParse({ ...sculls, targetLengthCm: 260, targetInboardCm: 130 }))).toEqual(["targetInboardCm"]);
     expect(fieldsOf(oarSetSchema.safeParse({ ...sculls, targetInboardCm: 40 }))).toEqual(["targetInboardCm"]);
@@ -99,6 +106,11 @@ describe("rigPlanRouteSchema and savedRigPlanSchema", () => {
       "measured.inboardCm",
     ]);
     expect(rigPlanRouteSchema.parse(request).clickCm).toBe(0.5);
+  });
+
+  it("blames only the length, not the inboard, when the measured length is a typo", () => {
+    const result = rigPlanRouteSchema.safeParse({ ...request, measured: { lengthCm: 99999, inboardCm: 87 } });
+    expect(fieldsOf(result)).toEqual(["measured.lengthCm"]);
   });
 
   it("needs a UUID, ids and a time that is neither in the future nor a month old", () => {

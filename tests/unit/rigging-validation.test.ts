@@ -103,6 +103,22 @@ describe("rigPlanRequestSchema", () => {
     expect(issuePaths({ ...sweep, target: { lengthCm: 400, inboardCm: 116 } })).toEqual([]);
   });
 
+  it("calls a typo such as 28.7 or 2870 cm out of range, not the other oar type's length", () => {
+    const messageFor = (input: unknown) => rigPlanRequestSchema.safeParse(input).error?.issues.map((issue) => issue.message) ?? [];
+    const sweep = { oarType: "sweep", target: { lengthCm: 374, inboardCm: 116 } };
+    expect(messageFor({ ...sweep, measured: { lengthCm: 28.7, inboardCm: 8.7 } })).toEqual([
+      "A measured length of 28.7 cm is outside 330–400 cm: re-measure from the blade tip to the handle end",
+    ]);
+    expect(messageFor({ ...good, measured: { lengthCm: 2870, inboardCm: 87 } })).toEqual([
+      "A measured length of 2870 cm is outside 250–300 cm: re-measure from the blade tip to the handle end",
+    ]);
+    // Lengths of the other oar type still say so.
+    expect(messageFor({ ...good, measured: { lengthCm: 400, inboardCm: 87 } })[0]).toMatch(/sweep oar's length/);
+    expect(messageFor({ ...good, measured: { lengthCm: 401, inboardCm: 87 } })[0]).toMatch(/outside 250–300 cm/);
+    expect(messageFor({ ...sweep, measured: { lengthCm: 250, inboardCm: 88 } })[0]).toMatch(/scull's length/);
+    expect(messageFor({ ...sweep, measured: { lengthCm: 249, inboardCm: 88 } })[0]).toMatch(/outside 330–400 cm/);
+  });
+
   it("reports several bad fields at once", () => {
     const paths = issuePaths({ ...good, clickCm: 5, spanCm: 10 });
     expect(paths).toEqual(expect.arrayContaining(["clickCm", "spanCm"]));
