@@ -1,17 +1,17 @@
 import { z } from "zod";
+import { parseNumericAnswer } from "@/lib/quiz/grade";
 import type { PublicQuestion } from "@/lib/quiz/types";
 
 /** Answers as the form holds them: text for numeric and single, id lists for multiple and order. */
 export type QuizFormValues = { answers: Record<string, string | string[]> };
-
-const numericText = /^\s*[-−]?\d+(?:[.,]\d+)?\s*$/;
 
 const answerValue = z.union([z.string(), z.array(z.string())]);
 
 function problemWith(question: PublicQuestion, value: string | string[] | undefined): string | null {
   if (question.kind === "numeric") {
     if (typeof value !== "string" || value.trim() === "") return "Enter a number.";
-    return numericText.test(value) ? null : "Enter a number, for example 3 or 2.5.";
+    // The same reading the server grades with, so nothing it would mark ("+2", ".5", "3,5") is refused here.
+    return parseNumericAnswer(value) !== null ? null : "Enter a number, for example 3 or 2.5.";
   }
   if (question.kind === "single") return typeof value === "string" && value !== "" ? null : "Choose one answer.";
   if (question.kind === "multiple") return Array.isArray(value) && value.length > 0 ? null : "Tick at least one answer.";
