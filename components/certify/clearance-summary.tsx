@@ -2,6 +2,7 @@ import Link from "next/link";
 import type { Actor } from "@/lib/auth/permissions";
 import { clearanceOf } from "@/lib/data/clearance";
 import { formatLongDate, lastValidDay } from "@/lib/clearance/dates";
+import { suspendedClearanceText } from "@/lib/clearance/athlete-summary";
 import { ClearanceBadge } from "@/components/certify/status-badge";
 
 /** The athlete's "may rig unsupervised" state with what is still missing, for the learning page. */
@@ -31,10 +32,7 @@ export async function ClearanceSummary({ actor }: { actor: Actor }) {
         </p>
       )}
       {clearance.state === "suspended" && (
-        <p>
-          A coach has suspended your clearance: {clearance.suspension?.reason}. Rig with a coach until they
-          lift it.
-        </p>
+        <p>{suspendedClearanceText(clearance.suspension?.reason)}</p>
       )}
       {clearance.state === "expired" && (
         <p>A module pass has run out. Ask a coach to sign it off again; until then rig with a coach.</p>

@@ -84,3 +84,14 @@ export function athleteStanding(
   });
   return { modules, clearance };
 }
+
+/**
+ * What the athlete reads while a coach's suspension stands: the coach's reason as typed, ending in one
+ * full stop (a reason that already ends in ".", "!" or "?" gets none added), then what to do.
+ */
+export function suspendedClearanceText(reason: string | undefined): string {
+  const said = (reason ?? "").trim();
+  if (said === "") return "A coach has suspended your clearance. Rig with a coach until they lift it.";
+  const sentence = /[.!?…]["'”’)]*$/.test(said) ? said : `${said}.`;
+  return `A coach has suspended your clearance: ${sentence} Rig with a coach until they lift it.`;
+}

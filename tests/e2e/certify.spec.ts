@@ -162,3 +162,13 @@ test.describe("certification", () => {
     await expect(coach.getByTestId("roster-empty")).toBeVisible();
   });
 });
+
+test("a suspended athlete reads the coach's reason with one full stop, and that they rig with a coach", async ({ page }) => {
+  // hamish (lib/seed/demo-certification.ts): suspended with a reason that ends in a full stop.
+  await signIn(page, "hamish@lantern-reach.example");
+  await page.goto("/learn");
+  const summary = page.getByTestId("clearance-summary");
+  await expect(summary).toContainText("A coach has suspended your clearance: Launched with a collar not seated in a click");
+  await expect(summary).toContainText("with a coach first. Rig with a coach until they lift it.");
+  await expect(summary).not.toContainText("..");
+});
