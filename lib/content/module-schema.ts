@@ -33,6 +33,11 @@ export const moduleFrontmatterSchema = z.strictObject({
     .refine((items) => new Set(items.map((item) => item.id)).size === items.length, {
       error: "item ids must be unique",
     }),
+  /**
+   * The caution on the module's practical page: "rigging" (a loose collar or screw on the water) or
+   * "cleaning" (the cleaning chemicals: gloves, eye protection, never mixing products).
+   */
+  practicalCaution: z.enum(["rigging", "cleaning"]).default("rigging"),
   /** Whether a new club counts this module towards "may rig unsupervised" (admins change it per club). */
   requiredForClearance: z.boolean().default(true),
 });

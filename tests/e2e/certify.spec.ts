@@ -172,3 +172,15 @@ test("a suspended athlete reads the coach's reason with one full stop, and that 
   await expect(summary).toContainText("with a coach first. Rig with a coach until they lift it.");
   await expect(summary).not.toContainText("..");
 });
+
+test("the grip-cleaning practical warns about the cleaning chemicals; the rigging practicals about the collar", async ({ page }) => {
+  await signIn(page, demo.athlete);
+  await page.goto("/learn/grip-cleaning/practical");
+  const cautions = page.getByTestId("cleaning-cautions");
+  await expect(cautions).toContainText("wear gloves and eye protection");
+  await expect(cautions).toContainText("Never mix cleaners");
+  await expect(page.getByText("A collar that is not seated in a click")).toHaveCount(0);
+  await page.goto("/learn/setting-inboard/practical");
+  await expect(page.getByText("A collar that is not seated in a click")).toBeVisible();
+  await expect(page.getByTestId("cleaning-cautions")).toHaveCount(0);
+});

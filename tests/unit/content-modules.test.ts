@@ -89,6 +89,17 @@ describe("the course's lessons", () => {
     expect(fresh.clearanceModules).toEqual(modules.filter((meta) => meta.requiredForClearance).map((meta) => meta.slug));
   });
 
+  it("puts the cleaning chemicals' caution, not the collar's, on the grip-cleaning practical", () => {
+    const caution = Object.fromEntries(modules.map((meta) => [meta.slug, meta.practicalCaution]));
+    expect(caution).toEqual({
+      "overall-length": "rigging",
+      "setting-inboard": "rigging",
+      "changing-boats": "rigging",
+      "secure-and-check": "rigging",
+      "grip-cleaning": "cleaning",
+    });
+  });
+
   it("gives every lesson a practical checklist of 3 to 5 observable items", () => {
     for (const meta of modules) {
       expect(meta.checklist.length, meta.slug).toBeGreaterThanOrEqual(3);

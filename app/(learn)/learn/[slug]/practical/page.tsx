@@ -4,6 +4,7 @@ import { notFound } from "next/navigation";
 import { PageTitle } from "@/components/ui/page-title";
 import { Notice } from "@/components/ui/notice";
 import { PracticalSignOffPanel } from "@/components/certify/practical-sign-off-panel";
+import { CleaningCautions } from "@/components/rig/cleaning-cautions";
 import { requirePageActor } from "@/lib/auth/session";
 import { getModule } from "@/lib/content/modules";
 
@@ -18,11 +19,15 @@ export default async function PracticalPage({ params }: { params: Promise<{ slug
   return (
     <div className="space-y-6">
       <PageTitle lead={lesson.meta.summary}>Practical: {lesson.meta.title}</PageTitle>
-      <Notice tone="warning" title="Safety first">
-        A collar that is not seated in a click, or a loose screw, can make an oar unrowable on the water.
-        Until a coach signs you off, adjust oars only with a coach beside you, and always follow your
-        club&apos;s rules and the coach on duty.
-      </Notice>
+      {lesson.meta.practicalCaution === "cleaning" ? (
+        <CleaningCautions />
+      ) : (
+        <Notice tone="warning" title="Safety first">
+          A collar that is not seated in a click, or a loose screw, can make an oar unrowable on the water.
+          Until a coach signs you off, adjust oars only with a coach beside you, and always follow your
+          club&apos;s rules and the coach on duty.
+        </Notice>
+      )}
       <PracticalSignOffPanel actor={actor} moduleSlug={slug} />
       <p>
         <Link href={`/learn/${slug}`} className="underline">
