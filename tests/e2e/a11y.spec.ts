@@ -160,3 +160,17 @@ test.describe("checks axe cannot make", () => {
     }
   });
 });
+
+test("each certificate's links say which certificate they open, so a list of links is not six of the same", async ({ page }) => {
+  // femi (lib/seed/demo-certification.ts) holds six certificates: five modules and the clearance.
+  await signIn(page, "femi@lantern-reach.example");
+  await page.goto("/learn/certificates");
+  const list = page.getByTestId("my-certificates");
+  for (const name of [/^Download PDF/, /^Public check page/]) {
+    const links = list.getByRole("link", { name });
+    const names = await links.evaluateAll((elements) => elements.map((element) => (element.textContent ?? "").replace(/\s+/g, " ").trim()));
+    expect(names.length).toBeGreaterThanOrEqual(6);
+    expect(new Set(names).size, names.join(" | ")).toBe(names.length);
+  }
+  await expect(list.getByRole("link", { name: /^Download PDF of Cleaning the grips, [A-Z]+-\d{4}-\d{4}$/ })).toHaveCount(1);
+});

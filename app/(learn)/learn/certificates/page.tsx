@@ -69,12 +69,20 @@ export default async function MyCertificatesPage() {
                     className="inline-flex min-h-11 items-center font-semibold text-river-700 underline"
                   >
                     Download PDF
+                    <span className="sr-only">
+                      {" "}
+                      of {certificate.title}, {certificate.serial}
+                    </span>
                   </a>
                   <a
                     href={certificate.verifyUrl}
                     className="inline-flex min-h-11 items-center text-river-700 underline"
                   >
                     Public check page
+                    <span className="sr-only">
+                      {" "}
+                      of {certificate.title}, {certificate.serial}
+                    </span>
                   </a>
                 </p>
               </li>
