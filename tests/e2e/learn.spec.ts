@@ -42,6 +42,8 @@ test("an athlete reads a lesson, fails the quiz, retakes it, passes, and the cou
   await answerQuiz(page, await storedQuestions(second.attemptId), true);
   await page.getByRole("button", { name: "Hand in my answers" }).click();
   await expect(page.getByTestId("quiz-outcome")).toContainText("Passed: 100%");
+  // The result says "ask a coach to watch you"; the way to ask is one tap away.
+  await expect(page.getByRole("link", { name: "Ask a coach for the practical" })).toHaveAttribute("href", "/learn/setting-inboard/practical");
 
   await page.getByRole("link", { name: "Back to your course" }).click();
   const card = page.getByTestId("module-setting-inboard");

@@ -305,7 +305,12 @@ function QuizResults({
             Try a fresh set of questions
           </Button>
         )}
-        <Link href="/learn" className={buttonClasses(result.passed ? "primary" : "secondary")}>
+        {result.passed && (
+          <Link href={`/learn/${slug}/practical`} className={buttonClasses("primary")}>
+            Ask a coach for the practical
+          </Link>
+        )}
+        <Link href="/learn" className={buttonClasses("secondary")}>
           Back to your course
         </Link>
         <Link href={`/learn/${slug}`} className={buttonClasses("secondary")}>
