@@ -104,6 +104,8 @@ export async function renderStoredCertificate(certificate: Certificate): Promise
     readClubLogo(certificate.clubId),
     pdfFonts(),
   ]);
+  // A clearance PDF made while a coach's suspension stands says so (the page would otherwise read as valid).
+  const suspended = certificate.kind === "clearance" && (await suspendedAthletes([certificate.athleteId])).has(certificate.athleteId);
   let lines: string[];
   if (certificate.kind === "module") {
     const assessment = certificate.assessmentId
@@ -128,6 +130,7 @@ export async function renderStoredCertificate(certificate: Certificate): Promise
       verifyUrl: verifyUrlFor(certificate.verificationCode),
       logo,
       revoked: certificate.revokedAt !== null,
+      suspended,
     },
     fonts,
   );

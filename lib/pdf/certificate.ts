@@ -39,6 +39,11 @@ export interface CertificatePdfInput {
   verifyUrl: string;
   logo: LogoImage | null;
   revoked: boolean;
+  /**
+   * A clearance whose athlete a coach has suspended, as the PDF is made: stamped SUSPENDED, since the
+   * page otherwise says they may rig unsupervised. Ignored for module certificates and when revoked.
+   */
+  suspended: boolean;
 }
 
 function centred(page: PDFPage, text: string, font: PDFFont, size: number, y: number, color = ink): void {
@@ -263,9 +268,9 @@ export async function renderCertificatePdf(
     cautionY -= 10.5;
   }
 
-  if (input.revoked) {
-    const stamp = "REVOKED";
-    const size = 96;
+  const stamp = input.revoked ? "REVOKED" : input.kind === "clearance" && input.suspended ? "SUSPENDED" : null;
+  if (stamp) {
+    const size = stamp === "REVOKED" ? 96 : 80;
     page.drawText(stamp, {
       x: width / 2 - textWidth(bold, stamp, size) / 2 + 40,
       y: height / 2 - 160,
@@ -275,6 +280,14 @@ export async function renderCertificatePdf(
       opacity: 0.28,
       rotate: degrees(35),
     });
+  }
+  if (stamp === "SUSPENDED") {
+    const notice = "Suspended by a coach: not valid while the suspension stands. Rig with a coach standing by.";
+    let noticeY = cautionY - 4;
+    for (const line of wrapText(bold, notice, 9, right - left)) {
+      page.drawText(line, { x: left, y: noticeY, size: 9, font: bold, color: alarm });
+      noticeY -= 11.5;
+    }
   }
 
   // objectsPerTick: no pauses for the event loop between objects; a register is written in one go.

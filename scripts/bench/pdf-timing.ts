@@ -29,6 +29,7 @@ function sampleCertificate(index: number): CertificatePdfInput {
     verifyUrl: "http://127.0.0.1:3000/verify/bench-sample-code-not-real",
     logo: null,
     revoked: false,
+    suspended: false,
   };
 }
 

@@ -1,3 +1,7 @@
+import { execFileSync } from "node:child_process";
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
 import { expect, test, type Browser, type Page } from "@playwright/test";
 import { demo, openNewestMailTo, signIn } from "./support/auth";
 
@@ -171,6 +175,18 @@ test("a suspended athlete reads the coach's reason with one full stop, and that 
   await expect(summary).toContainText("A coach has suspended your clearance: Launched with a collar not seated in a click");
   await expect(summary).toContainText("with a coach first. Rig with a coach until they lift it.");
   await expect(summary).not.toContainText("..");
+
+  // His clearance certificate, printed now, is stamped: on paper it would otherwise read as valid.
+  await page.goto("/learn/certificates");
+  const clearancePdf = page.getByRole("link", { name: /Download PDF of Rigging clearance/ });
+  const response = await page.request.get((await clearancePdf.first().getAttribute("href"))!);
+  expect(response.status()).toBe(200);
+  const file = path.join(os.tmpdir(), `slipway-suspended-${process.pid}.pdf`);
+  fs.writeFileSync(file, await response.body());
+  const text = execFileSync("pdftotext", ["-raw", file, "-"], { encoding: "utf8" });
+  fs.rmSync(file);
+  expect(text).toContain("SUSPENDED");
+  expect(text).toContain("Suspended by a coach: not valid while the suspension stands.");
 });
 
 test("the grip-cleaning practical warns about the cleaning chemicals; the rigging practicals about the collar", async ({ page }) => {

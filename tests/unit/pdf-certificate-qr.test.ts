@@ -29,6 +29,7 @@ describe("certificate QR code", () => {
         verifyUrl,
         logo: null,
         revoked: false,
+        suspended: false,
       },
       await pdfFonts(),
     );

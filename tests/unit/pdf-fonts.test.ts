@@ -79,6 +79,7 @@ const international: CertificatePdfInput = {
   verifyUrl: "http://127.0.0.1:3000/verify/test-code",
   logo: null,
   revoked: false,
+  suspended: false,
 };
 
 const internationalRegister: RegisterPdfInput = {
@@ -194,6 +195,23 @@ describe("PDF fonts", () => {
       "whether it is valid, expired, suspended or revoked",
     );
     expect(text(await renderCertificatePdf(international, fonts))).toContain("whether it is valid, expired or revoked.");
+  });
+
+  it("stamps a clearance printed while it is suspended, and only a clearance; revoked wins", async () => {
+    const fonts = await pdfFonts();
+    // -raw: in content order, so the rotated stamp comes back as one word.
+    const text = async (input: CertificatePdfInput) =>
+      execFileSync("pdftotext", ["-raw", writePdf(await renderCertificatePdf(input, fonts)), "-"], { encoding: "utf8" });
+    const notice = "Suspended by a coach: not valid while the suspension stands.";
+    const suspendedClearance = await text({ ...international, kind: "clearance", suspended: true });
+    expect(suspendedClearance).toContain("SUSPENDED");
+    expect(suspendedClearance).toContain(notice);
+    expect(await text({ ...international, kind: "clearance" })).not.toContain("SUSPENDED");
+    // A suspension stops the clearance, not the module passes it stands on.
+    expect(await text({ ...international, kind: "module", suspended: true })).not.toContain("SUSPENDED");
+    const revoked = await text({ ...international, kind: "clearance", suspended: true, revoked: true });
+    expect(revoked).toContain("REVOKED");
+    expect(revoked).not.toContain("SUSPENDED");
   });
 
   it("draws the certificate and the register exactly as whole faces would", async () => {
