@@ -2,16 +2,13 @@ import Link from "next/link";
 import type { Actor } from "@/lib/auth/permissions";
 import { clearanceOf } from "@/lib/data/clearance";
 import { formatLongDate, lastValidDay } from "@/lib/clearance/dates";
-import { suspendedClearanceText } from "@/lib/clearance/athlete-summary";
+import { notClearedText, suspendedClearanceText } from "@/lib/clearance/athlete-summary";
 import { ClearanceBadge } from "@/components/certify/status-badge";
 
 /** The athlete's "may rig unsupervised" state with what is still missing, for the learning page. */
 export async function ClearanceSummary({ actor }: { actor: Actor }) {
-  const { standing, requiredTitles } = await clearanceOf(actor);
+  const { standing } = await clearanceOf(actor);
   const { clearance } = standing;
-  const remaining = standing.modules.filter(
-    (entry) => clearance.requiredModules.includes(entry.slug) && entry.status !== "passed",
-  ).length;
   return (
     <section
       aria-labelledby="clearance-heading"
@@ -37,12 +34,7 @@ export async function ClearanceSummary({ actor }: { actor: Actor }) {
       {clearance.state === "expired" && (
         <p>A module pass has run out. Ask a coach to sign it off again; until then rig with a coach.</p>
       )}
-      {clearance.state === "not-cleared" && (
-        <p>
-          {remaining} of {requiredTitles.length} required modules still to pass (quiz and practical). Until
-          then, rig with a coach beside you.
-        </p>
-      )}
+      {clearance.state === "not-cleared" && <p>{notClearedText(standing.modules, clearance.requiredModules)}</p>}
       <p>
         <Link href="/learn/certificates" className="font-semibold text-river-700 underline">
           Your certificates

@@ -95,3 +95,21 @@ export function suspendedClearanceText(reason: string | undefined): string {
   const sentence = /[.!?…]["'”’)]*$/.test(said) ? said : `${said}.`;
   return `A coach has suspended your clearance: ${sentence} Rig with a coach until they lift it.`;
 }
+
+/**
+ * What a not-yet-cleared athlete still has to do, counted over the required modules: those whose quiz
+ * is still to pass, and those with the quiz passed that wait for a coach's practical sign-off.
+ */
+export function notClearedText(modules: readonly ModuleStanding[], requiredModules: readonly string[]): string {
+  const remaining = modules.filter((entry) => requiredModules.includes(entry.slug) && entry.status !== "passed");
+  const quizPassed = remaining.filter((entry) => entry.progress.passed).length;
+  const quizToPass = remaining.length - quizPassed;
+  const parts: string[] = [];
+  if (quizToPass > 0) parts.push(`${quizToPass} ${quizToPass === 1 ? "needs its" : "need their"} quiz passed, then a practical sign-off`);
+  if (quizPassed > 0) {
+    parts.push(`${quizPassed} ${quizPassed === 1 ? "has its quiz passed and needs" : "have their quiz passed and need"} a coach's practical sign-off`);
+  }
+  const until = "Until then, rig with a coach beside you.";
+  if (remaining.length === 0) return until;
+  return `${remaining.length} of ${requiredModules.length} required modules still to pass: ${parts.join("; ")}. ${until}`;
+}

@@ -65,6 +65,11 @@ test.describe("certification", () => {
     browser,
   }) => {
     const athlete = await pageAs(browser, carys);
+    // Every quiz passed: her summary says only the coach's sign-offs are left, not "quiz and practical".
+    await athlete.goto("/learn");
+    await expect(athlete.getByTestId("clearance-summary")).toContainText(
+      /(\d) of \1 required modules still to pass: \1 have their quiz passed and need a coach's practical sign-off\./,
+    );
     await athlete.goto("/learn/overall-length/practical");
     await expect(athlete.getByTestId("practical-status")).toContainText("Quiz passed, practical to do");
     await athlete.getByLabel("Which coach?").selectOption({ label: "Tobias Lindqvist" });
