@@ -8,8 +8,8 @@ export const rosterPaths = ["/api/roster", "/api/roster/matrix"];
 /** Connections sending submissions while the roster is read, for "roster p95 while writes run". */
 const writerConnections = 5;
 /** The warm-up before the measured rounds: seconds of each route, and the open attempts it may use. */
-const warmUpSeconds = 3;
-const warmUpAttempts = 3000;
+const warmUpSeconds = 10;
+const warmUpAttempts = 8000;
 
 function summary(result: LoadResult): string {
   const base = `${fixed(result.requestsPerSecond, 0)} req/s, p50 ${fixed(result.p50Ms, 1)} ms, p99 ${fixed(result.p99Ms, 1)} ms`;
