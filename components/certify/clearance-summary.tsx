@@ -5,8 +5,11 @@ import { formatLongDate, lastValidDay } from "@/lib/clearance/dates";
 import { notClearedText, suspendedClearanceText } from "@/lib/clearance/athlete-summary";
 import { ClearanceBadge } from "@/components/certify/status-badge";
 
-/** The athlete's "may rig unsupervised" state with what is still missing, for the learning page. */
-export async function ClearanceSummary({ actor }: { actor: Actor }) {
+/**
+ * The athlete's "may rig unsupervised" state with what is still missing, for the learning page and the
+ * certificates page (which passes `onCertificatesPage`, so the box does not link to the page it is on).
+ */
+export async function ClearanceSummary({ actor, onCertificatesPage = false }: { actor: Actor; onCertificatesPage?: boolean }) {
   const { standing } = await clearanceOf(actor);
   const { clearance } = standing;
   return (
@@ -35,11 +38,13 @@ export async function ClearanceSummary({ actor }: { actor: Actor }) {
         <p>A module pass has run out. Ask a coach to sign it off again; until then rig with a coach.</p>
       )}
       {clearance.state === "not-cleared" && <p>{notClearedText(standing.modules, clearance.requiredModules)}</p>}
-      <p>
-        <Link href="/learn/certificates" className="font-semibold text-river-700 underline">
-          Your certificates
-        </Link>
-      </p>
+      {!onCertificatesPage && (
+        <p>
+          <Link href="/learn/certificates" className="font-semibold text-river-700 underline">
+            Your certificates
+          </Link>
+        </p>
+      )}
     </section>
   );
 }

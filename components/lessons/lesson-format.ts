@@ -1,8 +1,11 @@
 import { inboardClicks, type InboardClicks } from "@/lib/rigging/adjust";
 
-/** Reads a centimetre value typed by a person; accepts a decimal comma ("87,5"). Null if not a number. */
+/**
+ * Reads a centimetre value typed by a person; accepts a decimal comma ("87,5") and the unit typed after it
+ * ("287 cm", "287cm"). Null if not a number, and for any other unit ("2870 mm"): no guessing at units.
+ */
 export function parseCmInput(text: string): number | null {
-  const normalised = text.trim().replace(",", ".");
+  const normalised = text.trim().replace(/\s*cm$/i, "").replace(",", ".");
   if (!/^(\d+(\.\d*)?|\.\d+)$/.test(normalised)) return null;
   const value = Number(normalised);
   return Number.isFinite(value) ? value : null;

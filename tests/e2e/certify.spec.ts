@@ -181,8 +181,13 @@ test("a suspended athlete reads the coach's reason with one full stop, and that 
   await expect(summary).toContainText("with a coach first. Rig with a coach until they lift it.");
   await expect(summary).not.toContainText("..");
 
+  await expect(summary.getByRole("link", { name: "Your certificates" })).toBeVisible();
+
   // His clearance certificate, printed now, is stamped: on paper it would otherwise read as valid.
   await page.goto("/learn/certificates");
+  // The same summary on the certificates page does not link to the page it is on.
+  await expect(page.getByTestId("clearance-summary")).toBeVisible();
+  await expect(page.getByTestId("clearance-summary").getByRole("link", { name: "Your certificates" })).toHaveCount(0);
   const clearancePdf = page.getByRole("link", { name: /Download PDF of Rigging clearance/ });
   const response = await page.request.get((await clearancePdf.first().getAttribute("href"))!);
   expect(response.status()).toBe(200);

@@ -49,6 +49,16 @@ test.describe("security headers", () => {
     expectSecurityHeaders((await request.get("/api/health")).headers());
     expectSecurityHeaders((await request.get("/api/roster")).headers());
   });
+
+  test("every page names the app's icon, which is served as SVG with the same headers", async ({ page, request }) => {
+    await page.goto("/");
+    const href = await page.locator('head link[rel="icon"]').first().getAttribute("href");
+    expect(href).toMatch(/^\/icon\.svg/);
+    const icon = await request.get(href!);
+    expect(icon.status()).toBe(200);
+    expect(icon.headers()["content-type"]).toContain("image/svg+xml");
+    expectSecurityHeaders(icon.headers());
+  });
 });
 
 test.describe("cross-origin writes", () => {

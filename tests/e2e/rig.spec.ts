@@ -152,6 +152,18 @@ test("offline, the helper still works out the steps and keeps a saved plan until
   expect(await page.evaluate(() => window.localStorage.getItem("slipway.rig.pending-plans.v1"))).toBe("[]");
 });
 
+test("a length typed with its unit ('289 cm', '89,5 cm') gives the same steps as the bare number", async ({ page }) => {
+  await signIn(page, demo.athlete);
+  await page.goto("/rig");
+  await page.getByLabel("Boat you are moving to").selectOption({ label: "Kittiwake: double scull (2x)" });
+  await page.getByLabel("Overall length (cm)").fill("289 cm");
+  await page.getByLabel("Inboard (cm)").fill("89,5 cm");
+  await page.getByRole("button", { name: "Show my steps" }).click();
+  await expect(page.getByTestId("rig-plan")).toBeVisible();
+  const target = { lengthCm: 288, inboardCm: 88 };
+  await expectStepsMatch(page, expectedScullPlan({ lengthCm: 289, inboardCm: 89.5 }, target, 159), target);
+});
+
 test("a coach sees who rigged what and when, filtered by boat", async ({ page }) => {
   await signIn(page, demo.coach);
   await page.goto("/roster/fleet/plans");

@@ -127,19 +127,19 @@ test.describe("coach and admin edges", () => {
   test("a coach reads the last day a clearance holds, never 'until' the day it has already run out", async ({
     page,
   }) => {
-    // Greta (lib/seed/demo-certification.ts) is cleared; her first pass expires within 30 days.
+    // Femi (lib/seed/demo-certification.ts) is cleared. Not Greta, whom members.spec.ts makes a coach.
     await signIn(page, demo.coach);
     await page.goto("/roster");
-    const row = page.getByRole("row", { name: /Greta Quennell/ });
+    const row = page.getByRole("row", { name: /Femi Ashdown/ });
     await expect(row).toContainText("May rig unsupervised");
     await expect(row).toContainText(/expires \d{1,2} \w+ \d{4}/);
     await expect(row).not.toContainText("until");
 
-    await row.getByRole("link", { name: "Greta Quennell" }).click();
+    await row.getByRole("link", { name: "Femi Ashdown" }).click();
     const clearance = page.getByTestId("athlete-clearance");
     await expect(clearance).toContainText(/Cleared up to and including (\d{1,2} \w+ \d{4}): the first required pass expires on/);
     await expect(clearance).not.toContainText("until");
-    // Her certificates give the day each one expires, not a range that reads as including it.
+    // His certificates give the day each one expires, not a range that reads as including it.
     const certificates = page.getByTestId("athlete-certificates");
     await expect(certificates).toContainText(/Issued \d{1,2} \w+ \d{4} · expires \d{1,2} \w+ \d{4}/);
     await expect(certificates).not.toContainText(/\d{4} to \d/);

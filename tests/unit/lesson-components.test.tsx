@@ -133,6 +133,12 @@ describe("the calculator's rules in words", () => {
     expect(parseCmInput("")).toBeNull();
     expect(parseCmInput("eighty")).toBeNull();
     expect(parseCmInput("-3")).toBeNull();
+    // The unit the field asks for may be typed after the number; no other unit is guessed at.
+    expect(parseCmInput("287 cm")).toBe(287);
+    expect(parseCmInput("287cm")).toBe(287);
+    expect(parseCmInput("87,5 CM")).toBe(87.5);
+    expect(parseCmInput("2870 mm")).toBeNull();
+    expect(parseCmInput("cm")).toBeNull();
     expect(formatCm(0.25)).toBe("0.25");
     expect(formatSignedCm(-4)).toBe("−4");
   });

@@ -24,7 +24,7 @@ export default async function MyCertificatesPage() {
       <PageTitle lead="What a coach has signed off, and whether you may rig without one.">
         Your certificates
       </PageTitle>
-      <ClearanceSummary actor={actor} />
+      <ClearanceSummary actor={actor} onCertificatesPage />
 
       <section aria-labelledby="practicals-heading" className="rounded-lg bg-white p-4 shadow-sm">
         <h2 id="practicals-heading" className="mb-3 text-lg font-semibold">
