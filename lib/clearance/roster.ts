@@ -83,3 +83,11 @@ export const rosterCellLabels: Record<ModuleStatus, string> = {
   passed: "Passed",
   expired: "Expired",
 };
+
+/** The roster view's query string: only what differs from the defaults ("" for everyone, no search). */
+export function rosterViewQuery(filter: RosterFilter, search: string): string {
+  const params = new URLSearchParams();
+  if (filter !== "all") params.set("filter", filter);
+  if (search.trim() !== "") params.set("q", search.trim());
+  return params.toString();
+}

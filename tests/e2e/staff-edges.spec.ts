@@ -124,6 +124,28 @@ test.describe("coach and admin edges", () => {
     expect(pageScrolls, "no sideways scrolling of the page at 390 px").toBe(false);
   });
 
+  test("the roster keeps its filter and search through opening an athlete, the back button and a reload", async ({ page }) => {
+    await signIn(page, demo.coach);
+    await page.goto("/roster");
+    await page.getByLabel("Show").selectOption({ label: "Cleared to rig unsupervised" });
+    await page.getByLabel("Search by name").fill("femi");
+    await expect(page).toHaveURL(/\/roster\?filter=cleared&q=femi$/);
+    await page.getByRole("link", { name: "Femi Ashdown" }).click();
+    await expect(page.getByTestId("athlete-clearance")).toBeVisible();
+    await page.goBack();
+    await expect(page.getByLabel("Show")).toHaveValue("cleared");
+    await expect(page.getByLabel("Search by name")).toHaveValue("femi");
+    await expect(page.getByRole("row", { name: /Femi Ashdown/ })).toBeVisible();
+    await page.reload();
+    await expect(page.getByLabel("Search by name")).toHaveValue("femi");
+    await expect(page.getByRole("row")).toHaveCount(2); // the header and Femi
+
+    // Back to everyone: the address drops what is not needed.
+    await page.getByLabel("Show").selectOption({ label: "Everyone" });
+    await page.getByLabel("Search by name").fill("");
+    await expect(page).toHaveURL(/\/roster$/);
+  });
+
   test("a coach reads the last day a clearance holds, never 'until' the day it has already run out", async ({
     page,
   }) => {

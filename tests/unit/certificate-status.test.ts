@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { certificateStatus } from "@/lib/certificates/status";
 import { openBadgeCredential } from "@/lib/certificates/open-badge";
-import { rosterRowMatches, type RosterRow } from "@/lib/clearance/roster";
+import { rosterRowMatches, rosterViewQuery, type RosterRow } from "@/lib/clearance/roster";
 
 describe("certificate status", () => {
   const moduleCertificate = { kind: "module" as const, expiresOn: "2027-03-14", revoked: false };
@@ -81,5 +81,19 @@ describe("roster filters", () => {
     expect(rosterRowMatches(row({ waitingForMe: 1 }), "waiting-for-me", "BARR", "2026-06-01")).toBe(true);
     expect(rosterRowMatches(row({}), "waiting-for-me", "", "2026-06-01")).toBe(false);
     expect(rosterRowMatches(row({}), "all", "nobody", "2026-06-01")).toBe(false);
+  });
+});
+
+describe("roster view in the address", () => {
+  it("writes only what differs from everyone-and-no-search, and reads back through the page's schema", async () => {
+    const { queryObject, rosterQuerySchema } = await import("@/lib/validations/certification");
+    expect(rosterViewQuery("all", "")).toBe("");
+    expect(rosterViewQuery("all", "   ")).toBe("");
+    expect(rosterViewQuery("waiting-for-me", "")).toBe("filter=waiting-for-me");
+    expect(rosterViewQuery("cleared", " Øde gård & co ")).toBe("filter=cleared&q=%C3%98de+g%C3%A5rd+%26+co");
+    const back = rosterQuerySchema.parse(queryObject(Object.fromEntries(new URLSearchParams(rosterViewQuery("cleared", "Øde gård & co")))));
+    expect(back).toEqual({ filter: "cleared", q: "Øde gård & co" });
+    // A hand-edited address falls back instead of failing the page.
+    expect(rosterQuerySchema.parse(queryObject({ filter: "bogus", q: ["a", "b"] }))).toMatchObject({ filter: "all" });
   });
 });

@@ -2,6 +2,7 @@
 
 import { useEffect, useId, useMemo, useState } from "react";
 import Link from "next/link";
+import { useSearchParams } from "next/navigation";
 import {
   createColumnHelper,
   flexRender,
@@ -18,10 +19,11 @@ import {
   rosterCellLabels,
   rosterFilterLabels,
   rosterRowMatches,
+  rosterViewQuery,
   type RosterMatrix,
   type RosterRow,
 } from "@/lib/clearance/roster";
-import { rosterFilters, type RosterFilter } from "@/lib/validations/certification";
+import { queryObject, rosterFilters, rosterQuerySchema, type RosterFilter } from "@/lib/validations/certification";
 
 const clearanceRank: Record<ClearanceState, number> = {
   cleared: 0,
@@ -67,14 +69,25 @@ type Load =
 /**
  * The coach's roster: athletes × modules from GET /api/roster/matrix, sortable by any column, filtered
  * by clearance or waiting sign-offs, searchable by name. On a phone the table scrolls sideways with the
- * names kept in view; every status is words and an icon.
+ * names kept in view; every status is words and an icon. The filter and search are kept in the address
+ * (`?filter=&q=`, replaced rather than pushed), so a coach who opens an athlete and comes back, or
+ * reloads, finds the roster as they left it.
  */
 export function RosterMatrixView() {
   const searchId = useId();
   const filterId = useId();
+  // Read once, as the roster opens (also when the back button returns to it); a bad value falls back.
+  const searchParams = useSearchParams();
+  const [initial] = useState(() => rosterQuerySchema.parse(queryObject(searchParams)));
   const [load, setLoad] = useState<Load>({ state: "loading" });
-  const [filter, setFilter] = useState<RosterFilter>("all");
-  const [search, setSearch] = useState("");
+  const [filter, setFilter] = useState<RosterFilter>(initial.filter);
+  const [search, setSearch] = useState(initial.q);
+
+  useEffect(() => {
+    const query = rosterViewQuery(filter, search);
+    const wanted = `${window.location.pathname}${query ? `?${query}` : ""}`;
+    if (`${window.location.pathname}${window.location.search}` !== wanted) window.history.replaceState(window.history.state, "", wanted);
+  }, [filter, search]);
   const [sorting, setSorting] = useState<SortingState>([{ id: "name", desc: false }]);
 
   useEffect(() => {
