@@ -3,7 +3,7 @@ import { Op, type Transaction } from "sequelize";
 import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { recordAudit } from "@/lib/data/audit";
-import { inviteMembers } from "@/lib/data/users";
+import { inviteMembers, openInvitationWhere } from "@/lib/data/users";
 import type { MemberSummary } from "@/lib/data/members";
 import { assertAllowed, assertVisible, canChangeMember, canManageClub, type Actor } from "@/lib/auth/permissions";
 import type { Role, UserStatus } from "@/lib/auth/roles";
@@ -99,7 +99,7 @@ export async function importRoster(actor: Actor, text: string): Promise<RosterIm
   const [users, invitations] = await Promise.all([
     User.findAll({ where: { email: { [Op.in]: emails } }, attributes: ["email"] }),
     Invitation.findAll({
-      where: { clubId: actor.clubId, email: { [Op.in]: emails }, acceptedAt: null, expiresAt: { [Op.gt]: new Date() } },
+      where: { clubId: actor.clubId, email: { [Op.in]: emails }, ...openInvitationWhere() },
       attributes: ["email"],
     }),
   ]);

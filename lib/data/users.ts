@@ -137,7 +137,7 @@ export async function inviteMember(actor: Actor, input: InvitationInput): Promis
     const now = new Date();
     const [withdrawn] = await Invitation.update(
       { expiresAt: now },
-      { where: { clubId: actor.clubId, email, acceptedAt: null, expiresAt: { [Op.gt]: now } }, transaction },
+      { where: { clubId: actor.clubId, email, ...openInvitationWhere(now) }, transaction },
     );
     const created = await Invitation.create(
       {
@@ -238,10 +238,13 @@ export interface PendingInvitation {
   clubName: string;
 }
 
+/** What makes an invitation open at `now`: not accepted, not expired (nor withdrawn, which expires it). */
+export function openInvitationWhere(now: Date = new Date()) {
+  return { acceptedAt: null, expiresAt: { [Op.gt]: now } };
+}
+
 async function openInvitation(token: string): Promise<Invitation | null> {
-  const invitation = await Invitation.findOne({
-    where: { tokenHash: hashToken(token), acceptedAt: null, expiresAt: { [Op.gt]: new Date() } },
-  });
+  const invitation = await Invitation.findOne({ where: { tokenHash: hashToken(token), ...openInvitationWhere() } });
   return invitation;
 }
 
