@@ -128,13 +128,17 @@ export function registerQuerySchemaFor(moduleSlugs: readonly string[]) {
     });
 }
 
+/** The register filters that differ from the defaults: what the page puts in its download links. */
+export function registerFilterQuery(filter: RegisterFilter): Record<string, string> {
+  return Object.fromEntries(Object.entries(filter).filter(([, value]) => value !== "" && value !== "all"));
+}
+
 /**
  * Why the register page's filters would be refused by its downloads (`registerQuerySchemaFor`), in
  * the page's own words; empty when the CSV and PDF links will answer. The page itself is lenient.
  */
 export function registerDownloadProblems(filter: RegisterFilter, moduleSlugs: readonly string[]): string[] {
-  const query = Object.fromEntries(Object.entries(filter).filter(([, value]) => value !== "" && value !== "all"));
-  const parsed = registerQuerySchemaFor(moduleSlugs).safeParse(query);
+  const parsed = registerQuerySchemaFor(moduleSlugs).safeParse(registerFilterQuery(filter));
   if (parsed.success) return [];
   return parsed.error.issues.map((issue) =>
     issue.path[0] === "to"

@@ -7,7 +7,7 @@ import { registerFor } from "@/lib/data/register";
 import { listModules } from "@/lib/content/modules";
 import { certificateStatusLabels } from "@/lib/certificates/status";
 import { Notice } from "@/components/ui/notice";
-import { queryObject, registerDownloadProblems, registerFilterSchema, registerStatuses } from "@/lib/validations/certification";
+import { queryObject, registerDownloadProblems, registerFilterQuery, registerFilterSchema, registerStatuses } from "@/lib/validations/certification";
 
 export const metadata: Metadata = { title: "Induction register" };
 
@@ -23,9 +23,7 @@ export default async function RegisterPage({
   const filter = registerFilterSchema.parse(queryObject(await searchParams));
   const register = await registerFor(actor, filter);
   const modules = listModules();
-  const query = new URLSearchParams(
-    Object.entries(filter).filter(([, value]) => value !== "" && value !== "all"),
-  ).toString();
+  const query = new URLSearchParams(registerFilterQuery(filter)).toString();
   const suffix = query ? `?${query}` : "";
   const problems = registerDownloadProblems(filter, modules.map((meta) => meta.slug));
 
