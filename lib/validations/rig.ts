@@ -2,7 +2,11 @@ import { z } from "zod";
 
 import { oarTypes, type OarType } from "@/lib/rigging/types";
 
-/** Sane overall lengths by oar type, cm; an oar of 300 cm or more cannot be a scull, one of 300 cm or less cannot be a sweep oar. */
+/**
+ * Sane overall lengths by oar type, cm (common practice, no source: wide bounds around the usual scull and
+ * sweep lengths, to catch typos); an oar of 300 cm or more cannot be a scull, one of 300 cm or less cannot
+ * be a sweep oar.
+ */
 export const saneLengthCm = {
   sculling: { min: 250, max: 300 },
   sweep: { min: 330, max: 400 },
