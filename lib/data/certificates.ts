@@ -104,8 +104,13 @@ export async function renderStoredCertificate(certificate: Certificate): Promise
     readClubLogo(certificate.clubId),
     pdfFonts(),
   ]);
-  // A clearance PDF made while a coach's suspension stands says so (the page would otherwise read as valid).
+  // A PDF made after expiry, or of a clearance while a coach's suspension stands, says so on the page.
   const suspended = certificate.kind === "clearance" && (await suspendedAthletes([certificate.athleteId])).has(certificate.athleteId);
+  const status = certificateStatus(
+    { kind: certificate.kind, expiresOn: certificate.expiresOn, revoked: certificate.revokedAt !== null },
+    isoDateOf(new Date()),
+    suspended,
+  );
   let lines: string[];
   if (certificate.kind === "module") {
     const assessment = certificate.assessmentId
@@ -129,8 +134,7 @@ export async function renderStoredCertificate(certificate: Certificate): Promise
       serial: certificate.serial,
       verifyUrl: verifyUrlFor(certificate.verificationCode),
       logo,
-      revoked: certificate.revokedAt !== null,
-      suspended,
+      status,
     },
     fonts,
   );

@@ -3,6 +3,7 @@ import QRCode from "qrcode";
 import type { FontBytes } from "@/lib/pdf/fonts";
 import { embedPlainFont, fitText, fitTextShrinking, textWidth, wrapCharacters, wrapText } from "@/lib/pdf/text";
 import { formatLongDate } from "@/lib/clearance/dates";
+import type { CertificateStatus } from "@/lib/certificates/status";
 
 /** A4 in PDF points. */
 export const a4Portrait = { width: 595.28, height: 841.89 } as const;
@@ -38,12 +39,31 @@ export interface CertificatePdfInput {
   serial: string;
   verifyUrl: string;
   logo: LogoImage | null;
-  revoked: boolean;
   /**
-   * A clearance whose athlete a coach has suspended, as the PDF is made: stamped SUSPENDED, since the
-   * page otherwise says they may rig unsupervised. Ignored for module certificates and when revoked.
+   * The certificate's status on the day the PDF is made (`certificateStatus`). Anything but valid is
+   * stamped across the page with a line saying why, since the page otherwise reads as a valid pass or as
+   * leave to rig unsupervised: revoked, expired, or (a clearance only) suspended by a coach.
    */
-  suspended: boolean;
+  status: CertificateStatus;
+}
+
+/** The stamp across a certificate that is no longer valid, and the line under the caution saying why. */
+export function certificateStamp(
+  input: Pick<CertificatePdfInput, "kind" | "status" | "expiresOn">,
+): { word: string; notice: string | null } | null {
+  if (input.status === "revoked") return { word: "REVOKED", notice: null };
+  if (input.status === "expired") {
+    const after =
+      input.kind === "clearance" ? "Rig with a coach standing by until it is renewed." : "Ask a coach about renewing it.";
+    return { word: "EXPIRED", notice: `Expired on ${formatLongDate(input.expiresOn)}: no longer valid. ${after}` };
+  }
+  if (input.status === "suspended" && input.kind === "clearance") {
+    return {
+      word: "SUSPENDED",
+      notice: "Suspended by a coach: not valid while the suspension stands. Rig with a coach standing by.",
+    };
+  }
+  return null;
 }
 
 function centred(page: PDFPage, text: string, font: PDFFont, size: number, y: number, color = ink): void {
@@ -268,11 +288,11 @@ export async function renderCertificatePdf(
     cautionY -= 10.5;
   }
 
-  const stamp = input.revoked ? "REVOKED" : input.kind === "clearance" && input.suspended ? "SUSPENDED" : null;
+  const stamp = certificateStamp(input);
   if (stamp) {
-    const size = stamp === "REVOKED" ? 96 : 80;
-    page.drawText(stamp, {
-      x: width / 2 - textWidth(bold, stamp, size) / 2 + 40,
+    const size = stamp.word === "SUSPENDED" ? 80 : 96;
+    page.drawText(stamp.word, {
+      x: width / 2 - textWidth(bold, stamp.word, size) / 2 + 40,
       y: height / 2 - 160,
       size,
       font: bold,
@@ -281,10 +301,9 @@ export async function renderCertificatePdf(
       rotate: degrees(35),
     });
   }
-  if (stamp === "SUSPENDED") {
-    const notice = "Suspended by a coach: not valid while the suspension stands. Rig with a coach standing by.";
+  if (stamp?.notice) {
     let noticeY = cautionY - 4;
-    for (const line of wrapText(bold, notice, 9, right - left)) {
+    for (const line of wrapText(bold, stamp.notice, 9, right - left)) {
       page.drawText(line, { x: left, y: noticeY, size: 9, font: bold, color: alarm });
       noticeY -= 11.5;
     }

@@ -28,8 +28,7 @@ function sampleCertificate(index: number): CertificatePdfInput {
     serial: `LRR-2026-${String(index + 1).padStart(4, "0")}`,
     verifyUrl: "http://127.0.0.1:3000/verify/bench-sample-code-not-real",
     logo: null,
-    revoked: false,
-    suspended: false,
+    status: "valid",
   };
 }
 

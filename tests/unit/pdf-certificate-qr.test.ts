@@ -28,8 +28,7 @@ describe("certificate QR code", () => {
         serial: "TST-2026-0002",
         verifyUrl,
         logo: null,
-        revoked: false,
-        suspended: false,
+        status: "valid",
       },
       await pdfFonts(),
     );

@@ -78,8 +78,7 @@ const international: CertificatePdfInput = {
   serial: "TST-2026-0001",
   verifyUrl: "http://127.0.0.1:3000/verify/test-code",
   logo: null,
-  revoked: false,
-  suspended: false,
+  status: "valid",
 };
 
 const internationalRegister: RegisterPdfInput = {
@@ -197,19 +196,25 @@ describe("PDF fonts", () => {
     expect(text(await renderCertificatePdf(international, fonts))).toContain("whether it is valid, expired or revoked.");
   });
 
-  it("stamps a clearance printed while it is suspended, and only a clearance; revoked wins", async () => {
+  it("stamps a certificate that is not valid as it is printed, saying why: suspended, expired, revoked", async () => {
     const fonts = await pdfFonts();
     // -raw: in content order, so the rotated stamp comes back as one word.
     const text = async (input: CertificatePdfInput) =>
       execFileSync("pdftotext", ["-raw", writePdf(await renderCertificatePdf(input, fonts)), "-"], { encoding: "utf8" });
-    const notice = "Suspended by a coach: not valid while the suspension stands.";
-    const suspendedClearance = await text({ ...international, kind: "clearance", suspended: true });
+    const suspendedClearance = await text({ ...international, kind: "clearance", status: "suspended" });
     expect(suspendedClearance).toContain("SUSPENDED");
-    expect(suspendedClearance).toContain(notice);
-    expect(await text({ ...international, kind: "clearance" })).not.toContain("SUSPENDED");
+    expect(suspendedClearance).toContain("Suspended by a coach: not valid while the suspension stands.");
+    const valid = await text({ ...international, kind: "clearance" });
+    for (const word of ["SUSPENDED", "EXPIRED", "REVOKED"]) expect(valid).not.toContain(word);
     // A suspension stops the clearance, not the module passes it stands on.
-    expect(await text({ ...international, kind: "module", suspended: true })).not.toContain("SUSPENDED");
-    const revoked = await text({ ...international, kind: "clearance", suspended: true, revoked: true });
+    expect(await text({ ...international, kind: "module", status: "suspended" })).not.toContain("SUSPENDED");
+    // expiresOn is the first day the pass no longer counts, so that is the day it expired.
+    const expiredModule = await text({ ...international, status: "expired" });
+    expect(expiredModule).toContain("EXPIRED");
+    expect(expiredModule).toContain("Expired on 20 November 2027: no longer valid. Ask a coach about renewing it.");
+    const expiredClearance = await text({ ...international, kind: "clearance", status: "expired" });
+    expect(expiredClearance).toContain("Rig with a coach standing by until it is renewed.");
+    const revoked = await text({ ...international, kind: "clearance", status: "revoked" });
     expect(revoked).toContain("REVOKED");
     expect(revoked).not.toContain("SUSPENDED");
   });
