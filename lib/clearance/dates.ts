@@ -44,3 +44,8 @@ export function formatLongDate(isoDate: string): string {
 export function lastValidDay(expiresOn: string): string {
   return addDaysIso(expiresOn, -1);
 }
+
+/** "expires" or, from `expiresOn` on (the first day it no longer counts), "expired": for "expired 3 Oct". */
+export function expiryVerb(expiresOn: string, today: string): "expires" | "expired" {
+  return today >= expiresOn ? "expired" : "expires";
+}

@@ -199,6 +199,24 @@ test("a suspended athlete reads the coach's reason with one full stop, and that 
   expect(text).toContain("Suspended by a coach: not valid while the suspension stands.");
 });
 
+test("a certificate printed after it has expired is stamped EXPIRED and says on which day", async ({ page }) => {
+  // lena (lib/seed/demo-certification.ts): every module signed off 410 days ago, so every pass has expired.
+  await signIn(page, "lena@lantern-reach.example");
+  await page.goto("/learn/certificates");
+  // The list says so too: "expired <day>", not "expires" with a day in the past.
+  await expect(page.getByTestId("my-certificates")).toContainText(/signed off by .+ · expired \d{1,2} [A-Z]/);
+  await expect(page.getByTestId("my-certificates")).not.toContainText("· expires");
+  const modulePdf = page.getByRole("link", { name: /Download PDF of Setting the inboard/ });
+  const response = await page.request.get((await modulePdf.first().getAttribute("href"))!);
+  expect(response.status()).toBe(200);
+  const file = path.join(os.tmpdir(), `slipway-expired-${process.pid}.pdf`);
+  fs.writeFileSync(file, await response.body());
+  const text = execFileSync("pdftotext", ["-raw", file, "-"], { encoding: "utf8" });
+  fs.rmSync(file);
+  expect(text).toContain("EXPIRED");
+  expect(text).toMatch(/Expired on \d{1,2} [A-Z][a-z]+ \d{4}: no longer valid\. Ask a coach about renewing it\./);
+});
+
 test("the grip-cleaning practical warns about the cleaning chemicals; the rigging practicals about the collar", async ({ page }) => {
   await signIn(page, demo.athlete);
   await page.goto("/learn/grip-cleaning/practical");

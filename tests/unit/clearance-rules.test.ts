@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { addMonthsIso, daysUntil, formatLongDate, isoDateOf, lastValidDay } from "@/lib/clearance/dates";
+import { addMonthsIso, daysUntil, expiryVerb, formatLongDate, isoDateOf, lastValidDay } from "@/lib/clearance/dates";
 import {
   clearanceFor,
   expiresWithin,
@@ -42,6 +42,12 @@ describe("dates", () => {
     expect(isPassCurrent(pass, pass.expiresOn)).toBe(false);
     expect(lastValidDay("2027-03-01")).toBe("2027-02-28");
     expect(lastValidDay("2027-01-01")).toBe("2026-12-31");
+  });
+
+  it("says a pass expires up to its last valid day, and expired from its expiry day on", () => {
+    expect(expiryVerb("2026-12-16", lastValidDay("2026-12-16"))).toBe("expires");
+    expect(expiryVerb("2026-12-16", "2026-12-16")).toBe("expired");
+    expect(expiryVerb("2026-12-16", "2027-01-02")).toBe("expired");
   });
 });
 

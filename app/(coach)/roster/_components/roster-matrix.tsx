@@ -15,6 +15,7 @@ import { LoadingState } from "@/components/ui/loading-state";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { ClearanceBadge, StatusBadge, moduleStatusTones } from "@/components/certify/status-badge";
 import { moduleStatusLabels, type ClearanceState, type ModuleStatus } from "@/lib/clearance/rules";
+import { expiryVerb } from "@/lib/clearance/dates";
 import {
   rosterCellLabels,
   rosterFilterLabels,
@@ -171,7 +172,9 @@ export function RosterMatrixView() {
                   label={rosterCellLabels[cell.status]}
                 />
                 {cell.expiresOn && (
-                  <span className="text-xs text-slate-700">expires {shortDate(cell.expiresOn)}</span>
+                  <span className="text-xs text-slate-700">
+                    {expiryVerb(cell.expiresOn, matrix.today)} {shortDate(cell.expiresOn)}
+                  </span>
                 )}
               </span>
             );

@@ -7,7 +7,7 @@ import { requirePageActor } from "@/lib/auth/session";
 import { certificatesOfAthlete } from "@/lib/data/certificates";
 import { clearanceOf } from "@/lib/data/clearance";
 import { listModules } from "@/lib/content/modules";
-import { formatLongDate } from "@/lib/clearance/dates";
+import { expiryVerb, formatLongDate, isoDateOf } from "@/lib/clearance/dates";
 
 export const metadata: Metadata = { title: "Your certificates" };
 
@@ -19,6 +19,7 @@ export default async function MyCertificatesPage() {
     clearanceOf(actor),
   ]);
   const titles = new Map(listModules().map((meta) => [meta.slug, meta.title]));
+  const today = isoDateOf(new Date());
   return (
     <div className="space-y-6">
       <PageTitle lead="What a coach has signed off, and whether you may rig without one.">
@@ -61,7 +62,8 @@ export default async function MyCertificatesPage() {
                 </div>
                 <p className="text-sm text-slate-700">
                   {certificate.serial} · signed off by {certificate.signedOffByName} on{" "}
-                  {formatLongDate(certificate.issuedOn)} · expires {formatLongDate(certificate.expiresOn)}
+                  {formatLongDate(certificate.issuedOn)} · {expiryVerb(certificate.expiresOn, today)}{" "}
+                  {formatLongDate(certificate.expiresOn)}
                 </p>
                 <p className="flex flex-wrap gap-x-4">
                   <a

@@ -5,6 +5,7 @@ import { rosterMatrix } from "@/lib/data/clearance";
 import { csvDownloadHeaders, toCsv, type CsvColumn } from "@/lib/csv/export";
 import { rosterRowMatches, type RosterRow } from "@/lib/clearance/roster";
 import { clearanceStateLabels, moduleStatusLabels } from "@/lib/clearance/rules";
+import { expiryVerb } from "@/lib/clearance/dates";
 import { rosterExportQuerySchema } from "@/lib/validations/certification";
 
 export const dynamic = "force-dynamic";
@@ -28,7 +29,7 @@ export const GET = route(async (request) => {
         const cell = row.modules[module.slug];
         if (!cell) return "";
         return cell.expiresOn
-          ? `${moduleStatusLabels[cell.status].label} (expires ${cell.expiresOn})`
+          ? `${moduleStatusLabels[cell.status].label} (${expiryVerb(cell.expiresOn, matrix.today)} ${cell.expiresOn})`
           : moduleStatusLabels[cell.status].label;
       },
     })),
