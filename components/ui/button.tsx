@@ -1,29 +1,38 @@
+"use client";
+
 import type { ButtonHTMLAttributes } from "react";
-
-type Variant = "primary" | "secondary" | "danger";
-
-const variants: Record<Variant, string> = {
-  primary: "bg-river-700 text-white hover:bg-river-800 disabled:bg-river-500",
-  secondary: "border border-river-700 bg-white text-river-800 hover:bg-river-100",
-  danger: "bg-alarm-600 text-white hover:bg-alarm-800",
-};
-
-export function buttonClasses(variant: Variant = "primary"): string {
-  return `inline-flex min-h-11 items-center justify-center gap-2 rounded-md px-4 py-2 font-semibold disabled:cursor-not-allowed ${variants[variant]}`;
-}
+import { useHydrated } from "@/components/ui/use-hydrated";
+import { buttonClasses, type ButtonVariant } from "@/components/ui/button-classes";
 
 interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
-  variant?: Variant;
+  variant?: ButtonVariant;
   pending?: boolean;
   pendingLabel?: string;
+  /**
+   * The button does its job without React: a plain form's submit (a GET filter, a server action's
+   * form). Every other button is disabled until the page has hydrated, so that a tap on the server's
+   * HTML is never lost, and never becomes the browser's own GET with the form's fields (a password…)
+   * in the address.
+   */
+  worksWithoutScript?: boolean;
 }
 
 /** A button at least 44 px high; while pending it is disabled and says what it is doing. */
-export function Button({ variant = "primary", pending, pendingLabel, children, className, disabled, ...rest }: ButtonProps) {
+export function Button({
+  variant = "primary",
+  pending,
+  pendingLabel,
+  worksWithoutScript = false,
+  children,
+  className,
+  disabled,
+  ...rest
+}: ButtonProps) {
+  const hydrated = useHydrated();
   return (
     <button
       {...rest}
-      disabled={disabled || pending}
+      disabled={disabled || pending || (!worksWithoutScript && !hydrated)}
       aria-busy={pending || undefined}
       className={`${buttonClasses(variant)} ${className ?? ""}`}
     >

@@ -39,6 +39,26 @@ test.describe("signing in", () => {
     await expect(page).toHaveURL(/\/roster$/);
   });
 
+  test("before the page's script runs, the sign-in button waits: a password never goes into the address", async ({ browser }) => {
+    // The server's HTML alone, as a slow phone has it before hydration.
+    const context = await browser.newContext({ javaScriptEnabled: false });
+    const page = await context.newPage();
+    try {
+      await page.goto("/sign-in");
+      const form = page.getByTestId("password-sign-in");
+      await expect(form.getByRole("button", { name: "Sign in" })).toBeDisabled();
+      await form.getByLabel("E-mail").fill(demo.athlete);
+      await form.getByLabel("Password").fill(demo.password);
+      // Enter in a field submits a form only through an enabled submit button.
+      await form.getByLabel("Password").press("Enter");
+      await page.waitForLoadState("load");
+      expect(page.url()).not.toContain(demo.password);
+      expect(new URL(page.url()).search).toBe("");
+    } finally {
+      await context.close();
+    }
+  });
+
   test("signing out ends the session", async ({ page }) => {
     await signIn(page, demo.athlete);
     await page.getByRole("button", { name: "Sign out" }).click();

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { PageTitle } from "@/components/ui/page-title";
-import { buttonClasses } from "@/components/ui/button";
+import { buttonClasses } from "@/components/ui/button-classes";
 import { RigNav, fleetLinks } from "@/components/rig/rig-nav";
 import { formatCm } from "@/components/lessons/lesson-format";
 import { requirePageActor } from "@/lib/auth/session";

@@ -4,7 +4,7 @@ import { notFound } from "next/navigation";
 import { getModule, listModules } from "@/lib/content/modules";
 import { renderLesson } from "@/lib/content/render";
 import { PageTitle } from "@/components/ui/page-title";
-import { buttonClasses } from "@/components/ui/button";
+import { buttonClasses } from "@/components/ui/button-classes";
 import { finishLessonAction } from "./actions";
 
 interface Props {

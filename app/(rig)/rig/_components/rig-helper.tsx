@@ -261,7 +261,7 @@ export function RigHelper({ boats, oarSets, limits, halfSwivelCm, userId, initia
           </div>
         </fieldset>
         <LiveStatus testId="helper-status">{problem && <Notice tone="error" title={problem} />}</LiveStatus>
-        <Button type="submit" disabled={!hydrated} pending={isSubmitting} pendingLabel="Working it out…" className="w-full">
+        <Button type="submit" pending={isSubmitting} pendingLabel="Working it out…" className="w-full">
           Show my steps
         </Button>
       </form>

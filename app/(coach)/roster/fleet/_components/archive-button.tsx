@@ -3,14 +3,12 @@
 import { useState, useTransition } from "react";
 import { useRouter } from "next/navigation";
 import { Button } from "@/components/ui/button";
-import { useHydrated } from "@/components/ui/use-hydrated";
 import { LiveStatus } from "@/components/ui/notice";
 import { setBoatArchivedAction, setOarSetArchivedAction } from "../actions";
 
 /** Archives (or restores) a boat or an oar set; nothing is deleted, so saved plans and cleanings keep their record. */
 export function ArchiveButton({ kind, id, name, archived }: { kind: "boat" | "oar-set"; id: number; name: string; archived: boolean }) {
   const router = useRouter();
-  const hydrated = useHydrated();
   const [pending, startTransition] = useTransition();
   const [message, setMessage] = useState<string | null>(null);
   const action = kind === "boat" ? setBoatArchivedAction : setOarSetArchivedAction;
@@ -19,7 +17,6 @@ export function ArchiveButton({ kind, id, name, archived }: { kind: "boat" | "oa
       <Button
         type="button"
         variant="secondary"
-        disabled={!hydrated}
         pending={pending}
         pendingLabel={archived ? "Restoring…" : "Archiving…"}
         aria-label={`${archived ? "Restore" : "Archive"} ${name}`}

@@ -4,7 +4,6 @@ import { useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Button } from "@/components/ui/button";
-import { useHydrated } from "@/components/ui/use-hydrated";
 import { SelectField, TextField } from "@/components/ui/field";
 import { boatClasses, boatClassLabel, oarTypeOfClass } from "@/lib/fleet/catalogue";
 import { boatWarnings, type LinkedOarSet } from "@/lib/fleet/warnings";
@@ -31,7 +30,6 @@ export function BoatForm({ boatId, initial, linkedSets = [], halfSwivelCm }: Boa
     defaultValues: initial ?? { name: "", boatClass: "1x", notes: "" },
   });
   const { errors, isSubmitting } = form.formState;
-  const hydrated = useHydrated();
   const [boatClass, spanCm, spreadCm] = useWatch({ control: form.control, name: ["boatClass", "spanCm", "spreadCm"] });
   const sculling = oarTypeOfClass(boatClass) === "sculling";
   const liveWarnings = boatWarnings({ boatClass, spanCm, spreadCm }, linkedSets, halfSwivelCm);
@@ -82,7 +80,7 @@ export function BoatForm({ boatId, initial, linkedSets = [], halfSwivelCm }: Boa
       )}
       <TextField label="Notes (optional)" autoComplete="off" error={errors.notes?.message} {...form.register("notes")} />
       <SaveFeedback testIdPrefix="boat-form" liveWarnings={liveWarnings} outcome={result} />
-      <Button type="submit" disabled={!hydrated} pending={isSubmitting} pendingLabel="Saving…" className="w-full sm:w-auto">
+      <Button type="submit" pending={isSubmitting} pendingLabel="Saving…" className="w-full sm:w-auto">
         {boatId === undefined ? "Add the boat" : "Save changes"}
       </Button>
     </form>

@@ -5,7 +5,6 @@ import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Button } from "@/components/ui/button";
-import { useHydrated } from "@/components/ui/use-hydrated";
 import { TextField } from "@/components/ui/field";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { formatIsoDate } from "@/lib/care/calendar";
@@ -17,7 +16,6 @@ type Status = { ok: boolean; message?: string } | null;
 /** The club's race days: add one (today or later), remove any. */
 export function RaceDaysForm({ raceDays, today }: { raceDays: string[]; today: string }) {
   const router = useRouter();
-  const hydrated = useHydrated();
   const [status, setStatus] = useState<Status>(null);
   const [pending, startTransition] = useTransition();
   const form = useForm<RaceDayInput>({ resolver: zodResolver(raceDaySchema), defaultValues: { raceDay: "" } });
@@ -54,7 +52,6 @@ export function RaceDaysForm({ raceDays, today }: { raceDays: string[]; today: s
               <Button
                 type="button"
                 variant="secondary"
-                disabled={!hydrated}
                 pending={pending}
                 aria-label={`Remove the race day ${formatIsoDate(day)}`}
                 onClick={() =>
@@ -75,7 +72,7 @@ export function RaceDaysForm({ raceDays, today }: { raceDays: string[]; today: s
         <div className="min-w-48 flex-1">
           <TextField label="Add a race day" type="date" min={today} error={errors.raceDay?.message} {...form.register("raceDay")} />
         </div>
-        <Button type="submit" disabled={!hydrated} pending={isSubmitting} pendingLabel="Adding…">
+        <Button type="submit" pending={isSubmitting} pendingLabel="Adding…">
           Add race day
         </Button>
       </form>
@@ -87,7 +84,6 @@ export function RaceDaysForm({ raceDays, today }: { raceDays: string[]; today: s
 /** Switches the humid spell, in which every oar set is due daily. */
 export function HumidSpellSwitch({ humidSpell }: { humidSpell: boolean }) {
   const router = useRouter();
-  const hydrated = useHydrated();
   const [status, setStatus] = useState<Status>(null);
   const [pending, startTransition] = useTransition();
   return (
@@ -100,7 +96,6 @@ export function HumidSpellSwitch({ humidSpell }: { humidSpell: boolean }) {
       <Button
         type="button"
         variant="secondary"
-        disabled={!hydrated}
         pending={pending}
         onClick={() =>
           startTransition(async () => {
@@ -119,12 +114,11 @@ export function HumidSpellSwitch({ humidSpell }: { humidSpell: boolean }) {
 
 /** Sends the cleaning digest to the club's coaches and admins now. */
 export function SendDigestButton() {
-  const hydrated = useHydrated();
   const [status, setStatus] = useState<Status>(null);
   const [pending, startTransition] = useTransition();
   return (
     <div className="space-y-2">
-      <Button type="button" disabled={!hydrated} pending={pending} pendingLabel="Sending…" onClick={() => startTransition(async () => setStatus(await sendDigestNowAction()))}>
+      <Button type="button" pending={pending} pendingLabel="Sending…" onClick={() => startTransition(async () => setStatus(await sendDigestNowAction()))}>
         Send the digest now
       </Button>
       <LiveStatus testId="digest-status">{status && <Notice tone={status.ok ? "success" : "error"} title={status.message} />}</LiveStatus>

@@ -4,7 +4,6 @@ import { useState } from "react";
 import { Controller, useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Button } from "@/components/ui/button";
-import { useHydrated } from "@/components/ui/use-hydrated";
 import { SelectField, TextField } from "@/components/ui/field";
 import { boatClassLabel, handleMechanismLabels, handleMechanisms, oarTypeLabels } from "@/lib/fleet/catalogue";
 import { oarSetWarnings } from "@/lib/fleet/warnings";
@@ -35,7 +34,6 @@ export function OarSetForm({ oarSetId, initial, boats, limits, defaultClickCm }:
     defaultValues: initial ?? { name: "", oarType: "sculling", clickCm: defaultClickCm, handleMechanism: "clamped-slide", boatIds: [], notes: "" },
   });
   const { errors, isSubmitting } = form.formState;
-  const hydrated = useHydrated();
   const [oarType, oarCount, targetLengthCm, targetInboardCm] = useWatch({
     control: form.control,
     name: ["oarType", "oarCount", "targetLengthCm", "targetInboardCm"],
@@ -146,7 +144,7 @@ export function OarSetForm({ oarSetId, initial, boats, limits, defaultClickCm }:
       />
       <TextField label="Notes (optional)" autoComplete="off" error={errors.notes?.message} {...form.register("notes")} />
       <SaveFeedback testIdPrefix="oar-set-form" liveWarnings={liveWarnings} outcome={result} />
-      <Button type="submit" disabled={!hydrated} pending={isSubmitting} pendingLabel="Saving…" className="w-full sm:w-auto">
+      <Button type="submit" pending={isSubmitting} pendingLabel="Saving…" className="w-full sm:w-auto">
         {oarSetId === undefined ? "Add the oar set" : "Save changes"}
       </Button>
     </form>

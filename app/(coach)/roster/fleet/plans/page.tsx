@@ -40,7 +40,7 @@ export default async function SavedPlansPage({ searchParams }: { searchParams: P
             ]}
           />
         </div>
-        <Button type="submit" variant="secondary">
+        <Button type="submit" variant="secondary" worksWithoutScript>
           Show
         </Button>
       </Form>

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { PageTitle } from "@/components/ui/page-title";
 import { Notice } from "@/components/ui/notice";
-import { buttonClasses } from "@/components/ui/button";
+import { buttonClasses } from "@/components/ui/button-classes";
 import { RigNav, memberRigLinks } from "@/components/rig/rig-nav";
 import { requirePageActor } from "@/lib/auth/session";
 import { isCoach } from "@/lib/auth/permissions";

@@ -5,7 +5,6 @@ import { useRouter } from "next/navigation";
 import { useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Button } from "@/components/ui/button";
-import { useHydrated } from "@/components/ui/use-hydrated";
 import { SelectField, TextField } from "@/components/ui/field";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { cleaningMethodLabels, cleaningMethods } from "@/lib/care/methods";
@@ -30,7 +29,6 @@ export function CleaningForm({ oarSets, members, me, today }: CleaningFormProps)
     defaultValues: { cleanedOn: today, method: "detergent-brush", note: "" },
   });
   const { errors, isSubmitting } = form.formState;
-  const hydrated = useHydrated();
   const method = useWatch({ control: form.control, name: "method" });
 
   const onSubmit = form.handleSubmit(async (values) => {
@@ -89,7 +87,7 @@ export function CleaningForm({ oarSets, members, me, today }: CleaningFormProps)
         {...form.register("note")}
       />
       <LiveStatus testId="cleaning-status">{result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}</LiveStatus>
-      <Button type="submit" disabled={!hydrated} pending={isSubmitting} pendingLabel="Recording…" className="w-full">
+      <Button type="submit" pending={isSubmitting} pendingLabel="Recording…" className="w-full">
         Record the cleaning
       </Button>
     </form>
