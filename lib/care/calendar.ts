@@ -7,6 +7,57 @@ export function localIsoDate(now: Date = new Date()): string {
   return `${now.getFullYear()}-${month}-${day}`;
 }
 
+/** The IANA time zone of the machine that asks (the server's, when a club has not chosen one). */
+export function machineTimeZone(): string {
+  return Intl.DateTimeFormat().resolvedOptions().timeZone;
+}
+
+const dayFormatters = new Map<string, Intl.DateTimeFormat>();
+
+function dayFormatter(timeZone: string): Intl.DateTimeFormat {
+  let formatter = dayFormatters.get(timeZone);
+  if (!formatter) {
+    // Throws a RangeError for a name Intl does not know.
+    formatter = new Intl.DateTimeFormat("en-GB", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" });
+    dayFormatters.set(timeZone, formatter);
+  }
+  return formatter;
+}
+
+/** Whether Intl knows `name` as a time zone ("Europe/Oslo", "UTC"): the check behind the club setting. */
+export function isTimeZone(name: string): boolean {
+  if (name.length === 0 || name.length > 64) return false;
+  try {
+    dayFormatter(name);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+/** Intl's own spelling of a zone it knows ("europe/oslo" is "Europe/Oslo"), so the stored name matches the list. */
+export function canonicalTimeZone(name: string): string {
+  return dayFormatter(name).resolvedOptions().timeZone;
+}
+
+/** The zones an administrator chooses from: UTC first, then Intl's list, with `current` kept if Intl lacks it. */
+export function timeZoneChoices(current: string): string[] {
+  const zones = new Set(["UTC", ...Intl.supportedValuesOf("timeZone")]);
+  if (isTimeZone(current)) zones.add(current);
+  const [first, ...rest] = [...zones];
+  return [first!, ...rest.sort()];
+}
+
+/**
+ * The calendar date (YYYY-MM-DD) at `now` in `timeZone`: the club's own "today", the same on the server
+ * and in any athlete's browser, wherever either of them is.
+ */
+export function isoDateInZone(timeZone: string, now: Date = new Date()): string {
+  const parts = dayFormatter(timeZone).formatToParts(now);
+  const part = (type: Intl.DateTimeFormatPartTypes) => parts.find((entry) => entry.type === type)?.value ?? "";
+  return `${part("year")}-${part("month")}-${part("day")}`;
+}
+
 /** ISO weekday of a day number: Monday 1 … Sunday 7 (day 0, 1970-01-01, was a Thursday). */
 function isoWeekday(dayNumber: number): number {
   return ((((dayNumber + 3) % 7) + 7) % 7) + 1;

@@ -6,7 +6,7 @@ import { recordAudit } from "@/lib/data/audit";
 import { assertAllowed, canManageFleet, type Actor } from "@/lib/auth/permissions";
 import { NotFoundError } from "@/lib/http/errors";
 import { consumeOrRefuse, namedLimiter } from "@/lib/auth/throttle";
-import { isoWeekOf, localIsoDate } from "@/lib/care/calendar";
+import { isoDateInZone, isoWeekOf } from "@/lib/care/calendar";
 import { cleaningDueState } from "@/lib/care/cleaning-due";
 import { buildCleaningDigest } from "@/lib/care/digest";
 import { publicBaseUrl } from "@/lib/env";
@@ -76,24 +76,31 @@ async function claimWeek(clubId: number, isoWeek: string): Promise<CleaningDiges
 }
 
 export interface DigestRun {
-  /** e.g. "2026-W49". */
-  isoWeek: string;
+  /** The ISO weeks ("2026-W49") of the digests sent: each club's own, in its time zone. */
+  isoWeeks: string[];
   /** Clubs whose digest went out in this run. */
   sentToClubs: number[];
 }
 
+/** Today in the club's own time zone. */
+function todayOfClub(club: Club, now: Date): string {
+  return isoDateInZone(readClubSettings(club.settings).timeZone, now);
+}
+
 /**
- * The weekly digest: for each club that has not had this ISO week's digest, claim the week in the
- * database (unique per club and week), mail every active coach and admin, then mark it sent. A claim is
- * dropped when mailing fails, so the next hourly check tries again; a restart never sends twice.
+ * The weekly digest: for each club that has not had this ISO week's digest (the week of the club's own
+ * today), claim the week in the database (unique per club and week), mail every active coach and admin,
+ * then mark it sent. A claim is dropped when mailing fails, so the next hourly check tries again; a
+ * restart never sends twice.
  */
 export async function sendWeeklyCleaningDigests(now: Date = new Date()): Promise<DigestRun> {
   await databaseReady();
-  const today = localIsoDate(now);
-  const isoWeek = isoWeekOf(today);
   const clubs = await Club.findAll();
   const sentToClubs: number[] = [];
+  const isoWeeks = new Set<string>();
   for (const club of clubs) {
+    const today = todayOfClub(club, now);
+    const isoWeek = isoWeekOf(today);
     const claimed = await claimWeek(club.id, isoWeek);
     if (claimed === null) continue;
     try {
@@ -107,12 +114,13 @@ export async function sendWeeklyCleaningDigests(now: Date = new Date()): Promise
         );
       });
       sentToClubs.push(club.id);
+      isoWeeks.add(isoWeek);
     } catch (error) {
       console.error(`Cleaning digest for club ${club.id} failed; it will be tried again at the next check`, error);
       await writeTransaction((transaction) => claimed.destroy({ transaction }));
     }
   }
-  return { isoWeek, sentToClubs };
+  return { isoWeeks: [...isoWeeks], sentToClubs };
 }
 
 /** Digests sent by hand per club an hour: enough to resend after fixing a record, not to flood inboxes. */
@@ -136,7 +144,7 @@ export async function sendCleaningDigestNow(actor: Actor, now: Date = new Date()
   const club = await Club.findByPk(actor.clubId);
   if (!club) throw new NotFoundError();
   await throttleManualDigest(club.id);
-  const today = localIsoDate(now);
+  const today = todayOfClub(club, now);
   const isoWeek = isoWeekOf(today);
   const mail = await composeDigest(club, today);
   await deliver(mail);

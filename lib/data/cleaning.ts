@@ -8,6 +8,7 @@ import { assertAllowed, canManageFleet, type Actor } from "@/lib/auth/permission
 import { NotFoundError, ValidationError } from "@/lib/http/errors";
 import { cleaningDueState, type CleaningDueState } from "@/lib/care/cleaning-due";
 import { dueStatus, type DueStatus } from "@/lib/care/due-status";
+import { isoDateInZone } from "@/lib/care/calendar";
 import type { CleaningMethod } from "@/lib/care/methods";
 import type { OarType } from "@/lib/rigging/types";
 import { readClubSettings } from "@/lib/validations/club-settings";
@@ -44,10 +45,12 @@ export interface CleaningOverview {
 /**
  * Every active oar set of the club with its last cleaning and whether it is due (cleaningDueState with
  * the club's race days and humid spell), due ones first; plus the latest log entries. Any member.
+ * `today` is the club's day at `now`, in its time zone.
  */
-export async function cleaningOverview(actor: Actor, today: string): Promise<CleaningOverview> {
+export async function cleaningOverview(actor: Actor, now: Date = new Date()): Promise<CleaningOverview> {
   await databaseReady();
   const settings = await rigSettingsFor(actor);
+  const today = isoDateInZone(settings.timeZone, now);
   const sets = await OarSet.findAll({ where: { clubId: actor.clubId, archivedAt: null } });
   const oarSets = await Promise.all(
     sets.map(async (set): Promise<OarSetCleaning> => {

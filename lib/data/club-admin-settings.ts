@@ -6,6 +6,7 @@ import { assertAllowed, canManageClub, type Actor } from "@/lib/auth/permissions
 import { ValidationError } from "@/lib/http/errors";
 import { listModules } from "@/lib/content/modules";
 import { readClubSettings } from "@/lib/validations/club-settings";
+import { timeZoneChoices } from "@/lib/care/calendar";
 import { formToSettings, settingsToForm, type ClubSettingsForm } from "@/lib/validations/club-settings-form";
 import { Club } from "@/models";
 
@@ -13,6 +14,8 @@ export interface ClubSettingsPageData {
   clubName: string;
   form: ClubSettingsForm;
   modules: { slug: string; title: string }[];
+  /** The time zones to choose from, the club's own among them. */
+  timeZones: string[];
   hasLogo: boolean;
 }
 
@@ -21,10 +24,12 @@ export async function clubSettingsForAdmin(actor: Actor): Promise<ClubSettingsPa
   await databaseReady();
   assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators change the club's settings.");
   const club = await Club.findByPk(actor.clubId);
+  const form = settingsToForm(readClubSettings(club?.settings));
   return {
     clubName: club?.name ?? "",
-    form: settingsToForm(readClubSettings(club?.settings)),
+    form,
     modules: listModules().map((meta) => ({ slug: meta.slug, title: meta.title })),
+    timeZones: timeZoneChoices(form.timeZone),
     hasLogo: !!club?.logoFile,
   };
 }

@@ -52,7 +52,7 @@ export interface SavedFleetRecord {
 }
 
 /** The settings the rig pages need from the club: limits, click, half swivel, race days, humid spell. */
-export type RigSettings = Pick<ClubSettings, "limits" | "clickCm" | "halfSwivelCm" | "raceDays" | "humidSpell">;
+export type RigSettings = Pick<ClubSettings, "limits" | "clickCm" | "halfSwivelCm" | "raceDays" | "humidSpell" | "timeZone">;
 
 function toBoatSummary(boat: Boat, oarSetIds: number[]): BoatSummary {
   return {
@@ -92,8 +92,8 @@ function byName<T extends { name: string }>(a: T, b: T): number {
 export async function rigSettingsFor(actor: Actor): Promise<RigSettings> {
   await databaseReady();
   const club = await Club.findByPk(actor.clubId);
-  const { limits, clickCm, halfSwivelCm, raceDays, humidSpell } = readClubSettings(club?.settings);
-  return { limits, clickCm, halfSwivelCm, raceDays, humidSpell };
+  const { limits, clickCm, halfSwivelCm, raceDays, humidSpell, timeZone } = readClubSettings(club?.settings);
+  return { limits, clickCm, halfSwivelCm, raceDays, humidSpell, timeZone };
 }
 
 /**

@@ -12,7 +12,9 @@ const store = globalThis as unknown as ScheduleGlobal;
 async function checkOnce(): Promise<void> {
   try {
     const run = await sendWeeklyCleaningDigests();
-    if (run.sentToClubs.length > 0) console.info(`Cleaning digest ${run.isoWeek} sent for ${run.sentToClubs.length} club(s).`);
+    if (run.sentToClubs.length > 0) {
+      console.info(`Cleaning digest ${run.isoWeeks.join(", ")} sent for ${run.sentToClubs.length} club(s).`);
+    }
   } catch (error) {
     console.error("Cleaning digest check failed; trying again in an hour", error);
   }

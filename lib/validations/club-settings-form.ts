@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { canonicalTimeZone, isTimeZone } from "@/lib/care/calendar";
 import { kebabCaseSchema } from "@/lib/content/module-schema";
 import { maxModuleSlugLength } from "@/lib/validations/learning";
 import type { ClubSettings } from "@/lib/validations/club-settings";
@@ -57,6 +58,10 @@ export const clubSettingsFormSchema = z.strictObject({
     .min(1, { error: "At least 1 month" })
     .max(60, { error: "At most 60 months" }),
   limits: z.strictObject({ sculling: oarLimitsSchema, sweep: oarLimitsSchema }),
+  timeZone: z
+    .string({ error: "Choose a time zone" })
+    .refine(isTimeZone, { error: "Choose a time zone from the list" })
+    .transform(canonicalTimeZone),
 });
 export type ClubSettingsForm = z.output<typeof clubSettingsFormSchema>;
 
@@ -69,6 +74,7 @@ export function settingsToForm(settings: ClubSettings): ClubSettingsForm {
     clearanceModules: [...settings.clearanceModules],
     clearanceMonths: settings.clearanceMonths,
     limits: { sculling: { ...settings.limits.sculling }, sweep: { ...settings.limits.sweep } },
+    timeZone: settings.timeZone,
   };
 }
 
@@ -82,5 +88,6 @@ export function formToSettings(form: ClubSettingsForm, stored: ClubSettings): Cl
     clearanceModules: [...new Set(form.clearanceModules)],
     clearanceMonths: form.clearanceMonths,
     limits: form.limits,
+    timeZone: form.timeZone,
   };
 }

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { isTimeZone, machineTimeZone } from "@/lib/care/calendar";
 
 const limitsSchema = z.strictObject({
   minLengthCm: z.number().finite().min(200).max(420),
@@ -27,6 +28,12 @@ export const clubSettingsSchema = z.object({
     }),
   raceDays: z.array(z.iso.date()).default([]),
   humidSpell: z.boolean().default(false),
+  /**
+   * The club's IANA time zone: what "today" is for cleanings, race days and the weekly digest. A club
+   * that has not chosen one, or whose stored name this machine does not know, keeps the server's zone
+   * (only this field falls back). Certification dates stay in UTC (lib/clearance/dates.ts).
+   */
+  timeZone: z.string().refine(isTimeZone).catch(() => machineTimeZone()),
 });
 
 export type ClubSettings = z.infer<typeof clubSettingsSchema>;

@@ -1,6 +1,6 @@
 import { expect, test } from "@playwright/test";
 import { demo, signIn, signedInContext } from "./support/auth";
-import { formatIsoDate, localIsoDate } from "@/lib/care/calendar";
+import { formatIsoDate, isoDateInZone, localIsoDate } from "@/lib/care/calendar";
 import { addDaysIso } from "@/lib/care/dates";
 
 /** Edges of the coach's and the administrator's pages: stale links, stale pages, stale messages. */
@@ -206,6 +206,35 @@ test.describe("coach and admin edges", () => {
     // Leave the calendar as the other specs expect it.
     await page.getByRole("button", { name: `Remove the race day ${formatIsoDate(day)}` }).click();
     await expect(status).toHaveText("✓ Race day removed.");
+  });
+
+  test("the club's time zone sets the day of the cleaning log, on the athletes' page too", async ({ page }) => {
+    // A zone whose date differs from UTC's right now: UTC+14 from 10:00 UTC, UTC-11 before 11:00 UTC
+    // (IANA Time Zone Database, IANA, 2025).
+    const zone = new Date().getUTCHours() >= 10 ? "Pacific/Kiritimati" : "Pacific/Pago_Pago";
+    await signIn(page, demo.admin);
+    await page.goto("/club/settings");
+    const timeZone = page.getByLabel("Time zone");
+    const original = await timeZone.inputValue();
+    const save = async (value: string) => {
+      await page.goto("/club/settings");
+      await page.getByLabel("Time zone").selectOption(value);
+      await page.getByRole("button", { name: "Save settings" }).click();
+      await expect(page.getByTestId("settings-status")).toContainText("Settings saved.");
+    };
+    await save(zone);
+    try {
+      await page.reload();
+      await expect(page.getByLabel("Time zone")).toHaveValue(zone);
+      const clubDay = isoDateInZone(zone);
+      await page.goto("/rig/care");
+      await expect(page.getByText(`Oar sets on ${formatIsoDate(clubDay)}`)).toBeVisible();
+      await expect(page.getByLabel("Day of the cleaning")).toHaveValue(clubDay);
+      await expect(page.getByLabel("Day of the cleaning")).toHaveAttribute("max", clubDay);
+    } finally {
+      // Leave the club in the zone the other specs expect (the server's, where they compute "today").
+      await save(original);
+    }
   });
 
   test("inviting an address again with another role says the earlier link no longer works", async ({ page }) => {

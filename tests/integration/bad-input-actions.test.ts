@@ -869,8 +869,11 @@ describe("the club's administration (as an admin)", () => {
             clearanceModules: { kind: "list" },
             clearanceMonths: { kind: "integer" },
             limits: { kind: "object" },
+            timeZone: { kind: "choice" },
           },
           [
+            v("timeZone unknown to Intl", { ...settings(), timeZone: "Mars/Olympus_Mons" }, "timeZone"),
+            v("timeZone an offset written by hand", { ...settings(), timeZone: "GMT+25:00" }, "timeZone"),
             v("passMarkPercent under 50", { ...settings(), passMarkPercent: 49 }, "passMarkPercent"),
             v("passMarkPercent over 100", { ...settings(), passMarkPercent: 101 }, "passMarkPercent"),
             v("passMarkPercent as a fraction of one", { ...settings(), passMarkPercent: 0.8 }, "passMarkPercent"),

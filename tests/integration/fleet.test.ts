@@ -18,6 +18,7 @@ import { listRigPlans, saveRigPlan } from "@/lib/data/rig-plans";
 import { addRaceDay, cleaningOverview, recordCleaning, removeRaceDay, setHumidSpell } from "@/lib/data/cleaning";
 import { sendCleaningDigestNow, sendWeeklyCleaningDigests } from "@/lib/data/cleaning-digest";
 import { listOutbox } from "@/lib/mail/outbox";
+import { clubToday } from "@/lib/data/club-settings";
 import { localIsoDate } from "@/lib/care/calendar";
 import { addDaysIso } from "@/lib/care/dates";
 import { planRigChange } from "@/lib/rigging/plan";
@@ -29,7 +30,7 @@ import type { Actor } from "@/lib/auth/permissions";
 import { ForbiddenError, NotFoundError, TooManyRequestsError, ValidationError } from "@/lib/http/errors";
 import { boatSchema, oarSetSchema } from "@/lib/validations/fleet";
 import { savedRigPlanSchema } from "@/lib/validations/rig-plans";
-import { cleaningRecordSchema } from "@/lib/validations/cleaning";
+import { cleaningRecordSchemaFor } from "@/lib/validations/cleaning";
 
 createTempDataDir("fleet");
 
@@ -93,7 +94,7 @@ describe("demo fleet seed", () => {
   });
 
   it("leaves one set overdue and one fine", async () => {
-    const overview = await cleaningOverview(athlete, localIsoDate());
+    const overview = await cleaningOverview(athlete);
     const byName = new Map(overview.oarSets.map((set) => [set.name, set]));
     expect(byName.get("Eight sweeps")?.state).toMatchObject({ due: true, reason: "over-7-days" });
     expect(byName.get("Green-band sculls")?.state).toMatchObject({ due: false, reason: "ok" });
@@ -234,10 +235,10 @@ describe("grip-cleaning log", () => {
   it("records a cleaning that makes a due set not due", async () => {
     const today = localIsoDate();
     const sweeps = await OarSet.findOne({ where: { name: "Eight sweeps" } });
-    const before = await cleaningOverview(athlete, today);
+    const before = await cleaningOverview(athlete);
     expect(before.oarSets.find((set) => set.oarSetId === sweeps!.id)?.status).toMatchObject({ due: true, label: "Overdue" });
-    await recordCleaning(athlete, cleaningRecordSchema.parse({ oarSetId: sweeps!.id, cleanedOn: today, method: "detergent-brush" }));
-    const after = await cleaningOverview(athlete, today);
+    await recordCleaning(athlete, cleaningRecordSchemaFor(today).parse({ oarSetId: sweeps!.id, cleanedOn: today, method: "detergent-brush" }));
+    const after = await cleaningOverview(athlete);
     const row = after.oarSets.find((set) => set.oarSetId === sweeps!.id);
     expect(row).toMatchObject({ lastCleanedOn: today, lastCleanedBy: "Ada Whitcombe", status: { due: false, icon: "✓" } });
     expect(after.recent[0]).toMatchObject({ oarSetName: "Eight sweeps", cleanedBy: "Ada Whitcombe" });
@@ -246,9 +247,9 @@ describe("grip-cleaning log", () => {
   it("refuses future dates, other clubs' sets and members, and 'other' without a note", async () => {
     const today = localIsoDate();
     const sweeps = await OarSet.findOne({ where: { name: "Eight sweeps" } });
-    expect(cleaningRecordSchema.safeParse({ oarSetId: sweeps!.id, cleanedOn: addDaysIso(today, 1), method: "wipe-down" }).success).toBe(false);
-    expect(cleaningRecordSchema.safeParse({ oarSetId: sweeps!.id, cleanedOn: today, method: "other" }).success).toBe(false);
-    const input = cleaningRecordSchema.parse({ oarSetId: sweeps!.id, cleanedOn: today, method: "wipe-down" });
+    expect(cleaningRecordSchemaFor(today).safeParse({ oarSetId: sweeps!.id, cleanedOn: addDaysIso(today, 1), method: "wipe-down" }).success).toBe(false);
+    expect(cleaningRecordSchemaFor(today).safeParse({ oarSetId: sweeps!.id, cleanedOn: today, method: "other" }).success).toBe(false);
+    const input = cleaningRecordSchemaFor(today).parse({ oarSetId: sweeps!.id, cleanedOn: today, method: "wipe-down" });
     await expect(recordCleaning(otherClubAthlete, input)).rejects.toBeInstanceOf(NotFoundError);
     await expect(recordCleaning(athlete, { ...input, cleanedById: otherClubAthlete.id })).rejects.toBeInstanceOf(ValidationError);
   });
@@ -268,7 +269,7 @@ describe("grip-cleaning log", () => {
     expect(await setHumidSpell(coach, false)).toMatchObject({ changed: false, humidSpell: false });
     expect(await calendarAudits()).toBe(calendarAuditsBefore);
     await setHumidSpell(coach, true);
-    const humid = await cleaningOverview(athlete, today);
+    const humid = await cleaningOverview(athlete);
     // Cleaned today: during a humid spell still fine today, due again tomorrow.
     expect(humid.oarSets.find((set) => set.name === "Eight sweeps")?.state).toMatchObject({ due: false, nextDueOn: addDaysIso(today, 1) });
     expect(humid.oarSets.find((set) => set.name === "Green-band sculls")?.state).toMatchObject({ due: true, reason: "humid-spell" });
@@ -282,7 +283,7 @@ describe("weekly cleaning digest", () => {
   it("mails every active coach and admin once per ISO week per club, remembered in the database", async () => {
     const monday = new Date(2030, 0, 7, 9, 0); // Monday 7 January 2030: ISO week 2030-W02
     const first = await sendWeeklyCleaningDigests(monday);
-    expect(first.isoWeek).toBe("2030-W02");
+    expect(first.isoWeeks).toEqual(["2030-W02"]);
     expect(first.sentToClubs).toEqual(expect.arrayContaining([admin.clubId, otherClubCoach.clubId]));
     const mails = await listOutbox();
     const digests = mails.filter((mail) => mail.subject.includes("2030-W02"));
@@ -326,6 +327,34 @@ describe("weekly cleaning digest", () => {
     });
     // Another club's coaches are counted on their own.
     await expect(sendCleaningDigestNow(otherClubCoach, wednesday)).resolves.toMatchObject({ isoWeek: "2030-W07" });
+  });
+
+  it("goes by each club's own time zone: its today, and the week of its digest", async () => {
+    const stored = new Map<number, Record<string, unknown>>();
+    const setZone = (clubId: number, timeZone: string) =>
+      writeTransaction(async (transaction) => {
+        const club = (await Club.findByPk(clubId, { transaction }))!;
+        stored.set(clubId, club.settings);
+        await club.update({ settings: { ...club.settings, timeZone } }, { transaction });
+      });
+    await setZone(coach.clubId, "UTC");
+    await setZone(otherClubCoach.clubId, "Pacific/Auckland");
+    try {
+      // Sunday 5 January 2031 at noon UTC is 01:00 on Monday 6 January in Auckland (UTC+13 in summer,
+      // IANA Time Zone Database, IANA, 2025): a new day there, and a new ISO week (2031-W02).
+      const sundayNoonUtc = new Date("2031-01-05T12:00:00Z");
+      expect(await clubToday(coach.clubId, sundayNoonUtc)).toBe("2031-01-05");
+      expect(await clubToday(otherClubCoach.clubId, sundayNoonUtc)).toBe("2031-01-06");
+      expect((await cleaningOverview(otherClubAthlete, sundayNoonUtc)).today).toBe("2031-01-06");
+      const run = await sendWeeklyCleaningDigests(sundayNoonUtc);
+      expect(run.isoWeeks.sort()).toEqual(["2031-W01", "2031-W02"]);
+      expect(await CleaningDigest.count({ where: { clubId: coach.clubId, isoWeek: "2031-W01", state: "sent" } })).toBe(1);
+      expect(await CleaningDigest.count({ where: { clubId: otherClubCoach.clubId, isoWeek: "2031-W02", state: "sent" } })).toBe(1);
+    } finally {
+      await writeTransaction(async (transaction) => {
+        for (const [clubId, settings] of stored) await Club.update({ settings }, { where: { id: clubId }, transaction });
+      });
+    }
   });
 });
 

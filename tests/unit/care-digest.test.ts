@@ -1,6 +1,14 @@
 import { describe, expect, it } from "vitest";
 
-import { formatIsoDate, isoWeekOf, localIsoDate } from "@/lib/care/calendar";
+import {
+  canonicalTimeZone,
+  formatIsoDate,
+  isoDateInZone,
+  isTimeZone,
+  isoWeekOf,
+  localIsoDate,
+  timeZoneChoices,
+} from "@/lib/care/calendar";
 import { cleaningDueState } from "@/lib/care/cleaning-due";
 import { addDaysIso } from "@/lib/care/dates";
 import { buildCleaningDigest, cleaningCautions } from "@/lib/care/digest";
@@ -27,6 +35,40 @@ describe("isoWeekOf (ISO 8601 week dates; values checked against Python's date.i
     expect(localIsoDate(new Date(2026, 11, 2, 23, 59))).toBe("2026-12-02");
     expect(localIsoDate(new Date(2026, 0, 5, 0, 1))).toBe("2026-01-05");
     expect(formatIsoDate("2026-12-02")).toBe("Wed 2 Dec 2026");
+  });
+});
+
+describe("the club's today, in its time zone", () => {
+  // Offsets from the IANA Time Zone Database (tzdata, IANA, 2025): New Zealand keeps daylight time
+  // (UTC+13) in December, California standard time (UTC-8), Kiribati's Line Islands UTC+14 all year.
+  const lateEvening = new Date("2026-12-02T23:30:00Z");
+  it.each([
+    ["UTC", "2026-12-02"],
+    ["Pacific/Auckland", "2026-12-03"],
+    ["America/Los_Angeles", "2026-12-02"],
+    ["Pacific/Kiritimati", "2026-12-03"],
+  ])("23:30 UTC on 2 December is %s's %s", (zone, day) => {
+    expect(isoDateInZone(zone, lateEvening)).toBe(day);
+  });
+
+  it("crosses a year and a week boundary with the zone, not with UTC", () => {
+    const newYear = new Date("2026-12-31T11:30:00Z"); // 00:30 on 1 January 2027 in Auckland
+    expect(isoDateInZone("Pacific/Auckland", newYear)).toBe("2027-01-01");
+    expect(isoDateInZone("UTC", newYear)).toBe("2026-12-31");
+    expect(isoDateInZone("America/Los_Angeles", new Date("2027-01-04T07:59:00Z"))).toBe("2027-01-03");
+  });
+
+  it("knows time zone names, and offers UTC first with the club's own kept", () => {
+    expect(isTimeZone("Europe/Oslo")).toBe(true);
+    expect(isTimeZone("UTC")).toBe(true);
+    expect(canonicalTimeZone("europe/oslo")).toBe("Europe/Oslo");
+    for (const bad of ["", "Mars/Olympus_Mons", "Europe/Oslo; DROP", "x".repeat(65)]) expect(isTimeZone(bad)).toBe(false);
+    const choices = timeZoneChoices("Etc/GMT-3");
+    expect(choices[0]).toBe("UTC");
+    expect(choices).toContain("Etc/GMT-3");
+    expect(choices).toContain("Pacific/Auckland");
+    expect(new Set(choices).size).toBe(choices.length);
+    expect(choices.every(isTimeZone)).toBe(true);
   });
 });
 

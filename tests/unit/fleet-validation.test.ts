@@ -1,10 +1,9 @@
 import { describe, expect, it } from "vitest";
 
-import { localIsoDate } from "@/lib/care/calendar";
 import { addDaysIso } from "@/lib/care/dates";
 import { boatClassLabel, oarTypeOfClass, rowersInClass } from "@/lib/fleet/catalogue";
 import { fieldErrorsFrom } from "@/lib/validations/issues";
-import { cleaningRecordSchema, raceDaySchema } from "@/lib/validations/cleaning";
+import { cleaningRecordSchemaFor, raceDaySchemaFor } from "@/lib/validations/cleaning";
 import { boatSchema, oarSetSchema } from "@/lib/validations/fleet";
 import { rigPlanRouteSchema, savedRigPlanSchema } from "@/lib/validations/rig-plans";
 
@@ -77,8 +76,11 @@ describe("oarSetSchema", () => {
   });
 });
 
-describe("cleaningRecordSchema and raceDaySchema", () => {
-  const today = localIsoDate();
+describe("cleaningRecordSchemaFor and raceDaySchemaFor", () => {
+  // The club's today, as clubToday gives it; a fixed day, so nothing here depends on the machine's clock.
+  const today = "2026-12-02";
+  const cleaningRecordSchema = cleaningRecordSchemaFor(today);
+  const raceDaySchema = raceDaySchemaFor(today);
   it("takes today or an earlier day, never a future one", () => {
     expect(cleaningRecordSchema.safeParse({ oarSetId: 1, cleanedOn: today, method: "wipe-down" }).success).toBe(true);
     expect(cleaningRecordSchema.safeParse({ oarSetId: 1, cleanedOn: addDaysIso(today, -6), method: "detergent-brush" }).success).toBe(true);

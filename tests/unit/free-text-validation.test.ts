@@ -1,8 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { localIsoDate } from "@/lib/care/calendar";
 import { checkRoster } from "@/lib/members/roster-import";
 import { assessmentSchemaFor, liftSuspensionSchema, revokeCertificateSchema, suspendClearanceSchema } from "@/lib/validations/certification";
-import { cleaningRecordSchema } from "@/lib/validations/cleaning";
+import { cleaningRecordSchemaFor } from "@/lib/validations/cleaning";
 import { boatSchema, oarSetSchema } from "@/lib/validations/fleet";
 import { acceptInvitationSchema, invitationSchema } from "@/lib/validations/members";
 
@@ -26,7 +25,7 @@ const names: [string, { safeParse: (input: unknown) => { success: boolean } }, R
 const notes: [string, { safeParse: (input: unknown) => { success: boolean } }, Record<string, unknown>, string][] = [
   ["a boat's notes", boatSchema, boat, "notes"],
   ["an oar set's notes", oarSetSchema, sculls, "notes"],
-  ["a cleaning's note", cleaningRecordSchema, { oarSetId: 1, cleanedOn: localIsoDate(), method: "wipe-down" }, "note"],
+  ["a cleaning's note", cleaningRecordSchemaFor("2026-12-02"), { oarSetId: 1, cleanedOn: "2026-12-02", method: "wipe-down" }, "note"],
   ["an assessment's note", assessmentSchemaFor([{ id: "seats-collar", label: "Seats the collar" }]), { items: { "seats-collar": "met" } }, "note"],
   ["a suspension's reason", suspendClearanceSchema, {}, "reason"],
   ["a lifted suspension's note", liftSuspensionSchema, {}, "note"],

@@ -17,7 +17,7 @@ export default async function ClubSettingsPage() {
       <PageTitle lead="Changes apply from now on: past quiz results keep their pass mark and certificates keep their dates.">
         {data.clubName}: settings
       </PageTitle>
-      <ClubSettingsFormView initial={data.form} modules={data.modules} />
+      <ClubSettingsFormView initial={data.form} modules={data.modules} timeZones={data.timeZones} />
       <section aria-labelledby="logo-heading" className="space-y-3 rounded-lg bg-white p-4 shadow-sm">
         <h2 id="logo-heading" className="text-lg font-semibold">
           Club logo

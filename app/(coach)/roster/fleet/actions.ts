@@ -8,7 +8,8 @@ import { addRaceDay, removeRaceDay, setHumidSpell } from "@/lib/data/cleaning";
 import { sendCleaningDigestNow } from "@/lib/data/cleaning-digest";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
 import { lookUpBy } from "@/lib/http/look-up";
-import { humidSpellSchema, raceDaySchema, removeRaceDaySchema } from "@/lib/validations/cleaning";
+import { humidSpellSchema, raceDaySchemaFor, removeRaceDaySchema } from "@/lib/validations/cleaning";
+import { clubToday } from "@/lib/data/club-settings";
 import { archiveSchema, boatSchema, oarSetSchema } from "@/lib/validations/fleet";
 import { recordIdValueSchema } from "@/lib/validations/ids";
 import { parseActionArgument, parseActionInput } from "@/lib/validations/issues";
@@ -129,7 +130,7 @@ export async function addRaceDayAction(input: unknown): Promise<ActionResult> {
   try {
     const actor = await requireActor();
     assertMayManageFleet(actor);
-    const parsed = parseActionInput(raceDaySchema, input);
+    const parsed = parseActionInput(raceDaySchemaFor(await clubToday(actor.clubId)), input);
     if (!parsed.success) return { ok: false, message: checkFields, fieldErrors: parsed.fieldErrors };
     const { changed } = await addRaceDay(actor, parsed.data.raceDay);
     refreshFleetPages();

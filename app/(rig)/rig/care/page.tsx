@@ -6,7 +6,7 @@ import { CleaningTable } from "@/components/rig/cleaning-table";
 import { requirePageActor } from "@/lib/auth/session";
 import { isCoach } from "@/lib/auth/permissions";
 import { cleaningOverview, clubMemberNames } from "@/lib/data/cleaning";
-import { formatIsoDate, localIsoDate } from "@/lib/care/calendar";
+import { formatIsoDate } from "@/lib/care/calendar";
 import { cleaningMethodLabels } from "@/lib/care/methods";
 import { CleaningForm } from "./_components/cleaning-form";
 
@@ -14,8 +14,8 @@ export const metadata: Metadata = { title: "Grip cleaning" };
 
 export default async function CarePage() {
   const actor = await requirePageActor("member", "/rig/care");
-  const today = localIsoDate();
-  const [overview, members] = await Promise.all([cleaningOverview(actor, today), clubMemberNames(actor)]);
+  const [overview, members] = await Promise.all([cleaningOverview(actor), clubMemberNames(actor)]);
+  const { today } = overview;
   const upcomingRaces = overview.raceDays.filter((day) => day >= today);
   return (
     <div className="space-y-6">

@@ -4,7 +4,7 @@ import { useState } from "react";
 import { useForm, type FieldPath } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { Button } from "@/components/ui/button";
-import { TextField } from "@/components/ui/field";
+import { SelectField, TextField } from "@/components/ui/field";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { clubSettingsFormSchema, type ClubSettingsForm } from "@/lib/validations/club-settings-form";
 import { saveClubSettingsAction } from "../actions";
@@ -29,13 +29,15 @@ const limitFields = [
   { key: "maxInboardCm", label: "Longest inboard (cm)" },
 ] as const;
 
-/** The club's settings: quiz numbers, what clearance needs and how long it lasts, and oar limits. */
+/** The club's settings: quiz numbers, what clearance needs and how long it lasts, oar limits, the club's day. */
 export function ClubSettingsFormView({
   initial,
   modules,
+  timeZones,
 }: {
   initial: ClubSettingsForm;
   modules: { slug: string; title: string }[];
+  timeZones: string[];
 }) {
   const [result, setResult] = useState<{ ok: boolean; message?: string } | null>(null);
   const form = useForm<ClubSettingsForm>({
@@ -145,6 +147,17 @@ export function ClubSettingsFormView({
           })}
         </fieldset>
       ))}
+
+      <fieldset className="rounded-lg bg-white p-4 shadow-sm">
+        <legend className="px-1 text-lg font-semibold">The club&apos;s day</legend>
+        <SelectField
+          label="Time zone"
+          hint="Where the club rows. It decides when a day starts for cleanings, race days and the weekly cleaning digest."
+          error={errorAt(errors, "timeZone")}
+          options={timeZones.map((zone) => ({ value: zone, label: zone.replaceAll("_", " ") }))}
+          {...form.register("timeZone")}
+        />
+      </fieldset>
 
       <div className="space-y-3">
         <Button type="submit" pending={isSubmitting} pendingLabel="Saving…">

@@ -1,6 +1,6 @@
 "use client";
 
-import { useState, useTransition } from "react";
+import { useMemo, useState, useTransition } from "react";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -8,7 +8,7 @@ import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { formatIsoDate } from "@/lib/care/calendar";
-import { raceDaySchema, type RaceDayInput } from "@/lib/validations/cleaning";
+import { raceDaySchemaFor, type RaceDayInput } from "@/lib/validations/cleaning";
 import { addRaceDayAction, removeRaceDayAction, sendDigestNowAction, setHumidSpellAction } from "../actions";
 
 type Status = { ok: boolean; message?: string } | null;
@@ -18,7 +18,8 @@ export function RaceDaysForm({ raceDays, today }: { raceDays: string[]; today: s
   const router = useRouter();
   const [status, setStatus] = useState<Status>(null);
   const [pending, startTransition] = useTransition();
-  const form = useForm<RaceDayInput>({ resolver: zodResolver(raceDaySchema), defaultValues: { raceDay: "" } });
+  const schema = useMemo(() => raceDaySchemaFor(today), [today]);
+  const form = useForm<RaceDayInput>({ resolver: zodResolver(schema), defaultValues: { raceDay: "" } });
   const { errors, isSubmitting } = form.formState;
 
   const submit = form.handleSubmit(async (values) => {

@@ -6,15 +6,15 @@ import { CleaningCautions } from "@/components/rig/cleaning-cautions";
 import { CleaningTable } from "@/components/rig/cleaning-table";
 import { requirePageActor } from "@/lib/auth/session";
 import { cleaningOverview } from "@/lib/data/cleaning";
-import { formatIsoDate, localIsoDate } from "@/lib/care/calendar";
+import { formatIsoDate } from "@/lib/care/calendar";
 import { HumidSpellSwitch, RaceDaysForm, SendDigestButton } from "../_components/calendar-forms";
 
 export const metadata: Metadata = { title: "Cleaning due" };
 
 export default async function CleaningDuePage() {
   const actor = await requirePageActor("coach", "/roster/fleet/care");
-  const today = localIsoDate();
-  const overview = await cleaningOverview(actor, today);
+  const overview = await cleaningOverview(actor);
+  const { today } = overview;
   const due = overview.oarSets.filter((set) => set.state.due);
   return (
     <div className="space-y-8">

@@ -1,6 +1,6 @@
 "use client";
 
-import { useState } from "react";
+import { useMemo, useState } from "react";
 import { useRouter } from "next/navigation";
 import { useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -8,7 +8,7 @@ import { Button } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { cleaningMethodLabels, cleaningMethods } from "@/lib/care/methods";
-import { cleaningRecordSchema, type CleaningRecordFormInput, type CleaningRecordInput } from "@/lib/validations/cleaning";
+import { cleaningRecordSchemaFor, type CleaningRecordFormInput, type CleaningRecordInput } from "@/lib/validations/cleaning";
 import { recordCleaningAction } from "../actions";
 
 interface CleaningFormProps {
@@ -24,8 +24,9 @@ const formFields = ["oarSetId", "cleanedOn", "cleanedById", "method", "note"] as
 export function CleaningForm({ oarSets, members, me, today }: CleaningFormProps) {
   const router = useRouter();
   const [result, setResult] = useState<{ ok: boolean; message?: string } | null>(null);
+  const schema = useMemo(() => cleaningRecordSchemaFor(today), [today]);
   const form = useForm<CleaningRecordFormInput, unknown, CleaningRecordInput>({
-    resolver: zodResolver(cleaningRecordSchema),
+    resolver: zodResolver(schema),
     defaultValues: { cleanedOn: today, method: "detergent-brush", note: "" },
   });
   const { errors, isSubmitting } = form.formState;
