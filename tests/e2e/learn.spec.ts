@@ -75,3 +75,44 @@ test("a submitted attempt cannot be submitted again, and another athlete's attem
   expect(foreign.status()).toBe(404);
   await other.close();
 });
+
+test("an order question counts as answered once a step is moved, through a reload; an unmoved order can still be handed in", async ({ page }) => {
+  await signIn(page, demo.secondAthlete);
+  const { attemptId } = await openQuiz(page, "grip-cleaning");
+  const questions = await storedQuestions(attemptId);
+  const total = questions.length;
+  expect(questions.filter((question) => question.kind === "order")).toHaveLength(1);
+  const count = page.getByText(/^\d+ of \d+ answered$/);
+  // Its shuffled starting order is not an answer yet.
+  await expect(count).toHaveText(`0 of ${total} answered`);
+  await answerQuiz(page, questions.filter((question) => question.kind !== "order"), false);
+  await expect(count).toHaveText(`${total - 1} of ${total} answered`);
+  await page.reload();
+  await expect(page.getByTestId("quiz-form")).toBeVisible();
+  await expect(count).toHaveText(`${total - 1} of ${total} answered`);
+
+  // Handed in unmoved, the shown order is the answer that is marked.
+  const order = questions.find((question) => question.kind === "order")!;
+  await page.getByRole("button", { name: "Hand in my answers" }).click();
+  await expect(page.getByTestId("quiz-outcome")).toContainText("Not passed yet: 0%");
+  const shown = order.choices!.map((choice) => choice.label).join(" → ");
+  await expect(page.getByText(`Not right: you answered ${shown}`)).toBeVisible();
+
+  const retake = page.waitForResponse((response) => response.url().endsWith("/api/modules/grip-cleaning/attempts"));
+  await page.getByRole("button", { name: "Try a fresh set of questions" }).click();
+  const fresh = (await (await retake).json()) as { attemptId: string; questions: { id: string; kind: string }[] };
+  const freshOrder = fresh.questions.find((question) => question.kind === "order")!;
+  await expect(count).toHaveText(`0 of ${fresh.questions.length} answered`);
+  const steps = page.getByTestId(`question-${freshOrder.id}`).locator("ol > li > span.flex-1");
+  const firstStep = (await steps.first().textContent())!;
+  await page.getByRole("button", { name: `Move "${firstStep}" down` }).click();
+  await expect(steps.nth(1)).toHaveText(firstStep);
+  await expect(count).toHaveText(`1 of ${fresh.questions.length} answered`);
+  // Moved back to where it started, it is still a deliberate answer, and stays one after a reload.
+  await page.getByRole("button", { name: `Move "${firstStep}" up` }).click();
+  await expect(steps.first()).toHaveText(firstStep);
+  await expect(count).toHaveText(`1 of ${fresh.questions.length} answered`);
+  await page.reload();
+  await expect(page.getByTestId("quiz-form")).toBeVisible();
+  await expect(count).toHaveText(`1 of ${fresh.questions.length} answered`);
+});

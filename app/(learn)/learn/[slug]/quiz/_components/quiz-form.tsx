@@ -5,6 +5,8 @@ import Link from "next/link";
 import { Controller, useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { PublicQuestion } from "@/lib/quiz/types";
+import { countAnswered, shownOrder } from "@/lib/quiz/answered";
+import { readSavedAnswers, writeSavedAnswers, type SavedAnswers } from "@/lib/quiz/saved-answers";
 import { Button } from "@/components/ui/button";
 import { buttonClasses } from "@/components/ui/button-classes";
 import { LiveStatus, Notice } from "@/components/ui/notice";
@@ -33,20 +35,27 @@ type Phase =
 
 const storageKey = (attemptId: string) => `slipway:quiz:${attemptId}`;
 
-function initialValues(opening: Opening): QuizFormValues {
+interface InitialState {
+  values: QuizFormValues;
+  movedOrders: string[];
+}
+
+/** The form's first values: each question's default, then what this phone kept for the attempt. */
+function initialState(opening: Opening): InitialState {
   const answers: Record<string, string | string[]> = {};
   for (const question of opening.questions) {
-    if (question.kind === "order") answers[question.id] = (question.choices ?? []).map((choice) => choice.id);
+    if (question.kind === "order") answers[question.id] = shownOrder(question);
     else if (question.kind === "multiple") answers[question.id] = [];
     else answers[question.id] = "";
   }
+  let saved: SavedAnswers | null = null;
   try {
-    const saved = window.localStorage.getItem(storageKey(opening.attemptId));
-    if (saved) Object.assign(answers, (JSON.parse(saved) as QuizFormValues).answers);
+    // A damaged copy reads as none: stored answers are a convenience.
+    saved = readSavedAnswers(window.localStorage.getItem(storageKey(opening.attemptId)), opening.questions);
   } catch {
-    // Stored answers are a convenience; a damaged copy is ignored.
+    // Storage may be refused (private browsing); the quiz still works.
   }
-  return { answers };
+  return { values: { answers: { ...answers, ...saved?.answers } }, movedOrders: saved?.movedOrders ?? [] };
 }
 
 async function readError(response: Response): Promise<string> {
@@ -120,18 +129,24 @@ function AnsweringForm({
   onGraded: (result: QuizResult, answers: Record<string, string | string[]>) => void;
 }) {
   const schema = useMemo(() => quizFormSchema(opening.questions), [opening.questions]);
-  const form = useForm<QuizFormValues>({ resolver: zodResolver(schema), defaultValues: initialValues(opening) });
+  const [initial] = useState(() => initialState(opening));
+  const form = useForm<QuizFormValues>({ resolver: zodResolver(schema), defaultValues: initial.values });
+  // Order questions the athlete has moved a step of: only these count as answered.
+  const [movedOrders, setMovedOrders] = useState<ReadonlySet<string>>(() => new Set(initial.movedOrders));
   const [failure, setFailure] = useState<string | null>(null);
   const { errors, isSubmitting } = form.formState;
 
   const watched = useWatch({ control: form.control, name: "answers" });
   useEffect(() => {
     try {
-      window.localStorage.setItem(storageKey(opening.attemptId), JSON.stringify({ answers: watched }));
+      window.localStorage.setItem(
+        storageKey(opening.attemptId),
+        writeSavedAnswers({ answers: watched ?? {}, movedOrders: [...movedOrders] }),
+      );
     } catch {
       // Private browsing may refuse storage; the quiz still works.
     }
-  }, [watched, opening.attemptId]);
+  }, [watched, movedOrders, opening.attemptId]);
 
   const onSubmit = form.handleSubmit(async (values) => {
     setFailure(null);
@@ -154,7 +169,7 @@ function AnsweringForm({
     }
   });
 
-  const answered = Object.values(watched ?? {}).filter((value) => (Array.isArray(value) ? value.length > 0 : value !== "")).length;
+  const answered = countAnswered(opening.questions, watched, movedOrders);
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-5" data-testid="quiz-form" aria-describedby="quiz-progress">
@@ -210,6 +225,9 @@ function AnsweringForm({
                   </div>
                 )}
                 {question.kind === "order" && (
+                  <p className="mb-2 text-sm text-slate-700">The steps start shuffled. Move them up or down into the right order.</p>
+                )}
+                {question.kind === "order" && (
                   <Controller
                     control={form.control}
                     name={`answers.${question.id}`}
@@ -217,7 +235,10 @@ function AnsweringForm({
                       <OrderQuestion
                         choices={question.choices ?? []}
                         value={Array.isArray(field.value) ? field.value : []}
-                        onChange={field.onChange}
+                        onChange={(next) => {
+                          field.onChange(next);
+                          setMovedOrders((moved) => (moved.has(question.id) ? moved : new Set([...moved, question.id])));
+                        }}
                       />
                     )}
                   />
