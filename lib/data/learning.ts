@@ -5,6 +5,7 @@ import { writeKeyedUpdate, writeTransaction, type KeyedUpdate } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { rawBoolean, rawDate, rawJson, selectRows, sqliteDateTime } from "@/lib/data/sql";
 import { settingsForClub } from "@/lib/data/club-settings";
+import { clubCertificationContext, factsForAthletes } from "@/lib/data/certification-facts";
 import { assertVisible, canViewAthlete, type Actor } from "@/lib/auth/permissions";
 import { ConflictError, NotFoundError } from "@/lib/http/errors";
 import { getModule, listModules } from "@/lib/content/modules";
@@ -13,6 +14,10 @@ import { buildQuiz, toPublicQuestion } from "@/lib/quiz/build";
 import { gradeQuiz } from "@/lib/quiz/grade";
 import type { PublicQuestion, Question } from "@/lib/quiz/types";
 import { moduleProgress, type ModuleProgress } from "@/lib/learning/progress";
+import { firstQuizPass } from "@/lib/learning/quiz-pass";
+import { athleteStanding } from "@/lib/clearance/athlete-summary";
+import { isoDateOf } from "@/lib/clearance/dates";
+import type { ModuleStatus } from "@/lib/clearance/rules";
 import { LessonRead, QuizAttempt, User } from "@/models";
 import type { StoredResult } from "@/models/QuizAttempt";
 
@@ -55,6 +60,40 @@ export async function courseProgressFor(actor: Actor, athleteId = actor.id): Pro
   ]);
   const readSlugs = new Set(reads.map((read) => read.moduleSlug));
   return listModules().map((meta) => ({ meta, progress: moduleProgress(meta.slug, readSlugs.has(meta.slug), attempts) }));
+}
+
+export interface QuizStanding {
+  /** The first passing submission (ISO time, score 0–1), or null while the quiz is not passed. */
+  pass: { passedAt: string; score: number | null } | null;
+  /** Best submitted score 0–1, or null before the first submission. */
+  bestScore: number | null;
+  /** An attempt started and not yet submitted: the quiz page resumes it. */
+  hasOpenAttempt: boolean;
+  /** The module's status, quiz and practical together. */
+  status: ModuleStatus;
+}
+
+/** The signed-in athlete's standing with one module's quiz: passed when and with what, an open attempt, the module's status. */
+export async function quizStandingFor(actor: Actor, slug: string): Promise<QuizStanding> {
+  await databaseReady();
+  requireModule(slug);
+  const [context, facts] = await Promise.all([
+    clubCertificationContext(actor.clubId),
+    factsForAthletes([actor.id]).then((byAthlete) => byAthlete.get(actor.id)!),
+  ]);
+  const standing = athleteStanding(
+    context.modules.map((meta) => meta.slug),
+    context.requiredModules,
+    facts,
+    isoDateOf(new Date()),
+  ).modules.find((entry) => entry.slug === slug)!;
+  const pass = firstQuizPass(slug, facts.attempts);
+  return {
+    pass: pass && { passedAt: pass.submittedAt.toISOString(), score: pass.score },
+    bestScore: standing.progress.bestScore,
+    hasOpenAttempt: standing.progress.hasOpenAttempt,
+    status: standing.status,
+  };
 }
 
 /** Records the first time the athlete finished reading a lesson; later reads change nothing. */

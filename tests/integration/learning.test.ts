@@ -3,7 +3,15 @@ import { createTempDataDir } from "@/tests/support/temp-data-dir";
 import { closeDatabase, getSequelize, writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { seedDemoClub } from "@/lib/seed/demo-club";
-import { attemptReview, attemptsOf, courseProgressFor, markLessonRead, startOrResumeAttempt, submitAttempt } from "@/lib/data/learning";
+import {
+  attemptReview,
+  attemptsOf,
+  courseProgressFor,
+  markLessonRead,
+  quizStandingFor,
+  startOrResumeAttempt,
+  submitAttempt,
+} from "@/lib/data/learning";
 import { Club, QuizAttempt, User } from "@/models";
 import type { Actor } from "@/lib/auth/permissions";
 import { ConflictError, NotFoundError } from "@/lib/http/errors";
@@ -133,5 +141,38 @@ describe("attempts", () => {
     const review = await attemptReview(coach, list[0]!.attemptId);
     expect(review.results.length).toBe(review.questions.length);
     await expect(attemptsOf(otherAthlete, athlete.id)).rejects.toBeInstanceOf(NotFoundError);
+  });
+});
+
+describe("the quiz page's standing", () => {
+  it("says when the quiz was first passed and with what, whatever practice follows, and whether an attempt is open", async () => {
+    const elin = await actorFor("elin@lantern-reach.example");
+    expect(await quizStandingFor(elin, "secure-and-check")).toEqual({
+      pass: null,
+      bestScore: null,
+      hasOpenAttempt: false,
+      status: "not-started",
+    });
+
+    const missed = await startOrResumeAttempt(elin, "secure-and-check");
+    expect(await quizStandingFor(elin, "secure-and-check")).toMatchObject({ pass: null, hasOpenAttempt: true });
+    await submitAttempt(elin, missed.attemptId, {});
+    expect(await quizStandingFor(elin, "secure-and-check")).toMatchObject({ pass: null, bestScore: 0, status: "quiz-failed" });
+
+    const passing = await startOrResumeAttempt(elin, "secure-and-check");
+    const passed = await submitAttempt(elin, passing.attemptId, rightAnswers((await QuizAttempt.findByPk(passing.attemptId))!));
+    const afterPass = { pass: { passedAt: passed.submittedAt, score: 1 }, bestScore: 1, hasOpenAttempt: false, status: "ready-for-sign-off" };
+    expect(await quizStandingFor(elin, "secure-and-check")).toEqual(afterPass);
+
+    // A practice attempt is open until handed in; a poor practice score leaves the pass as it was.
+    const practice = await startOrResumeAttempt(elin, "secure-and-check");
+    expect(practice.resumed).toBe(false);
+    expect(await quizStandingFor(elin, "secure-and-check")).toEqual({ ...afterPass, hasOpenAttempt: true });
+    await submitAttempt(elin, practice.attemptId, {});
+    expect(await quizStandingFor(elin, "secure-and-check")).toEqual(afterPass);
+  });
+
+  it("answers 404 for a module the course does not have", async () => {
+    await expect(quizStandingFor(athlete, "no-such-module")).rejects.toBeInstanceOf(NotFoundError);
   });
 });
