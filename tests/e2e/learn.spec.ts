@@ -1,6 +1,26 @@
-import { expect, test } from "@playwright/test";
+import { expect, test, type Page } from "@playwright/test";
 import { demo, signIn } from "./support/auth";
-import { answerQuiz, openQuiz, storedQuestions } from "./support/attempts";
+import { answerQuiz, firstPassOf, openQuiz, storedQuestions } from "./support/attempts";
+import { formatLongDate, isoDateOf } from "@/lib/clearance/dates";
+
+/** Every request that would open or resume a quiz attempt, from now on. */
+function attemptRequests(page: Page): string[] {
+  const seen: string[] = [];
+  page.on("request", (request) => {
+    if (request.method() === "POST" && /\/api\/modules\/[^/]+\/attempts$/.test(request.url())) seen.push(new URL(request.url()).pathname);
+  });
+  return seen;
+}
+
+/**
+ * The quiz page refreshes its props once an attempt is opened or graded (the router keeps them for the
+ * back button); waits for that refresh, so the test does not leave before it lands.
+ */
+function quizPageRefreshed(page: Page, slug: string) {
+  return page.waitForResponse(
+    (response) => new URL(response.url()).pathname === `/learn/${slug}/quiz` && response.request().headers()["rsc"] === "1",
+  );
+}
 
 test("an athlete reads a lesson, fails the quiz, retakes it, passes, and the course page says so", async ({ page }) => {
   await signIn(page, demo.athlete);
@@ -40,16 +60,30 @@ test("an athlete reads a lesson, fails the quiz, retakes it, passes, and the cou
   const second = (await (await retake).json()) as { attemptId: string };
   expect(second.attemptId).not.toBe(attemptId);
   await answerQuiz(page, await storedQuestions(second.attemptId), true);
+  const refreshed = quizPageRefreshed(page, "setting-inboard");
   await page.getByRole("button", { name: "Hand in my answers" }).click();
   await expect(page.getByTestId("quiz-outcome")).toContainText("Passed: 100%");
   // The result says "ask a coach to watch you"; the way to ask is one tap away.
   await expect(page.getByRole("link", { name: "Ask a coach for the practical" })).toHaveAttribute("href", "/learn/setting-inboard/practical");
+  await refreshed;
 
+  const attemptsOpened = attemptRequests(page);
   await page.getByRole("link", { name: "Back to your course" }).click();
   const card = page.getByTestId("module-setting-inboard");
   await expect(card).toContainText("Quiz passed");
   await expect(card).toContainText("best score 100%");
   await expect(card).toContainText("2 attempts");
+
+  // Back to the quiz page, and in again from the course page: it says the quiz is passed and starts nothing.
+  await page.goBack();
+  await expect(page).toHaveURL(/\/learn\/setting-inboard\/quiz$/);
+  await expect(page.getByTestId("quiz-passed-summary")).toContainText(`with 100%`);
+  await expect(page.getByRole("link", { name: "Ask a coach for the practical" })).toHaveAttribute("href", "/learn/setting-inboard/practical");
+  await page.goForward();
+  await card.getByRole("link", { name: "Practise the quiz" }).click();
+  await expect(page.getByTestId("quiz-passed-summary")).toContainText(`with 100%`);
+  await expect(page.getByTestId("quiz-form")).toHaveCount(0);
+  expect(attemptsOpened).toEqual([]);
 
   const progress = (await (await page.request.get("/api/me/progress")).json()) as {
     modules: { slug: string; passed: boolean; attempts: number; lessonRead: boolean }[];
@@ -115,4 +149,54 @@ test("an order question counts as answered once a step is moved, through a reloa
   await page.reload();
   await expect(page.getByTestId("quiz-form")).toBeVisible();
   await expect(count).toHaveText(`1 of ${fresh.questions.length} answered`);
+});
+
+/** Seeded by lib/seed/demo-certification.ts; no other spec changes her quizzes or sign-offs. */
+const elin = "elin@lantern-reach.example";
+
+test("a passed quiz opens on the pass and the way on; only the practise button starts an attempt, which then resumes directly", async ({ page }) => {
+  await signIn(page, elin);
+  const opened = attemptRequests(page);
+
+  // Signed off by a coach 41 days ago: on to the certificates.
+  const pass = await firstPassOf(elin, "overall-length");
+  await page.goto("/learn/overall-length/quiz");
+  await expect(page.getByTestId("quiz-passed-summary")).toContainText(
+    `Passed on ${formatLongDate(isoDateOf(pass.submittedAt))} with ${Math.round(pass.score * 100)}%.`,
+  );
+  await expect(page.getByRole("link", { name: "See your certificates" })).toHaveAttribute("href", "/learn/certificates");
+  // Asked a coach two days ago: on to the practical page.
+  await page.goto("/learn/changing-boats/quiz");
+  await expect(page.getByRole("link", { name: "See your sign-off request" })).toHaveAttribute("href", "/learn/changing-boats/practical");
+  await expect(page.getByTestId("quiz-form")).toHaveCount(0);
+  expect(opened).toEqual([]);
+
+  const practice = page.waitForResponse((response) => response.url().endsWith("/api/modules/changing-boats/attempts"));
+  const refreshed = quizPageRefreshed(page, "changing-boats");
+  await page.getByRole("button", { name: "Practise with a fresh set of questions" }).click();
+  const opening = (await (await practice).json()) as { attemptId: string; resumed: boolean };
+  expect(opening.resumed).toBe(false);
+  await expect(page.getByTestId("quiz-form")).toBeVisible();
+  // The button is gone: focus moves to the form's first line rather than being lost.
+  await expect(page.locator("#quiz-progress")).toBeFocused();
+  await refreshed;
+  expect(opened).toEqual(["/api/modules/changing-boats/attempts"]);
+
+  // The open practice attempt resumes straight away: after going to the lesson and back, and on a reload.
+  const questions = await storedQuestions(opening.attemptId);
+  const first = questions.find((question) => question.kind === "numeric")!;
+  await page.getByTestId(`question-${first.id}`).getByRole("textbox").fill("12");
+  await page.getByRole("link", { name: "Back to the lesson" }).click();
+  await expect(page).toHaveURL(/\/learn\/changing-boats$/);
+  const resumedOnBack = page.waitForResponse((response) => response.url().endsWith("/api/modules/changing-boats/attempts"));
+  await page.goBack();
+  expect(await (await resumedOnBack).json()).toMatchObject({ attemptId: opening.attemptId, resumed: true });
+  await expect(page.getByText("Picking up where you left off.")).toBeVisible();
+  await expect(page.getByTestId(`question-${first.id}`).getByRole("textbox")).toHaveValue("12");
+  await expect(page.getByTestId("quiz-passed")).toHaveCount(0);
+  const resumedOnReload = page.waitForResponse((response) => response.url().endsWith("/api/modules/changing-boats/attempts"));
+  await page.reload();
+  expect(await (await resumedOnReload).json()).toMatchObject({ attemptId: opening.attemptId, resumed: true });
+  await expect(page.getByTestId("quiz-form")).toBeVisible();
+  await expect(page.getByTestId("quiz-passed")).toHaveCount(0);
 });

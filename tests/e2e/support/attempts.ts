@@ -14,15 +14,31 @@ interface StoredQuestion {
  * SQLite file. No endpoint of the app ever returns answers before submission.
  */
 export function storedQuestions(attemptId: string): Promise<StoredQuestion[]> {
+  return readRow<{ questions: string }>("SELECT questions FROM quiz_attempts WHERE id = ?", [attemptId], `attempt ${attemptId}`).then(
+    (row) => JSON.parse(row.questions) as StoredQuestion[],
+  );
+}
+
+/** An athlete's first passing submission of a module's quiz, read from the e2e server's SQLite file. */
+export function firstPassOf(email: string, slug: string): Promise<{ score: number; submittedAt: Date }> {
+  return readRow<{ score: number; submitted_at: string }>(
+    `SELECT a.score, a.submitted_at FROM quiz_attempts a JOIN users u ON u.id = a.user_id
+     WHERE u.email = ? AND a.module_slug = ? AND a.passed = 1 ORDER BY a.submitted_at LIMIT 1`,
+    [email, slug],
+    `a passed ${slug} quiz of ${email}`,
+  ).then((row) => ({ score: row.score, submittedAt: new Date(row.submitted_at) }));
+}
+
+function readRow<Row>(sql: string, values: unknown[], what: string): Promise<Row> {
   const file = path.join(process.cwd(), ".e2e-data", "slipway.sqlite");
   return new Promise((resolve, reject) => {
     const db = new sqlite3.Database(file, sqlite3.OPEN_READONLY, (openError) => {
       if (openError) return reject(openError);
-      db.get<{ questions: string }>("SELECT questions FROM quiz_attempts WHERE id = ?", [attemptId], (error, row) => {
+      db.get<Row>(sql, values, (error, row) => {
         db.close();
         if (error) return reject(error);
-        if (!row) return reject(new Error(`attempt ${attemptId} not found`));
-        resolve(JSON.parse(row.questions) as StoredQuestion[]);
+        if (!row) return reject(new Error(`${what} not found`));
+        resolve(row);
       });
     });
   });

@@ -1,7 +1,8 @@
 "use client";
 
-import { useCallback, useEffect, useMemo, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import Link from "next/link";
+import { useRouter } from "next/navigation";
 import { Controller, useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { PublicQuestion } from "@/lib/quiz/types";
@@ -13,6 +14,7 @@ import { LiveStatus, Notice } from "@/components/ui/notice";
 import { LoadingState } from "@/components/ui/loading-state";
 import { quizFormSchema, toSubmission, type QuizFormValues } from "./quiz-schema";
 import { OrderQuestion } from "./order-question";
+import { QuizPassed, type PassedQuizView } from "./quiz-passed";
 
 interface Opening {
   attemptId: string;
@@ -28,9 +30,10 @@ interface QuizResult {
 }
 
 type Phase =
+  | { kind: "passed"; passed: PassedQuizView }
   | { kind: "loading" }
   | { kind: "error"; message: string }
-  | { kind: "answering"; opening: Opening }
+  | { kind: "answering"; opening: Opening; takeFocus?: boolean }
   | { kind: "graded"; opening: Opening; result: QuizResult; answers: Record<string, string | string[]> };
 
 const storageKey = (attemptId: string) => `slipway:quiz:${attemptId}`;
@@ -77,16 +80,27 @@ async function openAttempt(slug: string): Promise<Phase> {
   }
 }
 
-/** The practical quiz: starts or resumes an attempt, keeps answers through a reload, shows worked solutions. */
-export function QuizForm({ slug }: { slug: string }) {
-  const [phase, setPhase] = useState<Phase>({ kind: "loading" });
+/**
+ * The practical quiz: starts or resumes an attempt, keeps answers through a reload, shows worked solutions.
+ * With `passedQuiz` (passed, nothing open) it opens on that instead, and starts an attempt only on request.
+ */
+export function QuizForm({ slug, passedQuiz }: { slug: string; passedQuiz: PassedQuizView | null }) {
+  const router = useRouter();
+  const [phase, setPhase] = useState<Phase>(() => (passedQuiz ? { kind: "passed", passed: passedQuiz } : { kind: "loading" }));
+  // Read once: a later refresh of the page's props must not open an attempt by itself.
+  const [opensOnPass] = useState(passedQuiz !== null);
 
+  // The router keeps this page's props for the back and forward buttons: after an attempt is opened or
+  // graded, refresh them, so coming back resumes the open attempt or says the quiz is passed.
   const start = useCallback(async () => {
     setPhase({ kind: "loading" });
-    setPhase(await openAttempt(slug));
-  }, [slug]);
+    const next = await openAttempt(slug);
+    setPhase(next.kind === "answering" ? { ...next, takeFocus: true } : next);
+    if (next.kind === "answering") router.refresh();
+  }, [slug, router]);
 
   useEffect(() => {
+    if (opensOnPass) return;
     let cancelled = false;
     void openAttempt(slug).then((next) => {
       if (!cancelled) setPhase(next);
@@ -94,8 +108,9 @@ export function QuizForm({ slug }: { slug: string }) {
     return () => {
       cancelled = true;
     };
-  }, [slug]);
+  }, [slug, opensOnPass]);
 
+  if (phase.kind === "passed") return <QuizPassed passed={phase.passed} onPractise={() => void start()} />;
   if (phase.kind === "loading") return <LoadingState label="Getting your questions…" />;
   if (phase.kind === "error") {
     return (
@@ -116,16 +131,23 @@ export function QuizForm({ slug }: { slug: string }) {
     <AnsweringForm
       key={phase.opening.attemptId}
       opening={phase.opening}
-      onGraded={(result, answers) => setPhase({ kind: "graded", opening: phase.opening, result, answers })}
+      takeFocus={phase.takeFocus ?? false}
+      onGraded={(result, answers) => {
+        setPhase({ kind: "graded", opening: phase.opening, result, answers });
+        router.refresh();
+      }}
     />
   );
 }
 
 function AnsweringForm({
   opening,
+  takeFocus,
   onGraded,
 }: {
   opening: Opening;
+  /** Opened by a button press: move focus to the form's first line, since the button is gone. */
+  takeFocus: boolean;
   onGraded: (result: QuizResult, answers: Record<string, string | string[]>) => void;
 }) {
   const schema = useMemo(() => quizFormSchema(opening.questions), [opening.questions]);
@@ -135,6 +157,10 @@ function AnsweringForm({
   const [movedOrders, setMovedOrders] = useState<ReadonlySet<string>>(() => new Set(initial.movedOrders));
   const [failure, setFailure] = useState<string | null>(null);
   const { errors, isSubmitting } = form.formState;
+  const intro = useRef<HTMLParagraphElement>(null);
+  useEffect(() => {
+    if (takeFocus) intro.current?.focus();
+  }, [takeFocus]);
 
   const watched = useWatch({ control: form.control, name: "answers" });
   useEffect(() => {
@@ -173,7 +199,7 @@ function AnsweringForm({
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-5" data-testid="quiz-form" aria-describedby="quiz-progress">
-      <p id="quiz-progress" className="text-sm text-slate-700">
+      <p id="quiz-progress" ref={intro} tabIndex={takeFocus ? -1 : undefined} className="text-sm text-slate-700">
         {opening.resumed ? "Picking up where you left off. " : ""}
         {opening.questions.length} questions
       </p>
