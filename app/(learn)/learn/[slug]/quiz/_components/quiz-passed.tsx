@@ -2,7 +2,8 @@
 
 import Link from "next/link";
 import type { StepAfterQuizPass } from "@/lib/learning/quiz-pass";
-import { Button, buttonClasses } from "@/components/ui/button";
+import { Button } from "@/components/ui/button";
+import { buttonClasses } from "@/components/ui/button-classes";
 import { Notice } from "@/components/ui/notice";
 
 /** What the quiz page says to an athlete who has passed it and has no attempt open (formatted on the server). */
