@@ -26,3 +26,8 @@ export function countAnswered(
 ): number {
   return questions.filter((question) => isAnswered(question, answers?.[question.id], movedOrders)).length;
 }
+
+/** What a screen reader hears after a step of an order question moves: `index` is its new 0-based place. */
+export function orderMoveAnnouncement(label: string, index: number, count: number): string {
+  return `"${label}" is now step ${index + 1} of ${count}.`;
+}

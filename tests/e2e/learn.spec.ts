@@ -139,12 +139,21 @@ test("an order question counts as answered once a step is moved, through a reloa
   await expect(count).toHaveText(`0 of ${fresh.questions.length} answered`);
   const steps = page.getByTestId(`question-${freshOrder.id}`).locator("ol > li > span.flex-1");
   const firstStep = (await steps.first().textContent())!;
-  await page.getByRole("button", { name: `Move "${firstStep}" down` }).click();
+  const stepCount = await steps.count();
+  const announcement = page.getByTestId(`question-${freshOrder.id}`).getByTestId("order-announcement");
+  // By keyboard: focus stays with the step as it moves, and a screen reader hears its new place.
+  await page.getByRole("button", { name: `Move "${firstStep}" down` }).focus();
+  await page.keyboard.press("Enter");
   await expect(steps.nth(1)).toHaveText(firstStep);
+  await expect(page.getByRole("button", { name: `Move "${firstStep}" down` })).toBeFocused();
+  await expect(announcement).toHaveText(`"${firstStep}" is now step 2 of ${stepCount}.`);
   await expect(count).toHaveText(`1 of ${fresh.questions.length} answered`);
-  // Moved back to where it started, it is still a deliberate answer, and stays one after a reload.
+  // Moved back to where it started, it is still a deliberate answer, and stays one after a reload. At
+  // the top its up button is disabled, so focus goes to its down button rather than being lost.
   await page.getByRole("button", { name: `Move "${firstStep}" up` }).click();
   await expect(steps.first()).toHaveText(firstStep);
+  await expect(page.getByRole("button", { name: `Move "${firstStep}" down` })).toBeFocused();
+  await expect(announcement).toHaveText(`"${firstStep}" is now step 1 of ${stepCount}.`);
   await expect(count).toHaveText(`1 of ${fresh.questions.length} answered`);
   await page.reload();
   await expect(page.getByTestId("quiz-form")).toBeVisible();

@@ -9,8 +9,10 @@
  * 404 wherever a record is addressed (never 403: they must not learn that it exists).
  *
  * Adding a route or action? Add one row per exported method / action with all seven statuses. Pure
- * data: no app imports, so Playwright can load it too.
+ * data: no app imports but a pure lib/ helper, so Playwright can load it too.
  */
+
+import { machineTimeZone } from "@/lib/care/calendar";
 
 export const guardRoles = ["anonymous", "athlete", "otherAthlete", "coach", "otherCoach", "admin", "otherAdmin"] as const;
 export type GuardRole = (typeof guardRoles)[number];
@@ -419,8 +421,12 @@ routeGuardRows.push(
   },
 );
 
-/** The club settings form as every club starts (lib/validations/club-settings.ts defaults); neither club changes them. */
+/**
+ * The club settings form as every club starts (lib/validations/club-settings.ts defaults); neither club
+ * changes them. Without a stored time zone a club has the server's, this machine's.
+ */
 const settingsAsSeeded = {
+  timeZone: machineTimeZone(),
   passMarkPercent: 80,
   clickCm: 0.5,
   halfSwivelCm: 2,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { countAnswered, isAnswered } from "@/lib/quiz/answered";
+import { countAnswered, isAnswered, orderMoveAnnouncement } from "@/lib/quiz/answered";
 import { readSavedAnswers, writeSavedAnswers } from "@/lib/quiz/saved-answers";
 import type { PublicQuestion } from "@/lib/quiz/types";
 
@@ -90,4 +90,11 @@ describe("the answers kept in the browser", () => {
       expect(readSavedAnswers(text, questions)).toBeNull();
     },
   );
+});
+
+describe("moving a step of an order question", () => {
+  it("tells a screen reader the step's new place, counted from one", () => {
+    expect(orderMoveAnnouncement("Loosen the handle", 0, 5)).toBe('"Loosen the handle" is now step 1 of 5.');
+    expect(orderMoveAnnouncement("Check again", 4, 5)).toBe('"Check again" is now step 5 of 5.');
+  });
 });
