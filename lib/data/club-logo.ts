@@ -3,6 +3,8 @@ import fs from "node:fs/promises";
 import path from "node:path";
 import { randomUUID } from "node:crypto";
 import { fileTypeFromBuffer } from "file-type";
+import { imageSize } from "image-size";
+import { checkPng } from "@/lib/images/complete-png";
 import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { recordAudit } from "@/lib/data/audit";
@@ -23,16 +25,40 @@ function logoPath(fileName: string): string | null {
 }
 
 /**
- * The club's logo for certificates and pages, or null when there is none (or the file is missing or
- * not a PNG or JPEG: the type is sniffed from the bytes, whatever the name says).
+ * Whether each stored PNG logo decodes whole, by file name: a stored file is never rewritten (a new logo
+ * gets a new name), so each is decoded once per process, not once per certificate.
+ */
+const completePngLogos = new Map<string, boolean>();
+
+function isCompletePngLogo(fileName: string, bytes: Uint8Array): boolean {
+  let complete = completePngLogos.get(fileName);
+  if (complete === undefined) {
+    let size: { width?: number; height?: number } = {};
+    try {
+      size = imageSize(bytes);
+    } catch {
+      // No readable header: damaged.
+    }
+    complete = checkPng(bytes, size.width ?? 0, size.height ?? 0) === "complete";
+    if (!complete) console.warn(`Club logo ${fileName} is a damaged PNG; certificates print without it until it is replaced.`);
+    completePngLogos.set(fileName, complete);
+  }
+  return complete;
+}
+
+/**
+ * The club's logo for certificates and pages, or null when there is none (or the file is missing, not
+ * a PNG or JPEG (the type is sniffed from the bytes, whatever the name says), or a PNG that does not
+ * decode whole: uploads are checked, but a logo stored before that check could stall every PDF).
  */
 export async function readClubLogo(
   clubId: number,
 ): Promise<{ bytes: Uint8Array; type: ClubLogoType } | null> {
   await databaseReady();
   const club = await Club.findByPk(clubId, { attributes: ["id", "logoFile"] });
-  const file = club?.logoFile ? logoPath(club.logoFile) : null;
-  if (!file) return null;
+  const fileName = club?.logoFile;
+  const file = fileName ? logoPath(fileName) : null;
+  if (!fileName || !file) return null;
   let bytes: Uint8Array;
   try {
     bytes = new Uint8Array(await fs.readFile(file));
@@ -40,7 +66,8 @@ export async function readClubLogo(
     return null;
   }
   const type = (await fileTypeFromBuffer(bytes))?.mime;
-  return type === "image/png" || type === "image/jpeg" ? { bytes, type } : null;
+  if (type === "image/png") return isCompletePngLogo(fileName, bytes) ? { bytes, type } : null;
+  return type === "image/jpeg" ? { bytes, type } : null;
 }
 
 /** An admin replaces the club's logo with bytes already sniffed as PNG or JPEG (at most 2 MB). */

@@ -2,6 +2,7 @@ import "server-only";
 import { fileTypeFromBuffer } from "file-type";
 import { imageSize } from "image-size";
 import { PayloadTooLargeError, UnsupportedMediaError, ValidationError } from "@/lib/http/errors";
+import { checkPng, maxCheckedPngPixels } from "@/lib/images/complete-png";
 
 /** Room for the multipart boundaries and part headers around the file itself. */
 const multipartOverheadBytes = 16 * 1024;
@@ -83,22 +84,37 @@ export async function sniffImageType<T extends string>(
     throw new UnsupportedMediaError(`${what} must be ${describeTypes(allowed)}; this file is not.`, "file");
   }
   // The first bytes name the type; the image's own header (its size) must also read, so a PNG signature
-  // followed by anything else is not stored as a photo. Not a full decode: pixels are not checked.
-  if (!hasReadableDimensions(bytes, mime)) {
-    throw new UnsupportedMediaError(`${what} looks like a ${typeNames[mime] ?? mime} but is damaged or cut short; export it again.`, "file");
+  // followed by anything else is not stored as a photo. A PNG is also decoded whole (checkPng): a logo
+  // cut short after its header would otherwise stall the PDFs it is drawn on.
+  const damaged = new UnsupportedMediaError(
+    `${what} looks like a ${typeNames[mime] ?? mime} but is damaged or cut short; export it again.`,
+    "file",
+  );
+  const size = readableDimensions(bytes, mime);
+  if (!size) throw damaged;
+  if (mime === "image/png") {
+    const check = checkPng(bytes, size.width, size.height);
+    if (check === "too-many-pixels") {
+      throw new UnsupportedMediaError(
+        `${what} has more than ${maxCheckedPngPixels / 1_000_000} megapixels; export it smaller.`,
+        "file",
+      );
+    }
+    if (check === "damaged") throw damaged;
   }
   return mime as T;
 }
 
 const sizeTypes: Record<string, string> = { "image/jpeg": "jpg", "image/png": "png", "image/webp": "webp" };
 
-/** Whether the image header reads with a width and height and agrees with the sniffed type (image-size). */
-function hasReadableDimensions(bytes: Uint8Array, mime: string): boolean {
+/** The image header's width and height, when they read and agree with the sniffed type (image-size). */
+function readableDimensions(bytes: Uint8Array, mime: string): { width: number; height: number } | null {
   try {
-    const size = imageSize(bytes);
-    return (size.width ?? 0) > 0 && (size.height ?? 0) > 0 && (sizeTypes[mime] === undefined || size.type === sizeTypes[mime]);
+    const { width = 0, height = 0, type } = imageSize(bytes);
+    const agrees = sizeTypes[mime] === undefined || type === sizeTypes[mime];
+    return width > 0 && height > 0 && agrees ? { width, height } : null;
   } catch {
-    return false;
+    return null;
   }
 }
 

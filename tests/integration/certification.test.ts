@@ -2,6 +2,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { execFileSync } from "node:child_process";
+import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { PDFDocument } from "pdf-lib";
 import { createTempDataDir } from "@/tests/support/temp-data-dir";
@@ -621,10 +622,11 @@ describe("upload route handlers", () => {
         )
       ).status,
     ).toBe(415);
-    // The right first bytes are not enough: a PNG signature or a JPEG start followed by anything else.
-    // (The check reads the image's header, not every pixel: a PNG cut after its header still passes.)
+    // The right first bytes are not enough: a PNG signature or a JPEG start followed by anything else,
+    // or a PNG cut short after its header (a PNG is decoded whole; a JPEG's header is read).
     for (const [bytes, name, type] of [
       [Buffer.concat([tinyPng.subarray(0, 8), Buffer.from("not the rest of an image at all")]), "cut.png", "image/png"],
+      [tinyPng.subarray(0, 40), "cut-after-header.png", "image/png"],
       [Buffer.from([0xff, 0xd8, 0xff, 0xe0, ...Buffer.from("no frames follow this start of a JPEG")]), "cut.jpg", "image/jpeg"],
     ] as const) {
       const refused = await evidenceRoute.POST(
@@ -768,6 +770,40 @@ describe("upload route handlers", () => {
       .map((line) => line.trim().split(/\s+/))
       .filter((columns) => columns[2] === "image");
     expect(images.map((columns) => columns[3])).toEqual(["1"]);
+  });
+
+  it("refuses a PNG logo cut short after its header; one stored before that check is left off the PDF", async () => {
+    session.actor = admin;
+    // Header whole (1 × 1 pixels), image data cut: pdf-lib's PNG reader never returns on this file.
+    const cut = tinyPng.subarray(0, 40);
+    const refused = await logoRoute.POST(
+      new Request("http://test/logo", { method: "POST", ...multipart(cut, "logo.png", "image/png") }),
+      undefined,
+    );
+    expect(refused.status).toBe(415);
+    expect(((await refused.json()) as { message: string }).message).toMatch(/damaged or cut short/);
+
+    // As if an earlier version had stored it: the certificate still prints, without the logo.
+    const { uploadsDir } = await import("@/lib/env");
+    const { readClubLogo } = await import("@/lib/data/club-logo");
+    const fileName = `logo-${randomUUID()}.png`;
+    fs.writeFileSync(path.join(uploadsDir(), fileName), cut);
+    const club = (await Club.findByPk(admin.clubId))!;
+    const before = club.logoFile;
+    await writeTransaction((transaction) => club.update({ logoFile: fileName }, { transaction }));
+    const warn = vi.spyOn(console, "warn").mockImplementation(() => {});
+    try {
+      expect(await readClubLogo(admin.clubId)).toBeNull();
+      const [first] = await certificates.certificatesOfAthlete(admin, carys.id);
+      const { bytes } = await certificates.certificatePdfFor(admin, first!.id);
+      const file = path.join(os.tmpdir(), `slipway-damaged-logo-${Date.now()}.pdf`);
+      fs.writeFileSync(file, bytes);
+      expect(execFileSync("pdfimages", ["-list", file], { encoding: "utf8" }).trim().split("\n").slice(2)).toEqual([]);
+      expect(warn).toHaveBeenCalledWith(expect.stringContaining(`Club logo ${fileName} is a damaged PNG`));
+    } finally {
+      warn.mockRestore();
+      await writeTransaction((transaction) => club.update({ logoFile: before }, { transaction }));
+    }
   });
 });
 
