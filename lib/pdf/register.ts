@@ -139,6 +139,9 @@ export async function renderRegisterPdf(input: RegisterPdfInput, fonts: FontByte
   const pages = paginate(input.rows.length, registerRowsPerPage);
   const tableWidth = a4Landscape.width - margin.left - margin.right;
   for (const slice of pages) {
+    // A page at a time, then the event loop has a turn: a club's whole register (thousands of rows)
+    // would otherwise hold every other request of the server for seconds.
+    if (slice.pageNumber > 1) await yieldToEventLoop();
     const page = document.addPage([a4Landscape.width, a4Landscape.height]);
     let y = drawHeader(page, input, regular, bold);
     if (input.rows.length === 0) {
@@ -195,6 +198,13 @@ export async function renderRegisterPdf(input: RegisterPdfInput, fonts: FontByte
       color: muted,
     });
   }
-  // objectsPerTick: no pauses for the event loop between objects; a register is written in one go.
-  return document.save({ objectsPerTick: Number.POSITIVE_INFINITY });
+  // Saving pauses for the event loop every few objects (each page is a couple of them), for the same reason.
+  return document.save({ objectsPerTick: registerObjectsPerTick });
+}
+
+/** How many PDF objects pdf-lib writes between turns of the event loop while saving a register. */
+const registerObjectsPerTick = 40;
+
+function yieldToEventLoop(): Promise<void> {
+  return new Promise((resolve) => setImmediate(resolve));
 }
