@@ -1,7 +1,7 @@
 import Link from "next/link";
 import type { Actor } from "@/lib/auth/permissions";
 import { practicalViewFor } from "@/lib/data/sign-offs";
-import { formatLongDate, isoDateOf } from "@/lib/clearance/dates";
+import { formatLongDate } from "@/lib/clearance/dates";
 import { Notice } from "@/components/ui/notice";
 import { ModuleStatusBadge } from "@/components/certify/status-badge";
 import { RequestSignOffForm } from "@/components/certify/request-sign-off-form";
@@ -57,7 +57,7 @@ export async function PracticalSignOffPanel({
         >
           <p className="whitespace-pre-wrap">{view.latestDecision.note}</p>
           <p className="mt-1 text-sm">
-            Recorded {formatLongDate(isoDateOf(new Date(view.latestDecision.assessedAt)))}.
+            Recorded {formatLongDate(view.latestDecision.assessedOn)}.
           </p>
         </Notice>
       )}
@@ -66,7 +66,7 @@ export async function PracticalSignOffPanel({
         <p>
           <span aria-hidden="true">◔ </span>
           You asked {view.openRequest.coachName ?? "any coach"} on{" "}
-          {formatLongDate(isoDateOf(new Date(view.openRequest.requestedAt)))}. Bring your oars to the rack;
+          {formatLongDate(view.openRequest.requestedOn)}. Bring your oars to the rack;
           the coach records what they see on a tablet.
         </p>
       )}

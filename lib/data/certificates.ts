@@ -156,11 +156,11 @@ export async function certificatePdfFor(
   return { bytes: await renderStoredCertificate(certificate), fileName: certificateFileName(certificate) };
 }
 
-/** One certificate for an admin of its club, with who revoked it and why. */
+/** One certificate for an admin of its club, with who revoked it, on which day and why. */
 export async function certificateForAdmin(
   actor: Actor,
   certificateId: string,
-): Promise<CertificateSummary & { revokedByName: string | null }> {
+): Promise<CertificateSummary & { revokedByName: string | null; revokedOn: string | null }> {
   await databaseReady();
   const certificate = await Certificate.findByPk(certificateId);
   assertVisible(!!certificate && canManageClub(actor, certificate.clubId));
@@ -171,6 +171,7 @@ export async function certificateForAdmin(
   return {
     ...summarise(certificate, isoDateOf(new Date()), suspended.has(certificate.athleteId)),
     revokedByName: revoker?.name ?? null,
+    revokedOn: certificate.revokedAt ? isoDateOf(certificate.revokedAt) : null,
   };
 }
 

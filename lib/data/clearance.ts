@@ -26,19 +26,24 @@ import type { Clearance } from "@/lib/clearance/rules";
 import type { RosterMatrix, RosterRow } from "@/lib/clearance/roster";
 import { Certificate, ClearanceSuspension, PracticalAssessment, User } from "@/models";
 
-/** An athlete's clearance today: their own, or one of a coach's or admin's club. */
+/**
+ * An athlete's clearance today: their own, or one of a coach's or admin's club. `today` is the day it
+ * was worked out for, so the page says "expires" or "expired" against the same day.
+ */
 export async function clearanceOf(
   actor: Actor,
   athleteId = actor.id,
-): Promise<{ standing: AthleteStanding; requiredTitles: string[] }> {
+): Promise<{ standing: AthleteStanding; requiredTitles: string[]; today: string }> {
   await databaseReady();
   const athlete = await User.findByPk(athleteId);
   assertVisible(!!athlete && canViewAthlete(actor, athlete));
   const context = await clubCertificationContext(athlete.clubId);
-  const standing = await standingOf(athlete.id, context, isoDateOf(new Date()));
+  const today = isoDateOf(new Date());
+  const standing = await standingOf(athlete.id, context, today);
   return {
     standing,
     requiredTitles: context.requiredModules.map((slug) => getModule(slug)?.meta.title ?? slug),
+    today,
   };
 }
 
@@ -209,6 +214,8 @@ export interface AssessmentRecord {
 
 export interface AthleteRecord {
   athlete: { id: number; name: string; email: string; status: string };
+  /** The day the record's statuses were worked out for. */
+  today: string;
   standing: AthleteStanding;
   moduleTitles: Record<string, string>;
   requiredModules: string[];
@@ -219,6 +226,8 @@ export interface AthleteRecord {
     id: number;
     reason: string;
     suspendedAt: string;
+    /** The day the suspension began. */
+    suspendedOn: string;
     suspendedByName: string;
     liftedAt: string | null;
     liftedByName: string | null;
@@ -339,6 +348,7 @@ export async function athleteRecordFor(actor: Actor, athleteId: number): Promise
 
   return {
     athlete: { id: athlete.id, name: athlete.name, email: athlete.email, status: athlete.status },
+    today,
     standing,
     moduleTitles,
     requiredModules: context.requiredModules,
@@ -349,6 +359,7 @@ export async function athleteRecordFor(actor: Actor, athleteId: number): Promise
       id: entry.id,
       reason: entry.reason,
       suspendedAt: entry.suspendedAt.toISOString(),
+      suspendedOn: isoDateOf(entry.suspendedAt),
       suspendedByName: nameOf(entry.suspendedById) ?? "",
       liftedAt: entry.liftedAt?.toISOString() ?? null,
       liftedByName: nameOf(entry.liftedById),

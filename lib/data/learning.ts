@@ -63,8 +63,8 @@ export async function courseProgressFor(actor: Actor, athleteId = actor.id): Pro
 }
 
 export interface QuizStanding {
-  /** The first passing submission (ISO time, score 0–1), or null while the quiz is not passed. */
-  pass: { passedAt: string; score: number | null } | null;
+  /** The first passing submission (ISO time, its day, score 0–1), or null while the quiz is not passed. */
+  pass: { passedAt: string; passedOn: string; score: number | null } | null;
   /** Best submitted score 0–1, or null before the first submission. */
   bestScore: number | null;
   /** An attempt started and not yet submitted: the quiz page resumes it. */
@@ -89,7 +89,11 @@ export async function quizStandingFor(actor: Actor, slug: string): Promise<QuizS
   ).modules.find((entry) => entry.slug === slug)!;
   const pass = firstQuizPass(slug, facts.attempts);
   return {
-    pass: pass && { passedAt: pass.submittedAt.toISOString(), score: pass.score },
+    pass: pass && {
+      passedAt: pass.submittedAt.toISOString(),
+      passedOn: isoDateOf(pass.submittedAt),
+      score: pass.score,
+    },
     bestScore: standing.progress.bestScore,
     hasOpenAttempt: standing.progress.hasOpenAttempt,
     status: standing.status,

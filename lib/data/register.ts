@@ -14,6 +14,8 @@ import { Certificate, Club } from "@/models";
 
 export interface Register {
   clubName: string;
+  /** The day the register was listed: statuses are as of this day, and the PDF says it was generated on it. */
+  generatedOn: string;
   filter: RegisterFilter;
   summary: string;
   entries: CertificateSummary[];
@@ -48,7 +50,13 @@ export async function registerFor(actor: Actor, filter: RegisterFilter): Promise
   const entries = certificates
     .map((certificate) => summarise(certificate, today, suspended.has(certificate.athleteId)))
     .filter((entry) => filter.status === "all" || entry.status === filter.status);
-  return { clubName: club?.name ?? "", filter, summary: registerFilterSummary(filter), entries };
+  return {
+    clubName: club?.name ?? "",
+    generatedOn: today,
+    filter,
+    summary: registerFilterSummary(filter),
+    entries,
+  };
 }
 
 /** The filters in words, printed on every page of the register. */
@@ -94,7 +102,7 @@ export async function registerPdf(register: Register): Promise<Uint8Array> {
     {
       clubName: register.clubName,
       filterSummary: register.summary,
-      generatedOn: isoDateOf(new Date()),
+      generatedOn: register.generatedOn,
       rows: register.entries.map((entry) => ({
         serial: entry.serial,
         athleteName: entry.athleteName,

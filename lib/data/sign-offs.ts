@@ -58,11 +58,14 @@ export interface PracticalView {
   statusLabel: string;
   /** Why the athlete cannot ask now, or null when the request button should show. */
   requestProblem: string | null;
-  openRequest: { id: string; requestedAt: string; coachName: string | null } | null;
+  /** `requestedOn`: the day it was asked for, as the club's certification dates go. */
+  openRequest: { id: string; requestedAt: string; requestedOn: string; coachName: string | null } | null;
   latestDecision: {
     outcome: AssessmentOutcome;
     note: string;
     assessedAt: string;
+    /** The day the coach recorded it. */
+    assessedOn: string;
     assessorName: string;
   } | null;
   currentPass: { signedOffOn: string; expiresOn: string } | null;
@@ -108,6 +111,7 @@ export async function practicalViewFor(
       ? {
           id: open.id,
           requestedAt: open.requestedAt.toISOString(),
+          requestedOn: isoDateOf(open.requestedAt),
           coachName: open.coachId ? (names.get(open.coachId) ?? null) : null,
         }
       : null,
@@ -117,6 +121,7 @@ export async function practicalViewFor(
             outcome: decided.status === "passed" ? "passed" : "not-yet",
             note: decided.note ?? "",
             assessedAt: decided.assessedAt.toISOString(),
+            assessedOn: isoDateOf(decided.assessedAt),
             assessorName: names.get(decided.assessorId ?? 0) ?? "a coach",
           }
         : null,
@@ -247,6 +252,8 @@ export interface QueueEntry {
   moduleSlug: string;
   moduleTitle: string;
   requestedAt: string;
+  /** The day it was asked for. */
+  requestedOn: string;
   askedCoachName: string | null;
   /** Asked of the viewing coach or of any coach. */
   forMe: boolean;
@@ -268,6 +275,7 @@ export async function signOffQueue(actor: Actor): Promise<QueueEntry[]> {
     moduleSlug: entry.moduleSlug,
     moduleTitle: getModule(entry.moduleSlug)?.meta.title ?? entry.moduleSlug,
     requestedAt: entry.requestedAt.toISOString(),
+    requestedOn: isoDateOf(entry.requestedAt),
     askedCoachName: entry.coachId ? (names.get(entry.coachId) ?? null) : null,
     forMe: entry.coachId === null || entry.coachId === actor.id,
   }));
@@ -287,8 +295,11 @@ export interface AssessmentDetail {
   module: { slug: string; title: string };
   checklist: ChecklistItem[];
   requestedAt: string;
+  /** The days it was asked for and recorded. */
+  requestedOn: string;
   askedCoachName: string | null;
   assessedAt: string | null;
+  assessedOn: string | null;
   assessorName: string | null;
   verdicts: Record<string, ChecklistVerdict> | null;
   note: string | null;
@@ -339,8 +350,10 @@ export async function assessmentForCoach(actor: Actor, assessmentId: string): Pr
     module: { slug: assessment.moduleSlug, title: meta?.title ?? assessment.moduleSlug },
     checklist: assessment.checklist ?? meta?.checklist ?? [],
     requestedAt: assessment.requestedAt.toISOString(),
+    requestedOn: isoDateOf(assessment.requestedAt),
     askedCoachName: assessment.coachId ? (names.get(assessment.coachId) ?? null) : null,
     assessedAt: assessment.assessedAt?.toISOString() ?? null,
+    assessedOn: assessment.assessedAt ? isoDateOf(assessment.assessedAt) : null,
     assessorName: assessment.assessorId ? (names.get(assessment.assessorId) ?? null) : null,
     verdicts: assessment.verdicts,
     note: assessment.note,

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { PageTitle } from "@/components/ui/page-title";
 import { requirePageActor } from "@/lib/auth/session";
 import { signOffQueue } from "@/lib/data/sign-offs";
-import { formatLongDate, isoDateOf } from "@/lib/clearance/dates";
+import { formatLongDate } from "@/lib/clearance/dates";
 
 export const metadata: Metadata = { title: "Sign-offs" };
 
@@ -44,7 +44,7 @@ export default async function SignOffQueuePage() {
                     </span>
                     <span className="block text-sm text-slate-700">
                       Asked {entry.askedCoachName ? `of ${entry.askedCoachName}` : "of any coach"} on{" "}
-                      {formatLongDate(isoDateOf(new Date(entry.requestedAt)))}
+                      {formatLongDate(entry.requestedOn)}
                     </span>
                   </Link>
                 </li>

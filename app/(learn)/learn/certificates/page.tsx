@@ -7,19 +7,18 @@ import { requirePageActor } from "@/lib/auth/session";
 import { certificatesOfAthlete } from "@/lib/data/certificates";
 import { clearanceOf } from "@/lib/data/clearance";
 import { listModules } from "@/lib/content/modules";
-import { expiryVerb, formatLongDate, isoDateOf } from "@/lib/clearance/dates";
+import { expiryVerb, formatLongDate } from "@/lib/clearance/dates";
 
 export const metadata: Metadata = { title: "Your certificates" };
 
 /** The athlete's own certificates (download, public check) and each module's practical. */
 export default async function MyCertificatesPage() {
   const actor = await requirePageActor("member", "/learn/certificates");
-  const [certificates, { standing }] = await Promise.all([
+  const [certificates, { standing, today }] = await Promise.all([
     certificatesOfAthlete(actor, actor.id),
     clearanceOf(actor),
   ]);
   const titles = new Map(listModules().map((meta) => [meta.slug, meta.title]));
-  const today = isoDateOf(new Date());
   return (
     <div className="space-y-6">
       <PageTitle lead="What a coach has signed off, and whether you may rig without one.">

@@ -15,6 +15,6 @@ export const GET = route(async (request) => {
   const filter = readQuery(request, registerQuerySchemaFor(listModules().map((meta) => meta.slug)));
   const register = await registerFor(actor, filter);
   return new Response(registerCsv(register), {
-    headers: csvDownloadHeaders(`induction-register-${new Date().toISOString().slice(0, 10)}.csv`),
+    headers: csvDownloadHeaders(`induction-register-${register.generatedOn}.csv`),
   });
 });

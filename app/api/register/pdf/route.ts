@@ -13,11 +13,12 @@ export const GET = route(async (request) => {
   const actor = await requireActor();
   assertMaySeeRegister(actor);
   const filter = readQuery(request, registerQuerySchemaFor(listModules().map((meta) => meta.slug)));
-  const bytes = await registerPdf(await registerFor(actor, filter));
+  const register = await registerFor(actor, filter);
+  const bytes = await registerPdf(register);
   return new NextResponse(Buffer.from(bytes), {
     headers: {
       "Content-Type": "application/pdf",
-      "Content-Disposition": `attachment; filename="induction-register-${new Date().toISOString().slice(0, 10)}.pdf"`,
+      "Content-Disposition": `attachment; filename="induction-register-${register.generatedOn}.pdf"`,
       "X-Content-Type-Options": "nosniff",
       "Cache-Control": "private, no-store",
     },

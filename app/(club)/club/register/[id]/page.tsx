@@ -5,7 +5,7 @@ import { CertificateStatusBadge } from "@/components/certify/status-badge";
 import { requirePageActor } from "@/lib/auth/session";
 import { certificateForAdmin } from "@/lib/data/certificates";
 import { orNotFound } from "@/lib/http/page-not-found";
-import { formatLongDate, isoDateOf } from "@/lib/clearance/dates";
+import { formatLongDate } from "@/lib/clearance/dates";
 import { RevokeCertificateForm } from "./_components/revoke-form";
 
 export const metadata: Metadata = { title: "Certificate" };
@@ -38,11 +38,11 @@ export default async function CertificatePage({ params }: { params: Promise<{ id
         <dd>{formatLongDate(certificate.issuedOn)}</dd>
         <dt className="font-semibold">Expires</dt>
         <dd>{formatLongDate(certificate.expiresOn)}</dd>
-        {certificate.revokedAt && (
+        {certificate.revokedOn && (
           <>
             <dt className="font-semibold">Revoked</dt>
             <dd>
-              {formatLongDate(isoDateOf(new Date(certificate.revokedAt)))} by{" "}
+              {formatLongDate(certificate.revokedOn)} by{" "}
               {certificate.revokedByName ?? "an administrator"}: {certificate.revokeReason}
             </dd>
           </>

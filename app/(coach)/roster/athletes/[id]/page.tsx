@@ -6,7 +6,7 @@ import { CertificateStatusBadge, ClearanceBadge, ModuleStatusBadge } from "@/com
 import { requirePageActor } from "@/lib/auth/session";
 import { athleteRecordFor } from "@/lib/data/clearance";
 import { orNotFound } from "@/lib/http/page-not-found";
-import { expiryVerb, formatLongDate, isoDateOf, lastValidDay } from "@/lib/clearance/dates";
+import { expiryVerb, formatLongDate, lastValidDay } from "@/lib/clearance/dates";
 import { SuspensionControl } from "./_components/suspension-forms";
 
 export const metadata: Metadata = { title: "Athlete" };
@@ -35,7 +35,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
   const athleteId = Number(id);
   if (!Number.isInteger(athleteId) || athleteId <= 0) notFound();
   const record = await orNotFound(athleteRecordFor(actor, athleteId));
-  const today = isoDateOf(new Date());
+  const { today } = record;
   const { clearance } = record.standing;
   const activeSuspension = record.suspensions.find((entry) => entry.liftedAt === null);
   const sectionClasses = "space-y-3 rounded-lg bg-white p-4 shadow-sm";
@@ -75,7 +75,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
         {activeSuspension && (
           <p>
             Suspended by {activeSuspension.suspendedByName} on{" "}
-            {formatLongDate(isoDateOf(new Date(activeSuspension.suspendedAt)))}: {activeSuspension.reason}
+            {formatLongDate(activeSuspension.suspendedOn)}: {activeSuspension.reason}
           </p>
         )}
         {record.viewer.canSuspend && (

@@ -6,7 +6,7 @@ import { requirePageActor } from "@/lib/auth/session";
 import { assessmentForCoach } from "@/lib/data/sign-offs";
 import { orNotFound } from "@/lib/http/page-not-found";
 import { checklistVerdictLabels } from "@/lib/clearance/checklist";
-import { formatLongDate, isoDateOf } from "@/lib/clearance/dates";
+import { formatLongDate } from "@/lib/clearance/dates";
 import { AssessmentForm } from "./_components/assessment-form";
 
 export const metadata: Metadata = { title: "Practical sign-off" };
@@ -16,7 +16,7 @@ export default async function AssessmentPage({ params }: { params: Promise<{ id:
   const { id } = await params;
   const actor = await requirePageActor("coach", `/roster/sign-offs/${id}`);
   const detail = await orNotFound(assessmentForCoach(actor, id));
-  const asked = formatLongDate(isoDateOf(new Date(detail.requestedAt)));
+  const asked = formatLongDate(detail.requestedOn);
   return (
     <div className="space-y-6">
       <PageTitle
@@ -59,8 +59,8 @@ export default async function AssessmentPage({ params }: { params: Promise<{ id:
                 ? "✕ Not yet"
                 : "Withdrawn"}
             {detail.assessorName &&
-              detail.assessedAt &&
-              ` by ${detail.assessorName} on ${formatLongDate(isoDateOf(new Date(detail.assessedAt)))}`}
+              detail.assessedOn &&
+              ` by ${detail.assessorName} on ${formatLongDate(detail.assessedOn)}`}
           </h2>
           <ul className="space-y-1">
             {detail.checklist.map((item) => (

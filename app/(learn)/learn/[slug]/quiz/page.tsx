@@ -5,7 +5,7 @@ import { requirePageActor } from "@/lib/auth/session";
 import { getModule } from "@/lib/content/modules";
 import { quizStandingFor } from "@/lib/data/learning";
 import { stepAfterQuizPass } from "@/lib/learning/quiz-pass";
-import { formatLongDate, isoDateOf } from "@/lib/clearance/dates";
+import { formatLongDate } from "@/lib/clearance/dates";
 import { PageTitle } from "@/components/ui/page-title";
 import { QuizForm } from "./_components/quiz-form";
 import type { PassedQuizView } from "./_components/quiz-passed";
@@ -34,7 +34,7 @@ export default async function QuizPage({ params }: Props) {
   const passedQuiz: PassedQuizView | null =
     standing.pass && !standing.hasOpenAttempt
       ? {
-          passedOn: formatLongDate(isoDateOf(new Date(standing.pass.passedAt))),
+          passedOn: formatLongDate(standing.pass.passedOn),
           scorePercent: percent(standing.pass.score),
           bestPercent: percent(standing.bestScore),
           next: stepAfterQuizPass(slug, standing.status),
