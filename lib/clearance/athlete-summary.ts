@@ -19,6 +19,12 @@ export interface AssessmentFact {
   assessedAt: Date | null;
 }
 
+/** A coach's suspension that has not been lifted, as recorded. */
+export interface SuspensionFact {
+  reason: string;
+  suspendedAt: Date;
+}
+
 /** Everything recorded about one athlete that decides their modules and clearance. */
 export interface AthleteFacts {
   lessonReads: readonly string[];
@@ -26,7 +32,16 @@ export interface AthleteFacts {
   assessments: readonly AssessmentFact[];
   /** From the athlete's module certificates that are not revoked. */
   passes: readonly ModulePass[];
-  suspension: ActiveSuspension | null;
+  suspension: SuspensionFact | null;
+}
+
+/**
+ * The club's calendar: `today` there, and the time zone that turns a recorded instant (a decision, a
+ * suspension) into the club's day, the same way sign-off days were written.
+ */
+export interface ClubDay {
+  today: string;
+  timeZone: string;
 }
 
 export interface ModuleStanding {
@@ -44,12 +59,15 @@ export interface AthleteStanding {
   clearance: Clearance;
 }
 
-/** Each module's status (quiz and practical together) and the clearance, from the recorded facts. */
+/**
+ * Each module's status (quiz and practical together) and the clearance, from the recorded facts, on the
+ * club's `today`; a coach's decision and a suspension count from their day in the club's time zone.
+ */
 export function athleteStanding(
   moduleSlugs: readonly string[],
   requiredModules: readonly string[],
   facts: AthleteFacts,
-  today: string,
+  { today, timeZone }: ClubDay,
 ): AthleteStanding {
   const reads = new Set(facts.lessonReads);
   const latest = latestPasses(facts.passes);
@@ -64,7 +82,10 @@ export function athleteStanding(
       )
       .sort((a, b) => b.assessedAt!.getTime() - a.assessedAt!.getTime())[0];
     const latestDecision = decided
-      ? { outcome: decided.status as "passed" | "not-yet", decidedOn: isoDateOf(decided.assessedAt!) }
+      ? {
+          outcome: decided.status as "passed" | "not-yet",
+          decidedOn: isoDateOf(decided.assessedAt!, timeZone),
+        }
       : null;
     const latestPass = latest.get(slug) ?? null;
     return {
@@ -76,12 +97,11 @@ export function athleteStanding(
       requestProblem: signOffRequestProblem({ quizPassed: progress.passed, openRequest, latestPass, today }),
     };
   });
-  const clearance = clearanceFor({
-    requiredModules,
-    passes: [...latest.values()],
-    suspension: facts.suspension,
-    today,
-  });
+  const suspension: ActiveSuspension | null = facts.suspension && {
+    reason: facts.suspension.reason,
+    since: isoDateOf(facts.suspension.suspendedAt, timeZone),
+  };
+  const clearance = clearanceFor({ requiredModules, passes: [...latest.values()], suspension, today });
   return { modules, clearance };
 }
 

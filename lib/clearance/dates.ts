@@ -1,8 +1,14 @@
+import { isoDateInZone } from "@/lib/care/calendar";
 import { addDaysIso, daysBetweenIso, isoDateToDayNumber } from "@/lib/care/dates";
 
-/** The calendar date (UTC) of an instant, YYYY-MM-DD. Slipway keeps every certification date in UTC. */
-export function isoDateOf(instant: Date): string {
-  return instant.toISOString().slice(0, 10);
+/**
+ * The calendar date (YYYY-MM-DD) of an instant in the club's time zone. Every certification date is the
+ * club's: the day a pass is signed off (and so its expiry), "today" for whether a pass, clearance or
+ * certificate still counts, and the day shown for a request, a decision, a suspension or a revocation.
+ * It is the same day the club's cleanings go by (isoDateInZone).
+ */
+export function isoDateOf(instant: Date, timeZone: string): string {
+  return isoDateInZone(timeZone, instant);
 }
 
 function daysInMonth(year: number, monthIndex: number): number {

@@ -4,6 +4,7 @@ import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { recordAudit } from "@/lib/data/audit";
 import { readClubLogo } from "@/lib/data/club-logo";
+import { settingsForClub } from "@/lib/data/club-settings";
 import {
   assertAllowed,
   assertVisible,
@@ -19,6 +20,7 @@ import { certificateStatus, type CertificateStatus } from "@/lib/certificates/st
 import { looksLikeVerificationCode } from "@/lib/certificates/verification-code";
 import { pdfFonts } from "@/lib/pdf/fonts";
 import { renderCertificatePdf } from "@/lib/pdf/certificate";
+import { readClubSettings } from "@/lib/validations/club-settings";
 import { Certificate, ClearanceSuspension, Club, PracticalAssessment, User } from "@/models";
 import type { CertificateKind } from "@/models/Certificate";
 
@@ -92,9 +94,12 @@ export async function certificatesOfAthlete(actor: Actor, athleteId: number): Pr
       ["serialNumber", "DESC"],
     ],
   });
-  const suspended = (await suspendedAthletes([athleteId])).has(athleteId);
-  const today = isoDateOf(new Date());
-  return certificates.map((certificate) => summarise(certificate, today, suspended));
+  const [suspended, { timeZone }] = await Promise.all([
+    suspendedAthletes([athleteId]),
+    settingsForClub(athlete.clubId),
+  ]);
+  const today = isoDateOf(new Date(), timeZone);
+  return certificates.map((certificate) => summarise(certificate, today, suspended.has(athleteId)));
 }
 
 /** Internal: renders a stored certificate to PDF (called after the issuing transaction has committed). */
@@ -104,11 +109,12 @@ export async function renderStoredCertificate(certificate: Certificate): Promise
     readClubLogo(certificate.clubId),
     pdfFonts(),
   ]);
-  // A PDF made after expiry, or of a clearance while a coach's suspension stands, says so on the page.
+  // A PDF made after expiry (from the club's day on), or of a clearance while a coach's suspension
+  // stands, says so on the page.
   const suspended = certificate.kind === "clearance" && (await suspendedAthletes([certificate.athleteId])).has(certificate.athleteId);
   const status = certificateStatus(
     { kind: certificate.kind, expiresOn: certificate.expiresOn, revoked: certificate.revokedAt !== null },
-    isoDateOf(new Date()),
+    isoDateOf(new Date(), readClubSettings(club?.settings).timeZone),
     suspended,
   );
   let lines: string[];
@@ -164,14 +170,15 @@ export async function certificateForAdmin(
   await databaseReady();
   const certificate = await Certificate.findByPk(certificateId);
   assertVisible(!!certificate && canManageClub(actor, certificate.clubId));
-  const [suspended, revoker] = await Promise.all([
+  const [suspended, revoker, { timeZone }] = await Promise.all([
     suspendedAthletes([certificate.athleteId]),
     certificate.revokedById ? User.findByPk(certificate.revokedById) : null,
+    settingsForClub(certificate.clubId),
   ]);
   return {
-    ...summarise(certificate, isoDateOf(new Date()), suspended.has(certificate.athleteId)),
+    ...summarise(certificate, isoDateOf(new Date(), timeZone), suspended.has(certificate.athleteId)),
     revokedByName: revoker?.name ?? null,
-    revokedOn: certificate.revokedAt ? isoDateOf(certificate.revokedAt) : null,
+    revokedOn: certificate.revokedAt ? isoDateOf(certificate.revokedAt, timeZone) : null,
   };
 }
 
@@ -197,7 +204,8 @@ export async function revokeCertificate(
 ): Promise<{ revoked: string[] }> {
   await assertMayRevokeCertificate(actor, certificateId);
   const now = new Date();
-  const today = isoDateOf(now);
+  // The certificate is of the actor's club (asserted above): its clearances current on the club's day.
+  const today = isoDateOf(now, (await settingsForClub(actor.clubId)).timeZone);
   return writeTransaction(async (transaction) => {
     const certificate = await Certificate.findByPk(certificateId, { transaction });
     if (!certificate) throw new ConflictError("The certificate is gone.");
@@ -267,7 +275,9 @@ export async function verifyCode(code: string): Promise<PublicVerification | nul
     suspendedAthletes([certificate.athleteId]),
     Club.findByPk(certificate.clubId),
   ]);
-  const today = isoDateOf(new Date());
+  // The certificate's own club decides the day, whoever asks and from wherever.
+  const { timeZone } = readClubSettings(club?.settings);
+  const today = isoDateOf(new Date(), timeZone);
   return {
     status: certificateStatus(
       { kind: certificate.kind, expiresOn: certificate.expiresOn, revoked: certificate.revokedAt !== null },
@@ -279,7 +289,7 @@ export async function verifyCode(code: string): Promise<PublicVerification | nul
     title: certificate.title,
     issuedOn: certificate.issuedOn,
     expiresOn: certificate.expiresOn,
-    revokedOn: certificate.revokedAt ? isoDateOf(certificate.revokedAt) : null,
+    revokedOn: certificate.revokedAt ? isoDateOf(certificate.revokedAt, timeZone) : null,
     code,
     clubName: club?.name ?? "",
     clubSlug: club?.slug ?? "",

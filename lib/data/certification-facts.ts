@@ -98,16 +98,14 @@ export async function factsForAthletes(
   }
   for (const suspension of suspensions) {
     const entry = facts.get(suspension.athleteId)!;
-    entry.suspension ??= {
-      reason: suspension.reason,
-      since: rawDate(suspension.suspendedAt)!.toISOString().slice(0, 10),
-    };
+    entry.suspension ??= { reason: suspension.reason, suspendedAt: rawDate(suspension.suspendedAt)! };
   }
   return facts;
 }
 
 export interface ClubCertificationContext {
   club: Club;
+  /** With the club's `timeZone`: every certification date is a calendar date there (isoDateOf). */
   settings: ClubSettings;
   modules: ModuleMeta[];
   /** The club's clearance modules that exist in the course, in course order. */
@@ -132,7 +130,7 @@ export async function clubCertificationContext(
   };
 }
 
-/** One athlete's modules and clearance today. */
+/** One athlete's modules and clearance on `today`, the club's day (isoDateOf in its time zone). */
 export async function standingOf(
   athleteId: number,
   context: ClubCertificationContext,
@@ -144,7 +142,7 @@ export async function standingOf(
     context.modules.map((meta) => meta.slug),
     context.requiredModules,
     facts,
-    today,
+    { today, timeZone: context.settings.timeZone },
   );
 }
 

@@ -5,6 +5,7 @@ import { databaseReady } from "@/lib/data/database";
 import { versionedReadCache } from "@/lib/data/read-cache";
 import { recordAudit } from "@/lib/data/audit";
 import { clubCertificationContext, factsForAthletes, standingOf } from "@/lib/data/certification-facts";
+import { settingsForClub } from "@/lib/data/club-settings";
 import { issueClearanceIfNewlyHeld } from "@/lib/data/certificate-issue";
 import { summarise, suspendedAthletes, type CertificateSummary } from "@/lib/data/certificates";
 import { attemptsOf, type AttemptListEntry } from "@/lib/data/learning";
@@ -38,7 +39,7 @@ export async function clearanceOf(
   const athlete = await User.findByPk(athleteId);
   assertVisible(!!athlete && canViewAthlete(actor, athlete));
   const context = await clubCertificationContext(athlete.clubId);
-  const today = isoDateOf(new Date());
+  const today = isoDateOf(new Date(), context.settings.timeZone);
   const standing = await standingOf(athlete.id, context, today);
   return {
     standing,
@@ -111,7 +112,7 @@ export async function liftSuspension(actor: Actor, athleteId: number, note: stri
         context,
         athlete: { id: athlete.id, name: athlete.name },
         signedOffBy: { id: actor.id, name: actor.name },
-        today: isoDateOf(now),
+        today: isoDateOf(now, context.settings.timeZone),
         now,
       },
       transaction,
@@ -129,7 +130,8 @@ const rosterMatrices = versionedReadCache<RosterMatrix>(32);
 export async function rosterMatrix(actor: Actor): Promise<RosterMatrix> {
   await databaseReady();
   assertMaySeeRoster(actor);
-  const today = isoDateOf(new Date());
+  // The club's today is in the key, so the matrix is worked out again when the club's day begins.
+  const today = isoDateOf(new Date(), (await settingsForClub(actor.clubId)).timeZone);
   // The coach's id is in the key: "waiting for me" differs between coaches.
   return rosterMatrices.read(`${actor.clubId}:${actor.id}:${today}`, () => computeRosterMatrix(actor, today));
 }
@@ -155,7 +157,10 @@ async function computeRosterMatrix(actor: Actor, today: string): Promise<RosterM
     waitingCount.set(entry.athleteId, (waitingCount.get(entry.athleteId) ?? 0) + 1);
   const slugs = context.modules.map((meta) => meta.slug);
   const rows = athletes.map((athlete): RosterRow => {
-    const standing = athleteStanding(slugs, context.requiredModules, facts.get(athlete.id)!, today);
+    const standing = athleteStanding(slugs, context.requiredModules, facts.get(athlete.id)!, {
+      today,
+      timeZone: context.settings.timeZone,
+    });
     return {
       id: athlete.id,
       name: athlete.name,
@@ -243,8 +248,9 @@ export async function athleteRecordFor(actor: Actor, athleteId: number): Promise
   assertAllowed(isCoach(actor), "Only coaches and administrators see an athlete's record.");
   const athlete = await User.findByPk(athleteId);
   assertVisible(!!athlete && canViewAthlete(actor, athlete) && athlete.clubId === actor.clubId);
-  const today = isoDateOf(new Date());
   const context = await clubCertificationContext(athlete.clubId);
+  const { timeZone } = context.settings;
+  const today = isoDateOf(new Date(), timeZone);
   const [standing, attempts, assessments, certificates, suspensions, suspended] = await Promise.all([
     standingOf(athlete.id, context, today),
     attemptsOf(actor, athlete.id),
@@ -359,7 +365,7 @@ export async function athleteRecordFor(actor: Actor, athleteId: number): Promise
       id: entry.id,
       reason: entry.reason,
       suspendedAt: entry.suspendedAt.toISOString(),
-      suspendedOn: isoDateOf(entry.suspendedAt),
+      suspendedOn: isoDateOf(entry.suspendedAt, timeZone),
       suspendedByName: nameOf(entry.suspendedById) ?? "",
       liftedAt: entry.liftedAt?.toISOString() ?? null,
       liftedByName: nameOf(entry.liftedById),

@@ -81,17 +81,18 @@ export async function quizStandingFor(actor: Actor, slug: string): Promise<QuizS
     clubCertificationContext(actor.clubId),
     factsForAthletes([actor.id]).then((byAthlete) => byAthlete.get(actor.id)!),
   ]);
+  const { timeZone } = context.settings;
   const standing = athleteStanding(
     context.modules.map((meta) => meta.slug),
     context.requiredModules,
     facts,
-    isoDateOf(new Date()),
+    { today: isoDateOf(new Date(), timeZone), timeZone },
   ).modules.find((entry) => entry.slug === slug)!;
   const pass = firstQuizPass(slug, facts.attempts);
   return {
     pass: pass && {
       passedAt: pass.submittedAt.toISOString(),
-      passedOn: isoDateOf(pass.submittedAt),
+      passedOn: isoDateOf(pass.submittedAt, timeZone),
       score: pass.score,
     },
     bestScore: standing.progress.bestScore,

@@ -10,6 +10,7 @@ import { toCsv, type CsvColumn } from "@/lib/csv/export";
 import type { RegisterFilter } from "@/lib/validations/certification";
 import { pdfFonts } from "@/lib/pdf/fonts";
 import { renderRegisterPdf } from "@/lib/pdf/register";
+import { readClubSettings } from "@/lib/validations/club-settings";
 import { Certificate, Club } from "@/models";
 
 export interface Register {
@@ -46,7 +47,7 @@ export async function registerFor(actor: Actor, filter: RegisterFilter): Promise
   const suspended = await suspendedAthletes(
     certificates.filter((entry) => entry.kind === "clearance").map((entry) => entry.athleteId),
   );
-  const today = isoDateOf(new Date());
+  const today = isoDateOf(new Date(), readClubSettings(club?.settings).timeZone);
   const entries = certificates
     .map((certificate) => summarise(certificate, today, suspended.has(certificate.athleteId)))
     .filter((entry) => filter.status === "all" || entry.status === filter.status);

@@ -7,6 +7,7 @@ import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { recordAudit } from "@/lib/data/audit";
 import { clubCertificationContext, standingOf } from "@/lib/data/certification-facts";
+import { settingsForClub } from "@/lib/data/club-settings";
 import { issueCertificate, issueClearanceIfNewlyHeld } from "@/lib/data/certificate-issue";
 import { certificateFileName, renderStoredCertificate, verifyUrlFor } from "@/lib/data/certificates";
 import {
@@ -83,8 +84,9 @@ export async function practicalViewFor(
   const meta = requireModule(slug);
   const athlete = await User.findByPk(athleteId);
   assertVisible(!!athlete && canViewAthlete(actor, athlete));
-  const today = isoDateOf(new Date());
   const context = await clubCertificationContext(athlete.clubId);
+  const { timeZone } = context.settings;
+  const today = isoDateOf(new Date(), timeZone);
   const standing = (await standingOf(athlete.id, context, today)).modules.find(
     (entry) => entry.slug === slug,
   )!;
@@ -111,7 +113,7 @@ export async function practicalViewFor(
       ? {
           id: open.id,
           requestedAt: open.requestedAt.toISOString(),
-          requestedOn: isoDateOf(open.requestedAt),
+          requestedOn: isoDateOf(open.requestedAt, timeZone),
           coachName: open.coachId ? (names.get(open.coachId) ?? null) : null,
         }
       : null,
@@ -121,7 +123,7 @@ export async function practicalViewFor(
             outcome: decided.status === "passed" ? "passed" : "not-yet",
             note: decided.note ?? "",
             assessedAt: decided.assessedAt.toISOString(),
-            assessedOn: isoDateOf(decided.assessedAt),
+            assessedOn: isoDateOf(decided.assessedAt, timeZone),
             assessorName: names.get(decided.assessorId ?? 0) ?? "a coach",
           }
         : null,
@@ -179,8 +181,8 @@ export async function requestSignOff(
     }
   }
   const now = new Date();
-  const today = isoDateOf(now);
   const context = await clubCertificationContext(actor.clubId);
+  const today = isoDateOf(now, context.settings.timeZone);
   const assessmentId = await writeTransaction(async (transaction) => {
     const standing = (await standingOf(actor.id, context, today, transaction)).modules.find(
       (entry) => entry.slug === meta.slug,
@@ -263,10 +265,13 @@ export interface QueueEntry {
 export async function signOffQueue(actor: Actor): Promise<QueueEntry[]> {
   await databaseReady();
   assertAllowed(isCoach(actor), "Only coaches and administrators see the sign-off queue.");
-  const waiting = await PracticalAssessment.findAll({
-    where: { clubId: actor.clubId, status: "waiting", athleteId: { [Op.ne]: actor.id } },
-    order: [["requestedAt", "ASC"]],
-  });
+  const [waiting, { timeZone }] = await Promise.all([
+    PracticalAssessment.findAll({
+      where: { clubId: actor.clubId, status: "waiting", athleteId: { [Op.ne]: actor.id } },
+      order: [["requestedAt", "ASC"]],
+    }),
+    settingsForClub(actor.clubId),
+  ]);
   const names = await namesOf(waiting.flatMap((entry) => [entry.athleteId, entry.coachId]));
   return waiting.map((entry) => ({
     id: entry.id,
@@ -275,7 +280,7 @@ export async function signOffQueue(actor: Actor): Promise<QueueEntry[]> {
     moduleSlug: entry.moduleSlug,
     moduleTitle: getModule(entry.moduleSlug)?.meta.title ?? entry.moduleSlug,
     requestedAt: entry.requestedAt.toISOString(),
-    requestedOn: isoDateOf(entry.requestedAt),
+    requestedOn: isoDateOf(entry.requestedAt, timeZone),
     askedCoachName: entry.coachId ? (names.get(entry.coachId) ?? null) : null,
     forMe: entry.coachId === null || entry.coachId === actor.id,
   }));
@@ -336,12 +341,13 @@ export async function assessmentForCoach(actor: Actor, assessmentId: string): Pr
     "Only a coach of the club can assess a practical, and never their own.",
   );
   const meta = getModule(assessment.moduleSlug)?.meta;
-  const [photos, names, best] = await Promise.all([
+  const [photos, names, best, { timeZone }] = await Promise.all([
     EvidencePhoto.findAll({ where: { assessmentId }, order: [["createdAt", "ASC"]] }),
     namesOf([assessment.coachId, assessment.assessorId]),
     QuizAttempt.max<number | null, QuizAttempt>("score", {
       where: { userId: athlete.id, moduleSlug: assessment.moduleSlug, submittedAt: { [Op.ne]: null } },
     }),
+    settingsForClub(athlete.clubId),
   ]);
   return {
     id: assessment.id,
@@ -350,10 +356,10 @@ export async function assessmentForCoach(actor: Actor, assessmentId: string): Pr
     module: { slug: assessment.moduleSlug, title: meta?.title ?? assessment.moduleSlug },
     checklist: assessment.checklist ?? meta?.checklist ?? [],
     requestedAt: assessment.requestedAt.toISOString(),
-    requestedOn: isoDateOf(assessment.requestedAt),
+    requestedOn: isoDateOf(assessment.requestedAt, timeZone),
     askedCoachName: assessment.coachId ? (names.get(assessment.coachId) ?? null) : null,
     assessedAt: assessment.assessedAt?.toISOString() ?? null,
-    assessedOn: assessment.assessedAt ? isoDateOf(assessment.assessedAt) : null,
+    assessedOn: assessment.assessedAt ? isoDateOf(assessment.assessedAt, timeZone) : null,
     assessorName: assessment.assessorId ? (names.get(assessment.assessorId) ?? null) : null,
     verdicts: assessment.verdicts,
     note: assessment.note,
@@ -370,9 +376,10 @@ export interface RecordedAssessment {
 
 /**
  * A coach records what they observed. Every checklist item met → the module is passed: its certificate
- * is issued (expiring clearanceMonths after today) and, if the clearance now holds for the first time,
- * the clearance certificate too; the athlete gets them by e-mail. Anything not yet met → the athlete is
- * sent back with the note. Photos uploaded to this sign-off but not kept in the form are deleted.
+ * is issued on the club's today (expiring clearanceMonths after it) and, if the clearance now holds for
+ * the first time, the clearance certificate too; the athlete gets them by e-mail. Anything not yet met →
+ * the athlete is sent back with the note. Photos uploaded to this sign-off but not kept in the form are
+ * deleted.
  */
 export async function recordAssessment(
   actor: Actor,
@@ -391,8 +398,9 @@ export async function recordAssessment(
   const verdicts = parsed.data.items as Record<string, ChecklistVerdict>;
   const outcome = assessmentOutcome(meta.checklist, verdicts);
   const now = new Date();
-  const today = isoDateOf(now);
   const context = await clubCertificationContext(athlete.clubId);
+  // The club's day, not UTC's: at UTC+12 a 6 a.m. sign-off would otherwise be dated the day before.
+  const today = isoDateOf(now, context.settings.timeZone);
 
   const { issued, discarded } = await writeTransaction(async (transaction) => {
     const assessment = await PracticalAssessment.findByPk(assessmentId, { transaction });

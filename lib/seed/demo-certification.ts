@@ -227,7 +227,6 @@ export async function seedDemoCertification(
   now = new Date(),
 ): Promise<{ staged: number }> {
   initModels(sequelize);
-  const today = isoDateOf(now);
   const modules = new Map(listModules().map((meta) => [meta.slug, meta]));
   return writeTransaction(async (transaction) => {
     const club = await Club.findOne({ where: { slug: demoClub.slug }, transaction });
@@ -244,6 +243,8 @@ export async function seedDemoCertification(
     if (existing > 0) return { staged: 0 };
 
     const context = await clubCertificationContext(club.id, transaction);
+    const { timeZone } = context.settings;
+    const today = isoDateOf(now, timeZone);
     const passMark = context.settings.passMark;
     const events: SignOffEvent[] = [];
     let staged = 0;
@@ -291,13 +292,10 @@ export async function seedDemoCertification(
         }
       }
       for (const entry of plan.signedOff ?? []) {
-        events.push({
-          user,
-          meta: modules.get(entry.slug)!,
-          coach: byEmail.get(entry.coach)!,
-          day: addDaysIso(today, -entry.daysAgo),
-          when: at(today, entry.daysAgo, 17),
-        });
+        const when = at(today, entry.daysAgo, 17);
+        // The sign-off's day is the club's day of that moment, as recordAssessment would write it.
+        const day = isoDateOf(when, timeZone);
+        events.push({ user, meta: modules.get(entry.slug)!, coach: byEmail.get(entry.coach)!, day, when });
       }
     }
 

@@ -25,7 +25,7 @@ const dataDir = createTempDataDir("certification");
 const { closeDatabase, getSequelize, writeTransaction } = await import("@/lib/db");
 const { databaseReady } = await import("@/lib/data/database");
 const { seedDemoClub } = await import("@/lib/seed/demo-club");
-const { startOrResumeAttempt, submitAttempt } = await import("@/lib/data/learning");
+const { quizStandingFor, startOrResumeAttempt, submitAttempt } = await import("@/lib/data/learning");
 const signOffs = await import("@/lib/data/sign-offs");
 const certificates = await import("@/lib/data/certificates");
 const clearance = await import("@/lib/data/clearance");
@@ -36,6 +36,7 @@ const { pdfFonts } = await import("@/lib/pdf/fonts");
 const { listModules } = await import("@/lib/content/modules");
 const { rosterRowMatches } = await import("@/lib/clearance/roster");
 const { isoDateOf } = await import("@/lib/clearance/dates");
+const { machineTimeZone } = await import("@/lib/care/calendar");
 const { passExpiresOn } = await import("@/lib/clearance/rules");
 const { Club, QuizAttempt, User, AuditEvent, Certificate } = await import("@/models");
 const { ConflictError, ForbiddenError, NotFoundError, ValidationError } = await import("@/lib/http/errors");
@@ -45,12 +46,15 @@ const pdfRoute = await import("@/app/api/certificates/[id]/pdf/route");
 const verifyRoute = await import("@/app/api/verify/[code]/route");
 const logoRoute = await import("@/app/api/club/logo/route");
 const matrixExportRoute = await import("@/app/api/roster/matrix/export/route");
+const registerCsvRoute = await import("@/app/api/register/csv/route");
+const registerPdfRoute = await import("@/app/api/register/pdf/route");
 
 const tinyPng = Buffer.from(
   "iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==",
   "base64",
 );
-const today = isoDateOf(new Date());
+// The demo club sets no time zone: its day is the machine's (the e2e server's too).
+const today = isoDateOf(new Date(), machineTimeZone());
 const year = Number(today.slice(0, 4));
 
 async function actorFor(email: string): Promise<Actor> {
@@ -847,5 +851,127 @@ describe("club settings", () => {
     expect(after.map((entry) => entry.expiresOn)).toEqual(before.map((entry) => entry.expiresOn));
     expect(await QuizAttempt.count({ where: { passMark: 0.9 } })).toBe(0);
     expect(await AuditEvent.count({ where: { action: "club.settings-changed" } })).toBe(1);
+  });
+});
+
+describe("the club's time zone", () => {
+  /** Puts the demo club in `settings` for the length of `run`, then restores what was stored. */
+  async function withClubSettings(
+    settings: Record<string, unknown>,
+    run: () => Promise<void>,
+  ): Promise<void> {
+    const stored = await writeTransaction(async (transaction) => {
+      const club = (await Club.findByPk(admin.clubId, { transaction }))!;
+      const before = club.settings;
+      await club.update({ settings: { ...before, ...settings } }, { transaction });
+      return before;
+    });
+    try {
+      await run();
+    } finally {
+      vi.useRealTimers();
+      await writeTransaction((transaction) =>
+        Club.update({ settings: stored }, { where: { id: admin.clubId }, transaction }),
+      );
+    }
+  }
+
+  /** The clock as the data functions read it (`new Date()`); timers stay real for the database. */
+  function clockAt(instant: string): void {
+    vi.useFakeTimers({ toFake: ["Date"] });
+    vi.setSystemTime(new Date(instant));
+  }
+
+  it("dates a sign-off on the club's day, expires it from that day, and counts 'today' there", async () => {
+    const elin = await actorFor("elin@lantern-reach.example");
+    await withClubSettings(
+      { timeZone: "Pacific/Auckland", clearanceMonths: 12, clearanceModules: ["overall-length"] },
+      async () => {
+        // New Zealand keeps daylight time (UTC+13) from late September to early April (IANA Time Zone
+        // Database (tzdata), IANA, 2025): 17:30 UTC on 1 March 2027 is 06:30 on 2 March at the club.
+        clockAt("2027-03-01T17:30:00Z");
+        await passQuiz(elin, "overall-length");
+        const { assessmentId, recorded } = await signOffAll(elin, coach, "overall-length");
+        expect(recorded.certificates.map((entry) => entry.kind)).toEqual(["module", "clearance"]);
+        const issued = await Certificate.findAll({
+          where: { athleteId: elin.id },
+          order: [["serialNumber", "ASC"]],
+        });
+        expect(issued.map((entry) => [entry.kind, entry.issuedOn, entry.expiresOn])).toEqual([
+          ["module", "2027-03-02", "2028-03-02"],
+          ["clearance", "2027-03-02", "2028-03-02"],
+        ]);
+        expect(issued.map((entry) => entry.serialYear)).toEqual([2027, 2027]);
+        const view = await signOffs.practicalViewFor(elin, "overall-length");
+        expect(view.currentPass).toEqual({ signedOffOn: "2027-03-02", expiresOn: "2028-03-02" });
+        expect(view.latestDecision?.assessedOn).toBe("2027-03-02");
+        const detail = await signOffs.assessmentForCoach(coach, assessmentId);
+        expect([detail.requestedOn, detail.assessedOn]).toEqual(["2027-03-02", "2027-03-02"]);
+        expect((await quizStandingFor(elin, "overall-length")).pass?.passedOn).toBe("2027-03-02");
+
+        const moduleCertificate = issued[0]!;
+        const statusesAt = async (instant: string) => {
+          clockAt(instant);
+          const mine = await certificates.certificatesOfAthlete(elin, elin.id);
+          const { standing, today: clubToday } = await clearance.clearanceOf(elin);
+          return {
+            today: clubToday,
+            certificates: mine.map((entry) => entry.status),
+            module: standing.modules.find((entry) => entry.slug === "overall-length")!.status,
+            clearance: standing.clearance.state,
+            verified: (await certificates.verifyCode(moduleCertificate.verificationCode))!.status,
+          };
+        };
+        // 23:59 on 1 March 2028 at the club: the last day the pass counts.
+        expect(await statusesAt("2028-03-01T10:59:00Z")).toEqual({
+          today: "2028-03-01",
+          certificates: ["valid", "valid"],
+          module: "passed",
+          clearance: "cleared",
+          verified: "valid",
+        });
+        // Midnight at the club, still 1 March in UTC: the pass has expired there.
+        expect(await statusesAt("2028-03-01T11:00:00Z")).toEqual({
+          today: "2028-03-02",
+          certificates: ["expired", "expired"],
+          module: "expired",
+          clearance: "expired",
+          verified: "expired",
+        });
+
+        // The roster, the public credential, the certificate PDF and the register go by the same day.
+        const matrix = await clearance.rosterMatrix(coach);
+        expect(matrix.today).toBe("2028-03-02");
+        expect(matrix.athletes.find((row) => row.id === elin.id)?.clearance.state).toBe("expired");
+        const badge = (await (
+          await verifyRoute.GET(new Request("http://test"), {
+            params: Promise.resolve({ code: moduleCertificate.verificationCode }),
+          })
+        ).json()) as { description: string };
+        expect(badge.description).toMatch(/: expired\.$/);
+        session.actor = elin;
+        const pdf = await pdfRoute.GET(new Request("http://test"), {
+          params: Promise.resolve({ id: moduleCertificate.id }),
+        });
+        expect(pdfText(new Uint8Array(await pdf.arrayBuffer()))).toContain(
+          "Expired on 2 March 2028: no longer valid.",
+        );
+        const listed = await register.registerFor(admin, {
+          module: "",
+          kind: "all",
+          status: "expired",
+          from: "2027-03-02",
+          to: "2027-03-02",
+        });
+        expect(listed.generatedOn).toBe("2028-03-02");
+        expect(listed.entries.map((entry) => entry.serial)).toEqual(issued.map((entry) => entry.serial));
+        session.actor = admin;
+        const csv = await registerCsvRoute.GET(new Request("http://test/api/register/csv"), undefined);
+        expect(csv.headers.get("content-disposition")).toContain("induction-register-2028-03-02.csv");
+        const printed = await registerPdfRoute.GET(new Request("http://test/api/register/pdf"), undefined);
+        expect(printed.headers.get("content-disposition")).toContain("induction-register-2028-03-02.pdf");
+        expect(pdfText(new Uint8Array(await printed.arrayBuffer()))).toContain("Printed 2028-03-02");
+      },
+    );
   });
 });

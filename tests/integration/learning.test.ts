@@ -16,6 +16,8 @@ import { Club, QuizAttempt, User } from "@/models";
 import type { Actor } from "@/lib/auth/permissions";
 import { ConflictError, NotFoundError } from "@/lib/http/errors";
 import { listModules } from "@/lib/content/modules";
+import { isoDateOf } from "@/lib/clearance/dates";
+import { machineTimeZone } from "@/lib/care/calendar";
 
 createTempDataDir("learning");
 
@@ -162,7 +164,12 @@ describe("the quiz page's standing", () => {
     const passing = await startOrResumeAttempt(elin, "secure-and-check");
     const passed = await submitAttempt(elin, passing.attemptId, rightAnswers((await QuizAttempt.findByPk(passing.attemptId))!));
     const afterPass = {
-      pass: { passedAt: passed.submittedAt, passedOn: passed.submittedAt.slice(0, 10), score: 1 },
+      pass: {
+        passedAt: passed.submittedAt,
+        // The demo club sets no time zone: its day is the machine's.
+        passedOn: isoDateOf(new Date(passed.submittedAt), machineTimeZone()),
+        score: 1,
+      },
       bestScore: 1,
       hasOpenAttempt: false,
       status: "ready-for-sign-off",

@@ -11,6 +11,8 @@ import {
   type ModulePass,
 } from "@/lib/clearance/rules";
 import { assessmentOutcome } from "@/lib/clearance/checklist";
+import { athleteStanding, type AthleteFacts } from "@/lib/clearance/athlete-summary";
+import { certificateStatus } from "@/lib/certificates/status";
 
 const required = ["overall-length", "setting-inboard"];
 
@@ -29,9 +31,9 @@ describe("dates", () => {
     expect(() => addMonthsIso("2026-02-01", 1.5)).toThrow(RangeError);
   });
 
-  it("counts days and formats dates in UTC", () => {
+  it("counts days and formats dates as written", () => {
     expect(daysUntil("2026-12-31", "2027-01-30")).toBe(30);
-    expect(isoDateOf(new Date("2026-06-30T23:59:59Z"))).toBe("2026-06-30");
+    expect(isoDateOf(new Date("2026-06-30T23:59:59Z"), "UTC")).toBe("2026-06-30");
     expect(formatLongDate("2027-03-14")).toBe("14 March 2027");
   });
 
@@ -48,6 +50,35 @@ describe("dates", () => {
     expect(expiryVerb("2026-12-16", lastValidDay("2026-12-16"))).toBe("expires");
     expect(expiryVerb("2026-12-16", "2026-12-16")).toBe("expired");
     expect(expiryVerb("2026-12-16", "2027-01-02")).toBe("expired");
+  });
+});
+
+describe("the club's day of an instant", () => {
+  // Offsets from the IANA Time Zone Database (tzdata, IANA, 2025): New Zealand UTC+13 in its summer
+  // (December) and UTC+12 in winter (July), New South Wales UTC+10 in June, California UTC-8 in January.
+  it.each([
+    ["2026-12-02T17:00:00Z", "Pacific/Auckland", "2026-12-03"], // 06:00 on 3 December there
+    ["2026-12-02T17:00:00Z", "UTC", "2026-12-02"],
+    ["2026-06-14T20:30:00Z", "Australia/Sydney", "2026-06-15"], // 06:30 on 15 June
+    ["2027-01-01T05:00:00Z", "America/Los_Angeles", "2026-12-31"], // 21:00 on New Year's Eve
+    ["2026-07-01T11:59:00Z", "Pacific/Auckland", "2026-07-01"], // 23:59
+    ["2026-07-01T12:00:00Z", "Pacific/Auckland", "2026-07-02"], // midnight: the club's new day
+  ])("%s is %s's %s", (instant, zone, day) => {
+    expect(isoDateOf(new Date(instant), zone)).toBe(day);
+  });
+
+  it("dates a sign-off on the club's day, so the pass expires on that day a year later", () => {
+    const signedOffOn = isoDateOf(new Date("2026-12-02T17:00:00Z"), "Pacific/Auckland");
+    expect(passExpiresOn(signedOffOn, 12)).toBe("2027-12-03");
+  });
+
+  it("lets a certificate expire when the club's expiry day begins, not UTC's", () => {
+    const certificate = { kind: "module" as const, expiresOn: "2027-12-03", revoked: false };
+    const lastMinute = new Date("2027-12-02T10:59:00Z"); // 23:59 on 2 December in Auckland
+    const midnight = new Date("2027-12-02T11:00:00Z"); // 00:00 on 3 December in Auckland
+    expect(certificateStatus(certificate, isoDateOf(lastMinute, "Pacific/Auckland"), false)).toBe("valid");
+    expect(certificateStatus(certificate, isoDateOf(midnight, "Pacific/Auckland"), false)).toBe("expired");
+    expect(certificateStatus(certificate, isoDateOf(midnight, "UTC"), false)).toBe("valid");
   });
 });
 
@@ -237,5 +268,62 @@ describe("checklist outcome", () => {
     expect(assessmentOutcome(checklist, { a: "met", b: "not-yet" })).toBe("not-yet");
     expect(assessmentOutcome(checklist, { a: "met" })).toBe("not-yet");
     expect(assessmentOutcome([], {})).toBe("not-yet");
+  });
+});
+
+describe("an athlete's standing on the club's calendar", () => {
+  // New Zealand is UTC+13 in December (IANA Time Zone Database (tzdata), IANA, 2025).
+  const auckland = "Pacific/Auckland";
+  const quizPassed = {
+    moduleSlug: "overall-length",
+    score: 1,
+    passed: true,
+    submittedAt: new Date("2025-11-20T08:00:00Z"),
+  };
+  const facts = (overrides: Partial<AthleteFacts>): AthleteFacts => ({
+    lessonReads: ["overall-length"],
+    attempts: [quizPassed],
+    assessments: [],
+    passes: [],
+    suspension: null,
+    ...overrides,
+  });
+
+  it("dates a coach's suspension on the club's day", () => {
+    // 07:00 on 3 December in Auckland.
+    const suspendedAt = new Date("2026-12-02T18:00:00Z");
+    const suspended = facts({ suspension: { reason: "Collar not seated", suspendedAt } });
+    const clearance = (timeZone: string) =>
+      athleteStanding(["overall-length"], ["overall-length"], suspended, { today: "2026-12-03", timeZone })
+        .clearance;
+    expect(clearance(auckland)).toMatchObject({
+      state: "suspended",
+      suspension: { reason: "Collar not seated", since: "2026-12-03" },
+    });
+    expect(clearance("UTC").suspension?.since).toBe("2026-12-02");
+  });
+
+  it("compares a coach's 'not yet' with the pass by the club's day of the decision", () => {
+    // Signed off on 3 December 2025 (the club's day), so expired by December 2026. A 'not yet' recorded
+    // at 09:00 on 3 December in Auckland (20:00 UTC on the 2nd) is on the pass's own day, not before it.
+    const standing = (timeZone: string) =>
+      athleteStanding(
+        ["overall-length"],
+        ["overall-length"],
+        facts({
+          passes: [pass("overall-length", "2025-12-03")],
+          assessments: [
+            {
+              moduleSlug: "overall-length",
+              status: "not-yet",
+              requestedAt: new Date("2025-12-01T20:00:00Z"),
+              assessedAt: new Date("2025-12-02T20:00:00Z"),
+            },
+          ],
+        }),
+        { today: "2026-12-10", timeZone },
+      ).modules[0]!.status;
+    expect(standing(auckland)).toBe("not-yet");
+    expect(standing("UTC")).toBe("expired");
   });
 });
