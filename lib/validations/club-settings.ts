@@ -29,9 +29,10 @@ export const clubSettingsSchema = z.object({
   raceDays: z.array(z.iso.date()).default([]),
   humidSpell: z.boolean().default(false),
   /**
-   * The club's IANA time zone: what "today" is for cleanings, race days and the weekly digest. A club
-   * that has not chosen one, or whose stored name this machine does not know, keeps the server's zone
-   * (only this field falls back). Certification dates stay in UTC (lib/clearance/dates.ts).
+   * The club's IANA time zone: what "today" is for cleanings, race days and the weekly digest, and the
+   * calendar of every certification date (isoDateOf in lib/clearance/dates.ts). A club that has not
+   * chosen one, or whose stored name this machine does not know, keeps the server's zone (only this
+   * field falls back).
    */
   timeZone: z.string().refine(isTimeZone).catch(() => machineTimeZone()),
 });

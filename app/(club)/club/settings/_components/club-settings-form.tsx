@@ -152,7 +152,7 @@ export function ClubSettingsFormView({
         <legend className="px-1 text-lg font-semibold">The club&apos;s day</legend>
         <SelectField
           label="Time zone"
-          hint="Where the club rows. It decides when a day starts for cleanings, race days and the weekly cleaning digest."
+          hint="Where the club rows. It decides when a day starts: the day of a sign-off, when a pass or certificate expires, cleanings, race days and the weekly cleaning digest."
           error={errorAt(errors, "timeZone")}
           options={timeZones.map((zone) => ({ value: zone, label: zone.replaceAll("_", " ") }))}
           {...form.register("timeZone")}
