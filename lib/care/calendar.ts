@@ -48,14 +48,69 @@ export function timeZoneChoices(current: string): string[] {
   return [first!, ...rest.sort()];
 }
 
-/**
- * The calendar date (YYYY-MM-DD) at `now` in `timeZone`: the club's own "today", the same on the server
- * and in any athlete's browser, wherever either of them is.
- */
-export function isoDateInZone(timeZone: string, now: Date = new Date()): string {
-  const parts = dayFormatter(timeZone).formatToParts(now);
+/** The calendar date (YYYY-MM-DD) at `instant` in `timeZone`, asked of Intl itself. */
+function intlIsoDate(timeZone: string, instant: Date): string {
+  const parts = dayFormatter(timeZone).formatToParts(instant);
   const part = (type: Intl.DateTimeFormatPartTypes) => parts.find((entry) => entry.type === type)?.value ?? "";
   return `${part("year")}-${part("month")}-${part("day")}`;
+}
+
+const offsetFormatters = new Map<string, Intl.DateTimeFormat>();
+
+/** How far `timeZone`'s wall clock is ahead of UTC at `epochMs`, in milliseconds (Intl, to the second). */
+function zoneOffsetMs(timeZone: string, epochMs: number): number {
+  let formatter = offsetFormatters.get(timeZone);
+  if (!formatter) {
+    formatter = new Intl.DateTimeFormat("en-GB", {
+      timeZone,
+      hourCycle: "h23",
+      year: "numeric",
+      month: "numeric",
+      day: "numeric",
+      hour: "numeric",
+      minute: "numeric",
+      second: "numeric",
+    });
+    offsetFormatters.set(timeZone, formatter);
+  }
+  const value = (type: Intl.DateTimeFormatPartTypes) =>
+    Number(formatter.formatToParts(epochMs).find((entry) => entry.type === type)?.value);
+  const wallClock = Date.UTC(value("year"), value("month") - 1, value("day"), value("hour"), value("minute"), value("second"));
+  return wallClock - Math.floor(epochMs / 1000) * 1000;
+}
+
+const dayMs = 86_400_000;
+
+/**
+ * Each zone's offset through one UTC day, when it holds all day (null on a day the clocks change): one
+ * Intl lookup a zone and day instead of one a date. The roster works out thousands of dates at a time,
+ * and Intl's formatToParts costs several times what the arithmetic does.
+ */
+const steadyOffsets = new Map<string, number | null>();
+const maxSteadyOffsets = 20_000;
+
+function steadyOffsetOn(timeZone: string, utcDay: number): number | null {
+  const key = `${timeZone}|${utcDay}`;
+  const known = steadyOffsets.get(key);
+  if (known !== undefined) return known;
+  const start = zoneOffsetMs(timeZone, utcDay * dayMs);
+  const steady = start === zoneOffsetMs(timeZone, utcDay * dayMs + dayMs - 1000) ? start : null;
+  if (steadyOffsets.size >= maxSteadyOffsets) steadyOffsets.clear();
+  steadyOffsets.set(key, steady);
+  return steady;
+}
+
+/**
+ * The calendar date (YYYY-MM-DD) at `now` in `timeZone`: the club's own "today", the same on the server
+ * and in any athlete's browser, wherever either of them is. The wall clock is the instant plus the
+ * zone's offset that day; on a day the clocks change, Intl is asked for the date itself.
+ */
+export function isoDateInZone(timeZone: string, now: Date = new Date()): string {
+  const epochMs = now.getTime();
+  if (!Number.isFinite(epochMs)) throw new RangeError("isoDateInZone needs a valid date");
+  const offset = steadyOffsetOn(timeZone, Math.floor(epochMs / dayMs));
+  if (offset === null) return intlIsoDate(timeZone, now);
+  return new Date(epochMs + offset).toISOString().slice(0, 10);
 }
 
 /** ISO weekday of a day number: Monday 1 … Sunday 7 (day 0, 1970-01-01, was a Thursday). */

@@ -58,6 +58,28 @@ describe("the club's today, in its time zone", () => {
     expect(isoDateInZone("America/Los_Angeles", new Date("2027-01-04T07:59:00Z"))).toBe("2027-01-03");
   });
 
+  it("agrees with Intl's own date at every instant of a year, clock-change days included", () => {
+    // Zones with daylight time both ways, half- and quarter-hour offsets, and a half-hour clock change
+    // (Lord Howe): the reference is Intl's date for each instant (en-CA writes YYYY-MM-DD).
+    const zones = ["UTC", "Pacific/Auckland", "America/Los_Angeles", "Europe/London", "Asia/Kathmandu", "America/St_Johns", "Australia/Lord_Howe", "Pacific/Chatham"];
+    const start = Date.UTC(2026, 0, 1);
+    for (const zone of zones) {
+      const reference = new Intl.DateTimeFormat("en-CA", { timeZone: zone, year: "numeric", month: "2-digit", day: "2-digit" });
+      // Every 37 minutes for a year: about 14,000 instants a zone, never twice at the same time of day.
+      for (let instant = start; instant < start + 366 * 86_400_000; instant += 37 * 60_000) {
+        const date = new Date(instant);
+        expect(isoDateInZone(zone, date), `${zone} at ${date.toISOString()}`).toBe(reference.format(date));
+      }
+    }
+    // Either side of a clock change at the club's midnight hour: Auckland's clocks went back at
+    // 03:00 NZDT on 5 April 2026 (14:00 UTC on the 4th), and forward at 02:00 NZST on 27 September.
+    for (const instant of ["2026-04-04T10:59:59Z", "2026-04-04T11:00:00Z", "2026-04-04T13:59:59Z", "2026-04-04T14:00:00Z", "2026-09-26T11:59:59Z", "2026-09-26T12:00:00Z", "2026-09-26T13:59:59Z", "2026-09-26T14:00:00Z"]) {
+      const reference = new Intl.DateTimeFormat("en-CA", { timeZone: "Pacific/Auckland" });
+      expect(isoDateInZone("Pacific/Auckland", new Date(instant)), instant).toBe(reference.format(new Date(instant)));
+    }
+    expect(() => isoDateInZone("UTC", new Date(Number.NaN))).toThrow(RangeError);
+  });
+
   it("knows time zone names, and offers UTC first with the club's own kept", () => {
     expect(isTimeZone("Europe/Oslo")).toBe(true);
     expect(isTimeZone("UTC")).toBe(true);
