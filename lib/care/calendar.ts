@@ -113,6 +113,27 @@ export function isoDateInZone(timeZone: string, now: Date = new Date()): string 
   return new Date(epochMs + offset).toISOString().slice(0, 10);
 }
 
+/**
+ * The start of `isoDate` in `timeZone` as an RFC 3339 time with the zone's offset that moment, e.g.
+ * "2027-03-02T00:00:00+13:00": when a date-only pass starts or ends, for readers in any zone. On the
+ * rare day a zone's clocks jump over midnight, the first moment the day has.
+ */
+export function midnightInZone(isoDate: string, timeZone: string): string {
+  // Throws a RangeError for anything but a real YYYY-MM-DD date.
+  const wallMidnight = isoDateToDayNumber(isoDate) * dayMs;
+  // The instant whose wall clock reads midnight: the offset there, looked up twice in case midnight
+  // itself lies across a change of offset.
+  let instant = wallMidnight - zoneOffsetMs(timeZone, wallMidnight);
+  instant = wallMidnight - zoneOffsetMs(timeZone, instant);
+  if (isoDateInZone(timeZone, new Date(instant)) !== isoDate) instant += 3_600_000;
+  const offsetMinutes = Math.round(zoneOffsetMs(timeZone, instant) / 60_000);
+  const wall = new Date(instant + offsetMinutes * 60_000).toISOString().slice(0, 19);
+  const sign = offsetMinutes < 0 ? "-" : "+";
+  const hours = String(Math.floor(Math.abs(offsetMinutes) / 60)).padStart(2, "0");
+  const minutes = String(Math.abs(offsetMinutes) % 60).padStart(2, "0");
+  return `${wall}${sign}${hours}:${minutes}`;
+}
+
 /** ISO weekday of a day number: Monday 1 … Sunday 7 (day 0, 1970-01-01, was a Thursday). */
 function isoWeekday(dayNumber: number): number {
   return ((((dayNumber + 3) % 7) + 7) % 7) + 1;

@@ -1,4 +1,5 @@
 import type { CertificateStatus } from "@/lib/certificates/status";
+import { midnightInZone } from "@/lib/care/calendar";
 
 export interface BadgeSource {
   status: CertificateStatus;
@@ -11,6 +12,8 @@ export interface BadgeSource {
   clubName: string;
   clubSlug: string;
   moduleSlug: string | null;
+  /** The club's time zone: its dates start at its own midnight. */
+  timeZone: string;
 }
 
 const criteria = {
@@ -37,8 +40,10 @@ export function openBadgeCredential(source: BadgeSource, baseUrl: string): Recor
     name: source.title,
     description: `Status on ${baseUrl}/verify/${source.code}: ${source.status}.`,
     issuer: { id: `urn:slipway:club:${source.clubSlug}`, type: ["Profile"], name: source.clubName },
-    validFrom: `${source.issuedOn}T00:00:00Z`,
-    validUntil: `${source.expiresOn}T00:00:00Z`,
+    // Date-only in storage, and the club's dates: valid from the club's midnight that starts the issue day
+    // until the one that starts the expiry day, as the status page counts them.
+    validFrom: midnightInZone(source.issuedOn, source.timeZone),
+    validUntil: midnightInZone(source.expiresOn, source.timeZone),
     credentialSubject: {
       type: ["AchievementSubject"],
       identifier: [

@@ -263,6 +263,8 @@ export interface PublicVerification {
   clubName: string;
   clubSlug: string;
   moduleSlug: string | null;
+  /** The club's time zone, for the credential's start and end moments; never shown on the page. */
+  timeZone: string;
 }
 
 /** The public check of a code; null for any code that is not exactly one certificate's (no hints). */
@@ -294,5 +296,6 @@ export async function verifyCode(code: string): Promise<PublicVerification | nul
     clubName: club?.name ?? "",
     clubSlug: club?.slug ?? "",
     moduleSlug: certificate.moduleSlug,
+    timeZone,
   };
 }

@@ -36,7 +36,7 @@ const { pdfFonts } = await import("@/lib/pdf/fonts");
 const { listModules } = await import("@/lib/content/modules");
 const { rosterRowMatches } = await import("@/lib/clearance/roster");
 const { isoDateOf } = await import("@/lib/clearance/dates");
-const { machineTimeZone } = await import("@/lib/care/calendar");
+const { machineTimeZone, midnightInZone } = await import("@/lib/care/calendar");
 const { passExpiresOn } = await import("@/lib/clearance/rules");
 const { Club, QuizAttempt, User, AuditEvent, Certificate } = await import("@/models");
 const { ConflictError, ForbiddenError, NotFoundError, ValidationError } = await import("@/lib/http/errors");
@@ -394,7 +394,8 @@ describe("clearance, suspension, revocation and verification", () => {
     const badge = (await response.json()) as Record<string, unknown>;
     expect(badge).toMatchObject({
       type: ["VerifiableCredential", "OpenBadgeCredential"],
-      validFrom: `${today}T00:00:00Z`,
+      // The club's midnight starting the issue day; the demo club has the server's zone.
+      validFrom: midnightInZone(today, machineTimeZone()),
     });
     expect((badge["@context"] as string[])[0]).toBe("https://www.w3.org/ns/credentials/v2");
     const unknown = await verifyRoute.GET(new Request("http://test/api/verify/x"), {

@@ -7,6 +7,7 @@ import {
   isTimeZone,
   isoWeekOf,
   localIsoDate,
+  midnightInZone,
   timeZoneChoices,
 } from "@/lib/care/calendar";
 import { cleaningDueState } from "@/lib/care/cleaning-due";
@@ -78,6 +79,25 @@ describe("the club's today, in its time zone", () => {
       expect(isoDateInZone("Pacific/Auckland", new Date(instant)), instant).toBe(reference.format(new Date(instant)));
     }
     expect(() => isoDateInZone("UTC", new Date(Number.NaN))).toThrow(RangeError);
+  });
+
+  it("finds the instant a day starts in a zone, with the offset of that moment, as Intl reads it", () => {
+    const zones = ["UTC", "Pacific/Auckland", "America/Los_Angeles", "Asia/Kathmandu", "America/St_Johns", "Australia/Lord_Howe", "America/Santiago"];
+    for (const zone of zones) {
+      const reference = new Intl.DateTimeFormat("en-CA", { timeZone: zone });
+      for (let day = Date.UTC(2026, 0, 1); day < Date.UTC(2027, 0, 1); day += 86_400_000) {
+        const isoDate = new Date(day).toISOString().slice(0, 10);
+        const start = new Date(midnightInZone(isoDate, zone));
+        // The day has begun there, and a second earlier it had not.
+        expect(reference.format(start), `${zone} ${isoDate}`).toBe(isoDate);
+        expect(reference.format(new Date(start.getTime() - 1000)), `${zone} ${isoDate}`).not.toBe(isoDate);
+      }
+    }
+    expect(midnightInZone("2026-12-03", "UTC")).toBe("2026-12-03T00:00:00+00:00");
+    expect(midnightInZone("2026-12-03", "Asia/Kathmandu")).toBe("2026-12-03T00:00:00+05:45");
+    // Chile's clocks go from 24:00 to 01:00 on 6 September 2026: that day starts at 01:00.
+    expect(midnightInZone("2026-09-06", "America/Santiago")).toBe("2026-09-06T01:00:00-03:00");
+    expect(() => midnightInZone("2026-02-30", "UTC")).toThrow(RangeError);
   });
 
   it("knows time zone names, and offers UTC first with the club's own kept", () => {

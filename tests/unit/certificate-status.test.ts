@@ -33,6 +33,7 @@ describe("Open Badges 3.0 credential", () => {
         clubName: "Lantern Reach Rowing Club",
         clubSlug: "lantern-reach",
         moduleSlug: "setting-inboard",
+        timeZone: "UTC",
       },
       "https://slipway.example",
     );
@@ -41,8 +42,8 @@ describe("Open Badges 3.0 credential", () => {
       id: "https://slipway.example/api/verify/AbCdEfGhIjKlMnOpQrStUvWx",
       type: ["VerifiableCredential", "OpenBadgeCredential"],
       issuer: { type: ["Profile"], name: "Lantern Reach Rowing Club" },
-      validFrom: "2026-03-14T00:00:00Z",
-      validUntil: "2027-03-14T00:00:00Z",
+      validFrom: "2026-03-14T00:00:00+00:00",
+      validUntil: "2027-03-14T00:00:00+00:00",
       credentialSubject: {
         type: ["AchievementSubject"],
         achievement: {
@@ -51,6 +52,33 @@ describe("Open Badges 3.0 credential", () => {
           criteria: { narrative: expect.any(String) },
         },
       },
+    });
+  });
+});
+
+describe("the credential's start and end", () => {
+  it("are the club's own midnights, with the offset of that moment", () => {
+    const source = {
+      status: "valid" as const,
+      kind: "module" as const,
+      athleteName: "Test Athlete",
+      title: "Setting the inboard",
+      issuedOn: "2026-03-14",
+      expiresOn: "2026-07-14",
+      code: "AbCdEfGhIjKlMnOpQrStUvWx",
+      clubName: "Invented Test Club",
+      clubSlug: "invented-test",
+      moduleSlug: "setting-inboard",
+    };
+    // New Zealand: daylight time (UTC+13) in March, standard time (UTC+12) in July; Newfoundland:
+    // daylight time (UTC-2:30) from 8 March 2026 (IANA Time Zone Database, IANA, 2025).
+    expect(openBadgeCredential({ ...source, timeZone: "Pacific/Auckland" }, "https://slipway.example")).toMatchObject({
+      validFrom: "2026-03-14T00:00:00+13:00",
+      validUntil: "2026-07-14T00:00:00+12:00",
+    });
+    expect(openBadgeCredential({ ...source, timeZone: "America/St_Johns" }, "https://slipway.example")).toMatchObject({
+      validFrom: "2026-03-14T00:00:00-02:30",
+      validUntil: "2026-07-14T00:00:00-02:30",
     });
   });
 });
