@@ -4,7 +4,7 @@ import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { recordAudit } from "@/lib/data/audit";
 import { readClubLogo } from "@/lib/data/club-logo";
-import { settingsForClub } from "@/lib/data/club-settings";
+import { clubToday, settingsForClub, todayOfClub } from "@/lib/data/club-settings";
 import {
   assertAllowed,
   assertVisible,
@@ -114,7 +114,7 @@ export async function renderStoredCertificate(certificate: Certificate): Promise
   const suspended = certificate.kind === "clearance" && (await suspendedAthletes([certificate.athleteId])).has(certificate.athleteId);
   const status = certificateStatus(
     { kind: certificate.kind, expiresOn: certificate.expiresOn, revoked: certificate.revokedAt !== null },
-    isoDateOf(new Date(), readClubSettings(club?.settings).timeZone),
+    todayOfClub(club),
     suspended,
   );
   let lines: string[];
@@ -205,7 +205,7 @@ export async function revokeCertificate(
   await assertMayRevokeCertificate(actor, certificateId);
   const now = new Date();
   // The certificate is of the actor's club (asserted above): its clearances current on the club's day.
-  const today = isoDateOf(now, (await settingsForClub(actor.clubId)).timeZone);
+  const today = await clubToday(actor.clubId, now);
   return writeTransaction(async (transaction) => {
     const certificate = await Certificate.findByPk(certificateId, { transaction });
     if (!certificate) throw new ConflictError("The certificate is gone.");

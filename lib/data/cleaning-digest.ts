@@ -6,7 +6,8 @@ import { recordAudit } from "@/lib/data/audit";
 import { assertAllowed, canManageFleet, type Actor } from "@/lib/auth/permissions";
 import { NotFoundError } from "@/lib/http/errors";
 import { consumeOrRefuse, namedLimiter } from "@/lib/auth/throttle";
-import { isoDateInZone, isoWeekOf } from "@/lib/care/calendar";
+import { isoWeekOf } from "@/lib/care/calendar";
+import { todayOfClub } from "@/lib/data/club-settings";
 import { cleaningDueState } from "@/lib/care/cleaning-due";
 import { buildCleaningDigest } from "@/lib/care/digest";
 import { publicBaseUrl } from "@/lib/env";
@@ -80,11 +81,6 @@ export interface DigestRun {
   isoWeeks: string[];
   /** Clubs whose digest went out in this run. */
   sentToClubs: number[];
-}
-
-/** Today in the club's own time zone. */
-function todayOfClub(club: Club, now: Date): string {
-  return isoDateInZone(readClubSettings(club.settings).timeZone, now);
 }
 
 /**

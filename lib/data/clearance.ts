@@ -5,7 +5,7 @@ import { databaseReady } from "@/lib/data/database";
 import { versionedReadCache } from "@/lib/data/read-cache";
 import { recordAudit } from "@/lib/data/audit";
 import { clubCertificationContext, factsForAthletes, standingOf } from "@/lib/data/certification-facts";
-import { settingsForClub } from "@/lib/data/club-settings";
+import { clubToday } from "@/lib/data/club-settings";
 import { issueClearanceIfNewlyHeld } from "@/lib/data/certificate-issue";
 import { summarise, suspendedAthletes, type CertificateSummary } from "@/lib/data/certificates";
 import { attemptsOf, type AttemptListEntry } from "@/lib/data/learning";
@@ -131,7 +131,7 @@ export async function rosterMatrix(actor: Actor): Promise<RosterMatrix> {
   await databaseReady();
   assertMaySeeRoster(actor);
   // The club's today is in the key, so the matrix is worked out again when the club's day begins.
-  const today = isoDateOf(new Date(), (await settingsForClub(actor.clubId)).timeZone);
+  const today = await clubToday(actor.clubId);
   // The coach's id is in the key: "waiting for me" differs between coaches.
   return rosterMatrices.read(`${actor.clubId}:${actor.id}:${today}`, () => computeRosterMatrix(actor, today));
 }

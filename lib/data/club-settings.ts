@@ -11,7 +11,16 @@ export async function settingsForClub(clubId: number): Promise<ClubSettings> {
   return readClubSettings(club?.settings);
 }
 
-/** Today (YYYY-MM-DD) in the club's time zone: the day cleanings, race days and digests go by. */
+/**
+ * Today (YYYY-MM-DD) in the time zone of a club row already read (null: the server's zone): the day
+ * cleanings, race days, digests and certification dates go by.
+ */
+export function todayOfClub(club: Pick<Club, "settings"> | null, now: Date = new Date()): string {
+  return isoDateInZone(readClubSettings(club?.settings).timeZone, now);
+}
+
+/** Today in the club's time zone, reading the club first (todayOfClub). */
 export async function clubToday(clubId: number, now: Date = new Date()): Promise<string> {
-  return isoDateInZone((await settingsForClub(clubId)).timeZone, now);
+  await databaseReady();
+  return todayOfClub(await Club.findByPk(clubId), now);
 }

@@ -2,15 +2,14 @@ import "server-only";
 import { Op, type WhereOptions } from "sequelize";
 import { databaseReady } from "@/lib/data/database";
 import { summarise, suspendedAthletes, type CertificateSummary } from "@/lib/data/certificates";
+import { todayOfClub } from "@/lib/data/club-settings";
 import { assertMaySeeRegister, type Actor } from "@/lib/auth/permissions";
 import { listModules } from "@/lib/content/modules";
-import { isoDateOf } from "@/lib/clearance/dates";
 import { certificateStatusLabels } from "@/lib/certificates/status";
 import { toCsv, type CsvColumn } from "@/lib/csv/export";
 import type { RegisterFilter } from "@/lib/validations/certification";
 import { pdfFonts } from "@/lib/pdf/fonts";
 import { renderRegisterPdf } from "@/lib/pdf/register";
-import { readClubSettings } from "@/lib/validations/club-settings";
 import { Certificate, Club } from "@/models";
 
 export interface Register {
@@ -47,7 +46,7 @@ export async function registerFor(actor: Actor, filter: RegisterFilter): Promise
   const suspended = await suspendedAthletes(
     certificates.filter((entry) => entry.kind === "clearance").map((entry) => entry.athleteId),
   );
-  const today = isoDateOf(new Date(), readClubSettings(club?.settings).timeZone);
+  const today = todayOfClub(club);
   const entries = certificates
     .map((certificate) => summarise(certificate, today, suspended.has(certificate.athleteId)))
     .filter((entry) => filter.status === "all" || entry.status === filter.status);

@@ -2,7 +2,7 @@ import { execFileSync } from "node:child_process";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
-import { expect, test, type Browser, type Page } from "@playwright/test";
+import { expect, test, type Browser, type Locator, type Page } from "@playwright/test";
 import { demo, openNewestMailTo, signIn } from "./support/auth";
 
 /** Seeded by lib/seed/demo-certification.ts: every quiz passed, no sign-off yet. */
@@ -172,6 +172,19 @@ test.describe("certification", () => {
   });
 });
 
+/** The text of the PDF the first of `links` downloads (200 expected), in content order (`pdftotext -raw`). */
+async function downloadedPdfText(page: Page, links: Locator): Promise<string> {
+  const response = await page.request.get((await links.first().getAttribute("href"))!);
+  expect(response.status()).toBe(200);
+  const file = path.join(os.tmpdir(), `slipway-download-${process.pid}-${Date.now()}.pdf`);
+  fs.writeFileSync(file, await response.body());
+  try {
+    return execFileSync("pdftotext", ["-raw", file, "-"], { encoding: "utf8" });
+  } finally {
+    fs.rmSync(file);
+  }
+}
+
 test("a suspended athlete reads the coach's reason with one full stop, and that they rig with a coach", async ({ page }) => {
   // hamish (lib/seed/demo-certification.ts): suspended with a reason that ends in a full stop.
   await signIn(page, "hamish@lantern-reach.example");
@@ -188,13 +201,7 @@ test("a suspended athlete reads the coach's reason with one full stop, and that 
   // The same summary on the certificates page does not link to the page it is on.
   await expect(page.getByTestId("clearance-summary")).toBeVisible();
   await expect(page.getByTestId("clearance-summary").getByRole("link", { name: "Your certificates" })).toHaveCount(0);
-  const clearancePdf = page.getByRole("link", { name: /Download PDF of Rigging clearance/ });
-  const response = await page.request.get((await clearancePdf.first().getAttribute("href"))!);
-  expect(response.status()).toBe(200);
-  const file = path.join(os.tmpdir(), `slipway-suspended-${process.pid}.pdf`);
-  fs.writeFileSync(file, await response.body());
-  const text = execFileSync("pdftotext", ["-raw", file, "-"], { encoding: "utf8" });
-  fs.rmSync(file);
+  const text = await downloadedPdfText(page, page.getByRole("link", { name: /Download PDF of Rigging clearance/ }));
   expect(text).toContain("SUSPENDED");
   expect(text).toContain("Suspended by a coach: not valid while the suspension stands.");
 });
@@ -206,13 +213,7 @@ test("a certificate printed after it has expired is stamped EXPIRED and says on 
   // The list says so too: "expired <day>", not "expires" with a day in the past.
   await expect(page.getByTestId("my-certificates")).toContainText(/signed off by .+ · expired \d{1,2} [A-Z]/);
   await expect(page.getByTestId("my-certificates")).not.toContainText("· expires");
-  const modulePdf = page.getByRole("link", { name: /Download PDF of Setting the inboard/ });
-  const response = await page.request.get((await modulePdf.first().getAttribute("href"))!);
-  expect(response.status()).toBe(200);
-  const file = path.join(os.tmpdir(), `slipway-expired-${process.pid}.pdf`);
-  fs.writeFileSync(file, await response.body());
-  const text = execFileSync("pdftotext", ["-raw", file, "-"], { encoding: "utf8" });
-  fs.rmSync(file);
+  const text = await downloadedPdfText(page, page.getByRole("link", { name: /Download PDF of Setting the inboard/ }));
   expect(text).toContain("EXPIRED");
   expect(text).toMatch(/Expired on \d{1,2} [A-Z][a-z]+ \d{4}: no longer valid\. Ask a coach about renewing it\./);
 });
