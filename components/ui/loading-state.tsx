@@ -7,3 +7,12 @@ export function LoadingState({ label = "Loading…" }: { label?: string }) {
     </div>
   );
 }
+
+/**
+ * A segment's `loading.tsx` (re-exported there). Keep loading files off any folder that has a dynamic
+ * segment below it: a page that streams has already sent status 200, so its `notFound()` would no longer
+ * be a 404 (tests/unit/route-loading.test.ts).
+ */
+export default function RouteLoading() {
+  return <LoadingState />;
+}

@@ -5,18 +5,33 @@ import { addDaysIso } from "@/lib/care/dates";
 
 /** Edges of the coach's and the administrator's pages: stale links, stale pages, stale messages. */
 test.describe("coach and admin edges", () => {
-  test("a record that does not exist shows the not-found page, not the error page", async ({ browser }) => {
-    const { context: coachContext, page: coach } = await signedInContext(browser, demo.coach);
-    for (const path of ["/roster/athletes/999999", "/roster/sign-offs/00000000-0000-4000-8000-000000000000"]) {
-      await coach.goto(path);
-      await expect(coach.getByRole("heading", { level: 1 }), path).toHaveText("Not found");
+  test("a record that does not exist answers 404 with the not-found page, not the error page", async ({ browser }) => {
+    // Status 404, not a 200 carrying the not-found page: these pages must not sit under a loading.tsx,
+    // or the response has started streaming before the page finds out (tests/unit/route-loading.test.ts).
+    const unknownUuid = "00000000-0000-4000-8000-000000000000";
+    const detailPages: { as: string; paths: string[] }[] = [
+      {
+        as: demo.coach,
+        paths: [
+          "/roster/athletes/999999",
+          `/roster/sign-offs/${unknownUuid}`,
+          "/roster/fleet/boats/999999",
+          "/roster/fleet/oar-sets/999999",
+          "/rig/boats/999999",
+        ],
+      },
+      { as: demo.admin, paths: [`/club/register/${unknownUuid}`, "/club/outbox/999999"] },
+      { as: demo.athlete, paths: ["/rig/boats/999999", "/rig/boats/not-a-number"] },
+    ];
+    for (const { as, paths } of detailPages) {
+      const { context, page } = await signedInContext(browser, as);
+      for (const path of paths) {
+        const response = await page.goto(path);
+        expect(response?.status(), `${as} ${path}`).toBe(404);
+        await expect(page.getByRole("heading", { level: 1 }), path).toHaveText("Not found");
+      }
+      await context.close();
     }
-    await coachContext.close();
-
-    const { context: adminContext, page: admin } = await signedInContext(browser, demo.admin);
-    await admin.goto("/club/register/00000000-0000-4000-8000-000000000000");
-    await expect(admin.getByRole("heading", { level: 1 })).toHaveText("Not found");
-    await adminContext.close();
   });
 
   test("a coach whose page is stale when another coach suspends sees the suspension after the refusal", async ({

@@ -7,7 +7,7 @@ import { formatCm } from "@/components/lessons/lesson-format";
 import { requirePageActor } from "@/lib/auth/session";
 import { listFleet, type BoatSummary, type OarSetSummary } from "@/lib/data/fleet";
 import { boatClassLabel, handleMechanismLabels, oarTypeLabels } from "@/lib/fleet/catalogue";
-import { ArchiveButton } from "./_components/archive-button";
+import { ArchiveButton } from "../_components/archive-button";
 
 export const metadata: Metadata = { title: "Fleet" };
 

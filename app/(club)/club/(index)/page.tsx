@@ -4,7 +4,7 @@ import { PageTitle } from "@/components/ui/page-title";
 import { requirePageActor } from "@/lib/auth/session";
 import { clubOf, listClubMembers } from "@/lib/data/members";
 import { isDemoMail } from "@/lib/env";
-import { InviteMemberForm } from "./_components/invite-member-form";
+import { InviteMemberForm } from "../_components/invite-member-form";
 
 export const metadata: Metadata = { title: "Club" };
 

@@ -7,7 +7,7 @@ import { isCoach } from "@/lib/auth/permissions";
 import { listFleet, rigSettingsFor } from "@/lib/data/fleet";
 import { recordIdSchema } from "@/lib/validations/fleet";
 import { boatClassLabel } from "@/lib/fleet/catalogue";
-import { RigHelper } from "./_components/rig-helper";
+import { RigHelper } from "../_components/rig-helper";
 
 export const metadata: Metadata = { title: "Change boats" };
 

@@ -4,7 +4,7 @@ import { PageTitle } from "@/components/ui/page-title";
 import { requirePageActor } from "@/lib/auth/session";
 import { clubOf } from "@/lib/data/members";
 import { signOffQueue } from "@/lib/data/sign-offs";
-import { RosterMatrixView } from "./_components/roster-matrix";
+import { RosterMatrixView } from "../_components/roster-matrix";
 
 export const metadata: Metadata = { title: "Roster" };
 
