@@ -134,6 +134,33 @@ export function midnightInZone(isoDate: string, timeZone: string): string {
   return `${wall}${sign}${hours}:${minutes}`;
 }
 
+const instantFormatters = new Map<string, Intl.DateTimeFormat>();
+
+/**
+ * A moment for people, on the club's clock and saying which clock, e.g. "1 Jul 2026, 13:34 BST" or
+ * "2 Dec 2026, 12:34 GMT+13": when an attempt was sent in or a sign-off recorded. Server-rendered only
+ * (Intl's zone names can differ between engines).
+ */
+export function formatInstantInZone(instant: Date | string, timeZone: string): string {
+  const moment = typeof instant === "string" ? new Date(instant) : instant;
+  if (!Number.isFinite(moment.getTime())) throw new RangeError("formatInstantInZone needs a valid date");
+  let formatter = instantFormatters.get(timeZone);
+  if (!formatter) {
+    formatter = new Intl.DateTimeFormat("en-GB", {
+      timeZone,
+      day: "numeric",
+      month: "short",
+      year: "numeric",
+      hour: "2-digit",
+      minute: "2-digit",
+      hourCycle: "h23",
+      timeZoneName: "short",
+    });
+    instantFormatters.set(timeZone, formatter);
+  }
+  return formatter.format(moment);
+}
+
 /** ISO weekday of a day number: Monday 1 … Sunday 7 (day 0, 1970-01-01, was a Thursday). */
 function isoWeekday(dayNumber: number): number {
   return ((((dayNumber + 3) % 7) + 7) % 7) + 1;

@@ -221,6 +221,8 @@ export interface AthleteRecord {
   athlete: { id: number; name: string; email: string; status: string };
   /** The day the record's statuses were worked out for. */
   today: string;
+  /** The club's time zone: the clock the record's times are shown on. */
+  timeZone: string;
   standing: AthleteStanding;
   moduleTitles: Record<string, string>;
   requiredModules: string[];
@@ -355,6 +357,7 @@ export async function athleteRecordFor(actor: Actor, athleteId: number): Promise
   return {
     athlete: { id: athlete.id, name: athlete.name, email: athlete.email, status: athlete.status },
     today,
+    timeZone,
     standing,
     moduleTitles,
     requiredModules: context.requiredModules,

@@ -24,3 +24,8 @@ export async function clubToday(clubId: number, now: Date = new Date()): Promise
   await databaseReady();
   return todayOfClub(await Club.findByPk(clubId), now);
 }
+
+/** The clock a club's times are shown on (its settings' zone, or the server's). */
+export async function clubTimeZone(clubId: number): Promise<string> {
+  return (await settingsForClub(clubId)).timeZone;
+}

@@ -223,7 +223,7 @@ test.describe("coach and admin edges", () => {
     await expect(status).toHaveText("✓ Race day removed.");
   });
 
-  test("the club's time zone sets the day of the cleaning log, on the athletes' page too", async ({ page }) => {
+  test("the club's time zone sets the day of the cleaning log, on the athletes' page too, and the clock of times shown", async ({ page }) => {
     // A zone whose date differs from UTC's right now: UTC+14 from 10:00 UTC, UTC-11 before 11:00 UTC
     // (IANA Time Zone Database, IANA, 2025).
     const zone = new Date().getUTCHours() >= 10 ? "Pacific/Kiritimati" : "Pacific/Pago_Pago";
@@ -246,6 +246,10 @@ test.describe("coach and admin edges", () => {
       await expect(page.getByText(`Oar sets on ${formatIsoDate(clubDay)}`)).toBeVisible();
       await expect(page.getByLabel("Day of the cleaning")).toHaveValue(clubDay);
       await expect(page.getByLabel("Day of the cleaning")).toHaveAttribute("max", clubDay);
+      // Times are on the club's clock and say so: the administrator signed in minutes ago.
+      await page.goto("/club/members");
+      const offset = zone === "Pacific/Kiritimati" ? "GMT+14" : "GMT-11";
+      await expect(page.getByRole("cell", { name: new RegExp(`^${formatIsoDate(clubDay).slice(4)}, \\d{2}:\\d{2} ${offset.replace("+", "\\+")}$`) }).first()).toBeVisible();
     } finally {
       // Leave the club in the zone the other specs expect (the server's, where they compute "today").
       await save(original);

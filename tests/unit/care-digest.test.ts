@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 
 import {
   canonicalTimeZone,
+  formatInstantInZone,
   formatIsoDate,
   isoDateInZone,
   isTimeZone,
@@ -98,6 +99,24 @@ describe("the club's today, in its time zone", () => {
     // Chile's clocks go from 24:00 to 01:00 on 6 September 2026: that day starts at 01:00.
     expect(midnightInZone("2026-09-06", "America/Santiago")).toBe("2026-09-06T01:00:00-03:00");
     expect(() => midnightInZone("2026-02-30", "UTC")).toThrow(RangeError);
+  });
+
+  it("writes a moment on the club's clock and names the clock", () => {
+    // Offsets from the IANA Time Zone Database (tzdata, IANA, 2025): London keeps summer time (UTC+1,
+    // "BST") in July and GMT in December; Auckland is UTC+12 in July and UTC+13 in December; India is
+    // UTC+5:30 all year. Abbreviations as Intl writes them for en-GB.
+    const summerNoon = "2026-07-01T12:34:00Z";
+    const winterNight = new Date("2026-12-01T23:34:00Z");
+    expect(formatInstantInZone(summerNoon, "UTC")).toBe("1 Jul 2026, 12:34 UTC");
+    expect(formatInstantInZone(summerNoon, "Europe/London")).toBe("1 Jul 2026, 13:34 BST");
+    expect(formatInstantInZone(winterNight, "Europe/London")).toBe("1 Dec 2026, 23:34 GMT");
+    // The next day already, on the club's clock: the date moves with the zone, not with UTC.
+    expect(formatInstantInZone(summerNoon, "Pacific/Auckland")).toBe("2 Jul 2026, 00:34 GMT+12");
+    expect(formatInstantInZone(winterNight, "Pacific/Auckland")).toBe("2 Dec 2026, 12:34 GMT+13");
+    expect(formatInstantInZone(winterNight, "Asia/Kolkata")).toBe("2 Dec 2026, 05:04 GMT+5:30");
+    // Just after midnight is 00:04, not 24:04.
+    expect(formatInstantInZone("2026-07-01T00:04:00Z", "UTC")).toBe("1 Jul 2026, 00:04 UTC");
+    expect(() => formatInstantInZone("not a date", "UTC")).toThrow(RangeError);
   });
 
   it("knows time zone names, and offers UTC first with the club's own kept", () => {

@@ -3,19 +3,19 @@ import Link from "next/link";
 import { PageTitle } from "@/components/ui/page-title";
 import { requirePageActor } from "@/lib/auth/session";
 import { listClubMembers } from "@/lib/data/members";
+import { clubTimeZone } from "@/lib/data/club-settings";
+import { formatInstantInZone } from "@/lib/care/calendar";
 import { MembersTable, type MemberRow } from "./_components/members-table";
 import { RosterImportForm } from "./_components/roster-import-form";
 
 export const metadata: Metadata = { title: "Members" };
 
-const signInFormat = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: "short" });
-
 export default async function MembersPage() {
   const actor = await requirePageActor("admin", "/club/members");
-  const members = await listClubMembers(actor);
+  const [members, timeZone] = await Promise.all([listClubMembers(actor), clubTimeZone(actor.clubId)]);
   const rows: MemberRow[] = members.map((member) => ({
     ...member,
-    lastSignInLabel: member.lastSignInAt ? signInFormat.format(new Date(member.lastSignInAt)) : "Never",
+    lastSignInLabel: member.lastSignInAt ? formatInstantInZone(member.lastSignInAt, timeZone) : "Never",
   }));
   return (
     <div className="space-y-8">

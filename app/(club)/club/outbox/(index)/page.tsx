@@ -6,13 +6,15 @@ import { requirePageActor } from "@/lib/auth/session";
 import { canReadOutbox } from "@/lib/auth/permissions";
 import { isDemoMail } from "@/lib/env";
 import { listOutbox } from "@/lib/mail/outbox";
+import { clubTimeZone } from "@/lib/data/club-settings";
+import { formatInstantInZone } from "@/lib/care/calendar";
 
 export const metadata: Metadata = { title: "Club outbox" };
 
 export default async function OutboxPage() {
   const actor = await requirePageActor("admin", "/club/outbox");
   if (!canReadOutbox(actor, isDemoMail())) notFound();
-  const messages = await listOutbox();
+  const [messages, timeZone] = await Promise.all([listOutbox(), clubTimeZone(actor.clubId)]);
   return (
     <div>
       <PageTitle lead="Demo mode keeps every e-mail here instead of sending it.">Club outbox</PageTitle>
@@ -26,7 +28,7 @@ export default async function OutboxPage() {
                 <span className="block font-semibold">{message.subject}</span>
                 <span className="block text-sm text-slate-700">
                   To {message.to}
-                  {message.sentAt && ` · ${new Date(message.sentAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" })} UTC`}
+                  {message.sentAt && ` · ${formatInstantInZone(message.sentAt, timeZone)}`}
                 </span>
               </Link>
             </li>

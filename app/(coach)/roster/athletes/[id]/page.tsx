@@ -7,22 +7,10 @@ import { requirePageActor } from "@/lib/auth/session";
 import { athleteRecordFor } from "@/lib/data/clearance";
 import { orNotFound } from "@/lib/http/page-not-found";
 import { expiryVerb, formatLongDate, lastValidDay } from "@/lib/clearance/dates";
+import { formatInstantInZone } from "@/lib/care/calendar";
 import { SuspensionControl } from "./_components/suspension-forms";
 
 export const metadata: Metadata = { title: "Athlete" };
-
-function when(iso: string): string {
-  return (
-    new Date(iso).toLocaleString("en-GB", {
-      day: "numeric",
-      month: "short",
-      year: "numeric",
-      hour: "2-digit",
-      minute: "2-digit",
-      timeZone: "UTC",
-    }) + " UTC"
-  );
-}
 
 function percent(score: number | null): string {
   return score === null ? "—" : `${Math.round(score * 100)} %`;
@@ -36,6 +24,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
   if (!Number.isInteger(athleteId) || athleteId <= 0) notFound();
   const record = await orNotFound(athleteRecordFor(actor, athleteId));
   const { today } = record;
+  const when = (iso: string) => formatInstantInZone(iso, record.timeZone);
   const { clearance } = record.standing;
   const activeSuspension = record.suspensions.find((entry) => entry.liftedAt === null);
   const sectionClasses = "space-y-3 rounded-lg bg-white p-4 shadow-sm";

@@ -9,16 +9,16 @@ import { planSummary } from "@/components/rig/plan-steps";
 import { requirePageActor } from "@/lib/auth/session";
 import { listFleet } from "@/lib/data/fleet";
 import { listRigPlans } from "@/lib/data/rig-plans";
+import { clubTimeZone } from "@/lib/data/club-settings";
+import { formatInstantInZone } from "@/lib/care/calendar";
 import { recordIdSchema } from "@/lib/validations/fleet";
 
 export const metadata: Metadata = { title: "Saved plans" };
 
-const timeFormat = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: "short" });
-
 export default async function SavedPlansPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const actor = await requirePageActor("coach", "/roster/fleet/plans");
   const params = await searchParams;
-  const fleet = await listFleet(actor, { includeArchived: true });
+  const [fleet, timeZone] = await Promise.all([listFleet(actor, { includeArchived: true }), clubTimeZone(actor.clubId)]);
   const boat = recordIdSchema.safeParse(params.boat);
   // A boat the club does not have (an old or edited link) shows every plan, as the select then says.
   const boatId = boat.success && fleet.boats.some((candidate) => candidate.id === boat.data) ? boat.data : undefined;
@@ -53,7 +53,7 @@ export default async function SavedPlansPage({ searchParams }: { searchParams: P
               <p className="font-semibold">
                 {plan.athleteName} · {plan.boatName} ({plan.boatClass}) · {plan.oarSetName}
               </p>
-              <p className="text-sm text-slate-700">{timeFormat.format(new Date(plan.plannedAt))}</p>
+              <p className="text-sm text-slate-700">{formatInstantInZone(plan.plannedAt, timeZone)}</p>
               <p className="mt-1">
                 Measured {formatCm(plan.measured.lengthCm)} cm, inboard {formatCm(plan.measured.inboardCm)} cm → target{" "}
                 {formatCm(plan.target.lengthCm)} cm, inboard {formatCm(plan.target.inboardCm)} cm.
