@@ -100,6 +100,9 @@ for (const viewport of viewports) {
         // Some pages stream behind a loading state: scan once the page's own heading has arrived.
         await page.getByRole("heading", { level: 1 }).first().waitFor();
         await entry.ready?.(page);
+        // Next streams the title after the page's body and renders it again when a page refreshes its
+        // data (the quiz after grading): every page has one, so wait for it as for the heading.
+        await expect(page).toHaveTitle(/Slipway/);
         const results = await new AxeBuilder({ page }).withTags(wcagTags).analyze();
         const summary = results.violations.map((violation) => `${violation.id}: ${violation.nodes.map((node) => node.target.join(" ")).join(", ")}`);
         expect(summary).toEqual([]);

@@ -181,6 +181,9 @@ test("a passed quiz opens on the pass and the way on; only the practise button s
   await page.goto("/learn/changing-boats/quiz");
   await expect(page.getByRole("link", { name: "See your sign-off request" })).toHaveAttribute("href", "/learn/changing-boats/practical");
   await expect(page.getByTestId("quiz-form")).toHaveCount(0);
+  // The working instructions belong to the questions, not to the pass.
+  const workingLead = page.getByText("Work each answer out with the numbers given.");
+  await expect(workingLead).toHaveCount(0);
   expect(opened).toEqual([]);
 
   const practice = page.waitForResponse((response) => response.url().endsWith("/api/modules/changing-boats/attempts"));
@@ -192,6 +195,7 @@ test("a passed quiz opens on the pass and the way on; only the practise button s
   // The button is gone: focus moves to the form's first line rather than being lost.
   await expect(page.locator("#quiz-progress")).toBeFocused();
   await refreshed;
+  await expect(workingLead).toBeVisible();
   expect(opened).toEqual(["/api/modules/changing-boats/attempts"]);
 
   // The open practice attempt resumes straight away: after going to the lesson and back, and on a reload.

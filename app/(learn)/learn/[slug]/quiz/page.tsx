@@ -47,7 +47,8 @@ export default async function QuizPage({ params }: Props) {
           Back to the lesson
         </Link>
       </p>
-      <PageTitle lead="Work each answer out with the numbers given. Your answers are kept if the page reloads.">
+      {/* The page is refreshed once an attempt opens, so practice gets the working lead. */}
+      <PageTitle lead={passedQuiz ? undefined : "Work each answer out with the numbers given. Your answers are kept if the page reloads."}>
         Quiz: {lesson.meta.title}
       </PageTitle>
       <QuizForm slug={slug} passedQuiz={passedQuiz} />
