@@ -34,6 +34,29 @@ test.describe("coach and admin edges", () => {
     }
   });
 
+  test("a link to a record page shows it is on its way while the page loads", async ({ page }) => {
+    // Record pages have no loading.tsx (their unknown ids are 404s): the link itself says it was taken.
+    await signIn(page, demo.coach);
+    await page.goto("/roster");
+    let release = () => {};
+    const held = new Promise<void>((resolve) => (release = resolve));
+    await page.route(/\/roster\/athletes\/\d+/, async (route) => {
+      const headers = route.request().headers();
+      if (headers["rsc"] && !headers["next-router-prefetch"]) await held;
+      await route.continue();
+    });
+    const link = page.getByRole("link", { name: "Femi Ashdown" });
+    const mark = link.getByTestId("link-pending");
+    await expect(mark).toHaveCount(0);
+    await link.click();
+    await expect(mark).toBeVisible();
+    await expect(page.getByTestId("roster-table")).toBeVisible();
+    release();
+    await expect(page.getByTestId("athlete-clearance-state")).toBeVisible();
+    await expect(page.getByTestId("link-pending")).toHaveCount(0);
+    await page.unrouteAll({ behavior: "wait" });
+  });
+
   test("a coach whose page is stale when another coach suspends sees the suspension after the refusal", async ({
     browser,
   }) => {

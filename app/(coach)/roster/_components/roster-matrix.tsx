@@ -2,6 +2,7 @@
 
 import { useEffect, useId, useMemo, useState } from "react";
 import Link from "next/link";
+import { PendingMark } from "@/components/ui/pending-mark";
 import { useSearchParams } from "next/navigation";
 import {
   createColumnHelper,
@@ -131,6 +132,7 @@ export function RosterMatrixView() {
             className="font-semibold text-river-700 underline"
           >
             {info.getValue()}
+            <PendingMark />
           </Link>
         ),
       }),

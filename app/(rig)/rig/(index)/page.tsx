@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { PendingMark } from "@/components/ui/pending-mark";
 import { PageTitle } from "@/components/ui/page-title";
 import { RigNav, memberRigLinks } from "@/components/rig/rig-nav";
 import { requirePageActor } from "@/lib/auth/session";
@@ -44,6 +45,7 @@ export default async function RigPage({ searchParams }: { searchParams: Promise<
                 <Link href={`/rig/boats/${boat.id}`} className="flex min-h-11 flex-wrap items-center gap-x-2 px-4 py-2 hover:bg-river-50">
                   <span className="font-semibold text-river-800 underline">{boat.name}</span>
                   <span className="text-sm text-slate-700">{boatClassLabel(boat.boatClass)}</span>
+                  <PendingMark />
                 </Link>
               </li>
             ))}

@@ -1,6 +1,7 @@
 "use client";
 
 import Link from "next/link";
+import { PendingMark } from "@/components/ui/pending-mark";
 import { useEffect, useState, useSyncExternalStore } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -236,6 +237,7 @@ export function RigHelper({ boats, oarSets, limits, halfSwivelCm, userId, initia
             <p>Handle: {handleMechanismLabels[oarSet.handleMechanism].toLowerCase()}.</p>
             <Link href={`/rig/boats/${boat.id}`} className="font-semibold text-river-700 underline">
               All of {boat.name}&apos;s settings
+              <PendingMark />
             </Link>
           </div>
         )}

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { PendingMark } from "@/components/ui/pending-mark";
 import { notFound } from "next/navigation";
 import { PageTitle } from "@/components/ui/page-title";
 import { requirePageActor } from "@/lib/auth/session";
@@ -25,7 +26,10 @@ export default async function OutboxPage() {
           {messages.map((message) => (
             <li key={message.id}>
               <Link href={`/club/outbox/${message.id}`} className="block min-h-11 px-4 py-3 hover:bg-river-50">
-                <span className="block font-semibold">{message.subject}</span>
+                <span className="block font-semibold">
+                  {message.subject}
+                  <PendingMark />
+                </span>
                 <span className="block text-sm text-slate-700">
                   To {message.to}
                   {message.sentAt && ` · ${formatInstantInZone(message.sentAt, timeZone)}`}

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { PendingMark } from "@/components/ui/pending-mark";
 import { PageTitle } from "@/components/ui/page-title";
 import { CertificateStatusBadge } from "@/components/certify/status-badge";
 import { requirePageActor } from "@/lib/auth/session";
@@ -171,6 +172,7 @@ export default async function RegisterPage({
                       className="font-semibold text-river-700 underline"
                     >
                       {entry.serial}
+                      <PendingMark />
                     </Link>
                   </th>
                   <td className="px-3 py-2">{entry.athleteName}</td>

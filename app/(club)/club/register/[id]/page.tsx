@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { PendingMark } from "@/components/ui/pending-mark";
 import { PageTitle } from "@/components/ui/page-title";
 import { CertificateStatusBadge } from "@/components/certify/status-badge";
 import { requirePageActor } from "@/lib/auth/session";
@@ -30,6 +31,7 @@ export default async function CertificatePage({ params }: { params: Promise<{ id
         <dd>
           <Link href={`/roster/athletes/${certificate.athleteId}`} className="underline">
             {certificate.athleteName}
+            <PendingMark />
           </Link>
         </dd>
         <dt className="font-semibold">Signed off by</dt>

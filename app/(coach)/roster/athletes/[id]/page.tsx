@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { PendingMark } from "@/components/ui/pending-mark";
 import { notFound } from "next/navigation";
 import { PageTitle } from "@/components/ui/page-title";
 import { CertificateStatusBadge, ClearanceBadge, ModuleStatusBadge } from "@/components/certify/status-badge";
@@ -130,6 +131,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
                 <p className="font-semibold">
                   <Link href={`/roster/sign-offs/${entry.id}`} className="text-river-700 underline">
                     {entry.moduleTitle}
+                    <PendingMark />
                   </Link>
                   {": "}
                   {entry.status === "waiting"
@@ -190,6 +192,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
                   {record.viewer.isAdmin && (
                     <Link href={`/club/register/${certificate.id}`} className="underline">
                       Manage
+                      <PendingMark />
                     </Link>
                   )}
                 </span>

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { PendingMark } from "@/components/ui/pending-mark";
 import { PageTitle } from "@/components/ui/page-title";
 import { buttonClasses } from "@/components/ui/button-classes";
 import { RigNav, fleetLinks } from "@/components/rig/rig-nav";
@@ -19,6 +20,7 @@ function BoatRow({ boat, sets }: { boat: BoatSummary; sets: Map<number, OarSetSu
       <div>
         <Link href={`/rig/boats/${boat.id}`} className="font-semibold text-river-800 underline">
           {boat.name}
+          <PendingMark />
         </Link>{" "}
         <span className="text-sm text-slate-700">
           {boatClassLabel(boat.boatClass)} · {width}
@@ -28,6 +30,7 @@ function BoatRow({ boat, sets }: { boat: BoatSummary; sets: Map<number, OarSetSu
       <div className="flex flex-wrap gap-2">
         <Link href={`/roster/fleet/boats/${boat.id}`} className={buttonClasses("secondary")} aria-label={`Edit ${boat.name}`}>
           Edit
+          <PendingMark />
         </Link>
         <ArchiveButton kind="boat" id={boat.id} name={boat.name} archived={boat.archived} />
       </div>
@@ -51,6 +54,7 @@ function OarSetRow({ set, boats }: { set: OarSetSummary; boats: Map<number, Boat
       <div className="flex flex-wrap gap-2">
         <Link href={`/roster/fleet/oar-sets/${set.id}`} className={buttonClasses("secondary")} aria-label={`Edit ${set.name}`}>
           Edit
+          <PendingMark />
         </Link>
         <ArchiveButton kind="oar-set" id={set.id} name={set.name} archived={set.archived} />
       </div>

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { PendingMark } from "@/components/ui/pending-mark";
 import { PageTitle } from "@/components/ui/page-title";
 import { requirePageActor } from "@/lib/auth/session";
 import { signOffQueue } from "@/lib/data/sign-offs";
@@ -41,6 +42,7 @@ export default async function SignOffQueuePage() {
                   >
                     <span className="block font-semibold">
                       {entry.athleteName}: {entry.moduleTitle}
+                      <PendingMark />
                     </span>
                     <span className="block text-sm text-slate-700">
                       Asked {entry.askedCoachName ? `of ${entry.askedCoachName}` : "of any coach"} on{" "}

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { PendingMark } from "@/components/ui/pending-mark";
 import { PageTitle } from "@/components/ui/page-title";
 import { Notice } from "@/components/ui/notice";
 import { requirePageActor } from "@/lib/auth/session";
@@ -30,6 +31,7 @@ export default async function AssessmentPage({ params }: { params: Promise<{ id:
         ·{" "}
         <Link href={`/roster/athletes/${detail.athlete.id}`} className="underline">
           {detail.athlete.name}&apos;s record
+          <PendingMark />
         </Link>
       </p>
       {detail.status === "waiting" ? (
