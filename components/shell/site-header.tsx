@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { PendingMark } from "@/components/ui/pending-mark";
 import { currentActor } from "@/lib/auth/session";
 import { isAdmin, isCoach } from "@/lib/auth/permissions";
 import { roleLabels } from "@/lib/auth/roles";
@@ -29,6 +30,7 @@ export async function SiteHeader() {
                 className="inline-flex min-h-11 items-center rounded px-3 text-sm font-semibold text-river-100 hover:bg-river-800 hover:text-white"
               >
                 {link.label}
+                <PendingMark />
               </Link>
             ))}
           </nav>

@@ -3,10 +3,10 @@
 import { useLinkStatus } from "next/link";
 
 /**
- * Goes inside a `<Link>` to a record page. Record pages have no loading.tsx (so that an unknown id is a
- * real 404), so nothing else would show that the click was taken while the page is on its way: this
- * small spinner does. It takes no space when idle; the shift when it appears follows the click, which
- * layout-shift scores leave out.
+ * Goes inside a `<Link>` whose page has no loading state to show at once: record pages (no loading.tsx,
+ * so that an unknown id is a real 404), the lessons and quizzes, and the header's areas. This small
+ * spinner says the click was taken while the page is on its way. It takes no space when idle; the shift
+ * when it appears follows the click, which layout-shift scores leave out.
  */
 export function PendingMark() {
   const { pending } = useLinkStatus();

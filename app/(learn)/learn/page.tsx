@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { PendingMark } from "@/components/ui/pending-mark";
 import { PageTitle } from "@/components/ui/page-title";
 import { buttonClasses } from "@/components/ui/button-classes";
 import { ClearanceSummary } from "@/components/certify/clearance-summary";
@@ -54,6 +55,7 @@ export default async function LearnPage() {
                 : next.progress.lessonRead
                   ? "Take the quiz"
                   : "Read the lesson"}
+              <PendingMark />
             </Link>
           </p>
         ) : (
@@ -82,12 +84,14 @@ export default async function LearnPage() {
               <div className="mt-3 flex flex-wrap gap-2">
                 <Link href={`/learn/${meta.slug}`} className={buttonClasses(progress.lessonRead ? "secondary" : "primary")}>
                   {progress.lessonRead ? "Read again" : "Read the lesson"}
+                  <PendingMark />
                 </Link>
                 <Link
                   href={`/learn/${meta.slug}/quiz`}
                   className={buttonClasses(progress.lessonRead && !progress.passed ? "primary" : "secondary")}
                 >
                   {progress.hasOpenAttempt ? "Continue the quiz" : progress.passed ? "Practise the quiz" : "Take the quiz"}
+                  <PendingMark />
                 </Link>
                 {practicalStatuses.has(status) && (
                   <Link
@@ -95,6 +99,7 @@ export default async function LearnPage() {
                     className={buttonClasses(status === "ready-for-sign-off" || status === "not-yet" ? "primary" : "secondary")}
                   >
                     Practical sign-off
+                    <PendingMark />
                   </Link>
                 )}
               </div>

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { PendingMark } from "@/components/ui/pending-mark";
 import { PageTitle } from "@/components/ui/page-title";
 import { ClearanceSummary } from "@/components/certify/clearance-summary";
 import { CertificateStatusBadge, ModuleStatusBadge } from "@/components/certify/status-badge";
@@ -38,6 +39,7 @@ export default async function MyCertificatesPage() {
                 className="min-h-11 content-center font-semibold text-river-700 underline"
               >
                 {titles.get(entry.slug) ?? entry.slug}
+                <PendingMark />
               </Link>
               <ModuleStatusBadge status={entry.status} />
             </li>
