@@ -205,6 +205,29 @@ test.describe("coach and admin edges", () => {
     await expect(certificates).not.toContainText(/\d{4} to \d/);
   });
 
+  test("on a phone the athlete's modules keep their names readable, and an expired pass says it has expired", async ({
+    browser,
+  }) => {
+    // Lena (lib/seed/demo-certification.ts) passed every module long enough ago for the passes to lapse.
+    const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const page = await context.newPage();
+    await signIn(page, demo.coach);
+    await page.goto("/roster");
+    await page.getByRole("link", { name: "Lena Fairbrother" }).click();
+    const modules = page.getByTestId("athlete-modules");
+    await expect(modules.getByRole("columnheader")).toHaveText(["Module", "Status"]);
+    const firstRow = modules.getByRole("row").nth(1);
+    await expect(firstRow).toContainText(/Best quiz score \d+ % · pass expired \d{1,2} \w+ \d{4}/);
+    const table = modules.getByRole("table");
+    expect(await table.evaluate((element) => element.scrollWidth <= element.parentElement!.clientWidth)).toBe(true);
+
+    // At a desk the same facts have their own columns.
+    await page.setViewportSize({ width: 1280, height: 800 });
+    await expect(modules.getByRole("columnheader")).toHaveText(["Module", "Status", "Best quiz score", "Pass expires"]);
+    await expect(firstRow.getByRole("cell").nth(2)).toHaveText(/^expired \d{1,2} \w+ \d{4}$/);
+    await context.close();
+  });
+
   test("the invitation form drops the last answer when the next try fails its own check", async ({ page }) => {
     await signIn(page, demo.admin);
     await page.goto("/club");

@@ -73,7 +73,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
         )}
       </section>
 
-      <section aria-labelledby="modules-heading" className={sectionClasses}>
+      <section aria-labelledby="modules-heading" className={sectionClasses} data-testid="athlete-modules">
         <h2 id="modules-heading" className="text-lg font-semibold">
           Modules
         </h2>
@@ -87,10 +87,12 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
                 <th scope="col" className="py-2 pr-3">
                   Status
                 </th>
-                <th scope="col" className="py-2 pr-3">
+                {/* On a phone the last two columns join the status cell, so the module's name is not
+                    squeezed to a word a line. */}
+                <th scope="col" className="hidden py-2 pr-3 sm:table-cell">
                   Best quiz score
                 </th>
-                <th scope="col" className="py-2 pr-3">
+                <th scope="col" className="hidden py-2 pr-3 sm:table-cell">
                   Pass expires
                 </th>
               </tr>
@@ -106,10 +108,17 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
                   </th>
                   <td className="py-2 pr-3">
                     <ModuleStatusBadge status={entry.status} />
+                    <span className="mt-1 block text-xs text-slate-700 sm:hidden">
+                      Best quiz score {percent(entry.progress.bestScore)}
+                      {entry.latestPass &&
+                        ` · pass ${expiryVerb(entry.latestPass.expiresOn, today)} ${formatLongDate(entry.latestPass.expiresOn)}`}
+                    </span>
                   </td>
-                  <td className="py-2 pr-3">{percent(entry.progress.bestScore)}</td>
-                  <td className="py-2 pr-3">
-                    {entry.latestPass ? formatLongDate(entry.latestPass.expiresOn) : "—"}
+                  <td className="hidden py-2 pr-3 sm:table-cell">{percent(entry.progress.bestScore)}</td>
+                  <td className="hidden py-2 pr-3 sm:table-cell">
+                    {entry.latestPass
+                      ? `${expiryVerb(entry.latestPass.expiresOn, today) === "expired" ? "expired " : ""}${formatLongDate(entry.latestPass.expiresOn)}`
+                      : "—"}
                   </td>
                 </tr>
               ))}
