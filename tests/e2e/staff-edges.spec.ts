@@ -269,6 +269,38 @@ test.describe("coach and admin edges", () => {
     await expect(status).toHaveText("✓ Race day removed.");
   });
 
+  test("a form whose action gets no answer says so, keeps its entries, and works once the connection is back", async ({ browser }) => {
+    const { context, page } = await signedInContext(browser, demo.coach);
+    await page.goto("/roster/fleet/care");
+    const humidOn = page.getByRole("button", { name: "Switch the humid spell on" });
+    await expect(humidOn).toBeEnabled();
+    await context.setOffline(true);
+
+    // A button whose action runs in a transition: before, the rejection brought up the error page.
+    await humidOn.click();
+    await expect(page.getByTestId("humid-spell-status")).toContainText("You are offline, so nothing was saved.");
+    await expect(page.getByTestId("humid-spell-state")).toContainText("Humid spell is off");
+    await expect(page.getByRole("heading", { level: 1 })).toHaveText("Cleaning due");
+
+    // A form: the message beside it, and the day typed is still there to send again.
+    const form = page.getByTestId("race-day-form");
+    const status = page.getByTestId("race-day-status");
+    const day = addDaysIso(localIsoDate(), 401);
+    await form.getByLabel("Add a race day").fill(day);
+    await form.getByRole("button", { name: "Add race day" }).click();
+    await expect(status).toContainText("You are offline, so nothing was saved.");
+    await expect(form.getByLabel("Add a race day")).toHaveValue(day);
+    await expect(form.getByRole("button", { name: "Add race day" })).toBeEnabled();
+
+    await context.setOffline(false);
+    await form.getByRole("button", { name: "Add race day" }).click();
+    await expect(status).toHaveText("✓ Race day added.");
+    // Leave the calendar as the other specs expect it.
+    await page.getByRole("button", { name: `Remove the race day ${formatIsoDate(day)}` }).click();
+    await expect(status).toHaveText("✓ Race day removed.");
+    await context.close();
+  });
+
   test("the club's time zone sets the day of the cleaning log, on the athletes' page too, and the clock of times shown", async ({ page }) => {
     // A zone whose date differs from UTC's right now: UTC+14 from 10:00 UTC, UTC-11 before 11:00 UTC
     // (IANA Time Zone Database, IANA, 2025).

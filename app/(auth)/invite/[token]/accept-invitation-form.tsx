@@ -12,6 +12,7 @@ import { Button } from "@/components/ui/button";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { minPasswordLength } from "@/lib/auth/password-rules";
 import { acceptInvitationAction } from "./actions";
+import { reachAction } from "@/lib/http/reach-action";
 
 const formSchema = acceptInvitationSchema
   .extend({ confirm: z.string() })
@@ -29,7 +30,7 @@ export function AcceptInvitationForm({ token, email, defaultName }: { token: str
 
   const onSubmit = form.handleSubmit(async ({ confirm: _confirm, ...values }) => {
     setFailure(null);
-    const result = await acceptInvitationAction(values);
+    const result = await reachAction(() => acceptInvitationAction(values));
     if (!result.ok) {
       for (const [field, messages] of Object.entries(result.fieldErrors)) {
         if (field === "name" || field === "password") form.setError(field, { message: messages[0] });

@@ -9,6 +9,7 @@ import { TextField } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { requestSignInLinkAction } from "../actions";
+import { reachAction } from "@/lib/http/reach-action";
 
 type LinkInput = z.infer<typeof signInLinkSchema>;
 
@@ -18,7 +19,7 @@ export function SignInLinkForm() {
   const { errors, isSubmitting } = form.formState;
 
   const onSubmit = form.handleSubmit(async (values) => {
-    setResult(await requestSignInLinkAction(values));
+    setResult(await reachAction(() => requestSignInLinkAction(values)));
   });
 
   return (

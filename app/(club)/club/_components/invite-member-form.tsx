@@ -9,6 +9,7 @@ import { SelectField, TextField } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { inviteMemberAction } from "../actions";
+import { reachAction } from "@/lib/http/reach-action";
 
 type InviteInput = z.infer<typeof invitationSchema>;
 
@@ -21,7 +22,7 @@ export function InviteMemberForm() {
   const { errors, isSubmitting } = form.formState;
 
   const submit = form.handleSubmit(async (values) => {
-    const outcome = await inviteMemberAction(values);
+    const outcome = await reachAction(() => inviteMemberAction(values));
     setResult(outcome);
     if (outcome.ok) form.reset();
     else

@@ -19,6 +19,7 @@ import { Dialog } from "@/components/ui/dialog";
 import { SelectField, TextField } from "@/components/ui/field";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { changeMemberRoleAction, setMemberStatusAction } from "../actions";
+import { reachAction } from "@/lib/http/reach-action";
 
 export interface MemberRow extends MemberSummary {
   /** Formatted on the server so that server and browser render the same text. */
@@ -121,7 +122,7 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
 
   async function run(action: () => Promise<{ ok: boolean; message?: string }>) {
     setBusy(true);
-    const result = await action();
+    const result = await reachAction(action);
     setBusy(false);
     setPending(null);
     setOutcome(result);

@@ -10,6 +10,7 @@ import { TextField } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { importRosterAction } from "../actions";
+import { reachAction } from "@/lib/http/reach-action";
 
 const fieldLabels: Record<RosterProblem["field"], string> = { name: "name", email: "email", role: "role", row: "whole row" };
 
@@ -81,7 +82,7 @@ export function RosterImportForm() {
     setSending(true);
     const data = new FormData();
     data.set("roster", file);
-    const result = await importRosterAction(data);
+    const result = await reachAction(() => importRosterAction(data));
     setSending(false);
     setOutcome(result.ok ? { ok: true, message: result.message ?? "Done." } : { ok: false, message: result.message });
     // A refusal with a report (no row could be invited) is shown like an import; any other keeps the file to try again.

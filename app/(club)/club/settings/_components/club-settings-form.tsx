@@ -8,6 +8,7 @@ import { SelectField, TextField } from "@/components/ui/field";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { clubSettingsFormSchema, type ClubSettingsForm } from "@/lib/validations/club-settings-form";
 import { saveClubSettingsAction } from "../actions";
+import { reachAction } from "@/lib/http/reach-action";
 
 type Path = FieldPath<ClubSettingsForm>;
 
@@ -48,7 +49,7 @@ export function ClubSettingsFormView({
   const number = (path: Path) => form.register(path, { valueAsNumber: true });
 
   const onSubmit = form.handleSubmit(async (values) => {
-    const outcome = await saveClubSettingsAction(values);
+    const outcome = await reachAction(() => saveClubSettingsAction(values));
     setResult(outcome);
     if (outcome.ok) form.reset(values);
     else

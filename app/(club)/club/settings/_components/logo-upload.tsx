@@ -42,9 +42,10 @@ export function LogoUpload({ hasLogo: initiallyHasLogo }: { hasLogo: boolean }) 
 
   async function remove() {
     setPending(true);
-    const response = await fetch("/api/club/logo", { method: "DELETE" });
+    const response = await fetch("/api/club/logo", { method: "DELETE" }).catch(() => null);
     setPending(false);
-    if (response.ok) {
+    if (!response) setMessage({ ok: false, text: "No connection; the logo was not removed." });
+    else if (response.ok) {
       setHasLogo(false);
       setMessage({ ok: true, text: "Logo removed." });
     } else setMessage({ ok: false, text: "The logo could not be removed." });

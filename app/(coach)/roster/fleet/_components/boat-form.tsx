@@ -11,6 +11,7 @@ import { boatSchema, physicalSpanCm, physicalSpreadCm, type BoatFormInput, type 
 import { createBoatAction, updateBoatAction } from "../actions";
 import { SaveFeedback, type SaveOutcome } from "./save-feedback";
 import { optionalCmValue } from "./form-helpers";
+import { reachAction } from "@/lib/http/reach-action";
 
 interface BoatFormProps {
   /** Present when editing. */
@@ -35,7 +36,7 @@ export function BoatForm({ boatId, initial, linkedSets = [], halfSwivelCm }: Boa
   const liveWarnings = boatWarnings({ boatClass, spanCm, spreadCm }, linkedSets, halfSwivelCm);
 
   const onSubmit = form.handleSubmit(async (values) => {
-    const outcome = boatId === undefined ? await createBoatAction(values) : await updateBoatAction(boatId, values);
+    const outcome = await reachAction(() => (boatId === undefined ? createBoatAction(values) : updateBoatAction(boatId, values)));
     setResult({ ok: outcome.ok, message: outcome.message, warnings: outcome.ok ? (outcome.data?.warnings ?? []) : [] });
     if (outcome.ok) {
       if (boatId === undefined) form.reset({ name: "", boatClass: values.boatClass, notes: "" });

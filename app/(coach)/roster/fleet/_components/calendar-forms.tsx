@@ -10,6 +10,7 @@ import { LiveStatus, Notice } from "@/components/ui/notice";
 import { formatIsoDate } from "@/lib/care/calendar";
 import { raceDaySchemaFor, type RaceDayInput } from "@/lib/validations/cleaning";
 import { addRaceDayAction, removeRaceDayAction, sendDigestNowAction, setHumidSpellAction } from "../actions";
+import { reachAction } from "@/lib/http/reach-action";
 
 type Status = { ok: boolean; message?: string } | null;
 
@@ -23,7 +24,7 @@ export function RaceDaysForm({ raceDays, today }: { raceDays: string[]; today: s
   const { errors, isSubmitting } = form.formState;
 
   const submit = form.handleSubmit(async (values) => {
-    const outcome = await addRaceDayAction(values);
+    const outcome = await reachAction(() => addRaceDayAction(values));
     setStatus(outcome);
     if (outcome.ok) {
       form.reset({ raceDay: "" });
@@ -57,7 +58,7 @@ export function RaceDaysForm({ raceDays, today }: { raceDays: string[]; today: s
                 aria-label={`Remove the race day ${formatIsoDate(day)}`}
                 onClick={() =>
                   startTransition(async () => {
-                    const outcome = await removeRaceDayAction({ raceDay: day });
+                    const outcome = await reachAction(() => removeRaceDayAction({ raceDay: day }));
                     setStatus(outcome);
                     if (outcome.ok) router.refresh();
                   })
@@ -100,7 +101,7 @@ export function HumidSpellSwitch({ humidSpell }: { humidSpell: boolean }) {
         pending={pending}
         onClick={() =>
           startTransition(async () => {
-            const outcome = await setHumidSpellAction({ humidSpell: !humidSpell });
+            const outcome = await reachAction(() => setHumidSpellAction({ humidSpell: !humidSpell }));
             setStatus(outcome);
             if (outcome.ok) router.refresh();
           })
@@ -119,7 +120,7 @@ export function SendDigestButton() {
   const [pending, startTransition] = useTransition();
   return (
     <div className="space-y-2">
-      <Button type="button" pending={pending} pendingLabel="Sending…" onClick={() => startTransition(async () => setStatus(await sendDigestNowAction()))}>
+      <Button type="button" pending={pending} pendingLabel="Sending…" onClick={() => startTransition(async () => setStatus(await reachAction(sendDigestNowAction)))}>
         Send the digest now
       </Button>
       <LiveStatus testId="digest-status">{status && <Notice tone={status.ok ? "success" : "error"} title={status.message} />}</LiveStatus>

@@ -14,6 +14,7 @@ import type { BoatSummary } from "@/lib/data/fleet";
 import { createOarSetAction, updateOarSetAction } from "../actions";
 import { SaveFeedback, type SaveOutcome } from "./save-feedback";
 import { cmValue, wholeValue } from "./form-helpers";
+import { reachAction } from "@/lib/http/reach-action";
 
 interface OarSetFormProps {
   oarSetId?: number;
@@ -43,7 +44,7 @@ export function OarSetForm({ oarSetId, initial, boats, limits, defaultClickCm }:
   const range = limits[oarType];
 
   const onSubmit = form.handleSubmit(async (values) => {
-    const outcome = oarSetId === undefined ? await createOarSetAction(values) : await updateOarSetAction(oarSetId, values);
+    const outcome = await reachAction(() => (oarSetId === undefined ? createOarSetAction(values) : updateOarSetAction(oarSetId, values)));
     setResult({ ok: outcome.ok, message: outcome.message, warnings: outcome.ok ? (outcome.data?.warnings ?? []) : [] });
     if (outcome.ok) {
       if (oarSetId === undefined) {

@@ -10,6 +10,7 @@ import { LiveStatus, Notice } from "@/components/ui/notice";
 import { cleaningMethodLabels, cleaningMethods } from "@/lib/care/methods";
 import { cleaningRecordSchemaFor, type CleaningRecordFormInput, type CleaningRecordInput } from "@/lib/validations/cleaning";
 import { recordCleaningAction } from "../actions";
+import { reachAction } from "@/lib/http/reach-action";
 
 interface CleaningFormProps {
   oarSets: { id: number; name: string }[];
@@ -33,7 +34,7 @@ export function CleaningForm({ oarSets, members, me, today }: CleaningFormProps)
   const method = useWatch({ control: form.control, name: "method" });
 
   const onSubmit = form.handleSubmit(async (values) => {
-    const outcome = await recordCleaningAction(values);
+    const outcome = await reachAction(() => recordCleaningAction(values));
     setResult(outcome);
     if (outcome.ok) {
       form.reset({ cleanedOn: today, method: "detergent-brush", note: "" });

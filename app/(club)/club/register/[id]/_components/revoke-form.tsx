@@ -11,6 +11,7 @@ import { TextField } from "@/components/ui/field";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { revokeCertificateSchema } from "@/lib/validations/certification";
 import { revokeCertificateAction } from "../actions";
+import { reachAction } from "@/lib/http/reach-action";
 
 /**
  * Revoke a certificate: the reason is kept in the audit log and the register. Revoking cannot be undone,
@@ -46,7 +47,7 @@ export function RevokeCertificateForm({
   const revoke = async (values: z.output<typeof revokeCertificateSchema>) => {
     setBusy(true);
     try {
-      const outcome = await revokeCertificateAction(certificateId, values);
+      const outcome = await reachAction(() => revokeCertificateAction(certificateId, values));
       setResult(outcome);
       if (!outcome.ok && outcome.fieldErrors.reason) form.setError("reason", { message: outcome.fieldErrors.reason[0] });
       // Also after a refusal: it may have been revoked meanwhile, and the page must not keep calling it valid.

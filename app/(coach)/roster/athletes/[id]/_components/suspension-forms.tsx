@@ -10,6 +10,7 @@ import { TextField } from "@/components/ui/field";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { liftSuspensionSchema, suspendClearanceSchema } from "@/lib/validations/certification";
 import { liftSuspensionAction, suspendClearanceAction } from "../actions";
+import { reachAction } from "@/lib/http/reach-action";
 
 type Outcome = { ok: boolean; message?: string } | null;
 
@@ -50,7 +51,7 @@ function SuspendClearanceForm({
     defaultValues: { reason: "" },
   });
   const onSubmit = form.handleSubmit(async (values) => {
-    const outcome = await suspendClearanceAction(athleteId, values);
+    const outcome = await reachAction(() => suspendClearanceAction(athleteId, values));
     onDone(outcome);
     if (!outcome.ok && outcome.fieldErrors.reason) form.setError("reason", { message: outcome.fieldErrors.reason[0] });
     // Also after a refusal: another coach may have suspended meanwhile, and this page must not keep showing a clearance.
@@ -84,7 +85,7 @@ function LiftSuspensionForm({
     defaultValues: { note: "" },
   });
   const onSubmit = form.handleSubmit(async (values) => {
-    const outcome = await liftSuspensionAction(athleteId, values);
+    const outcome = await reachAction(() => liftSuspensionAction(athleteId, values));
     onDone(outcome);
     if (!outcome.ok && outcome.fieldErrors.note) form.setError("note", { message: outcome.fieldErrors.note[0] });
     // Also after a refusal: another coach may have lifted it meanwhile.

@@ -16,6 +16,7 @@ import {
 } from "@/lib/clearance/checklist";
 import { assessmentSchemaFor, maxEvidencePhotos } from "@/lib/validations/certification";
 import { recordAssessmentAction } from "../actions";
+import { reachAction } from "@/lib/http/reach-action";
 
 const maxPhotoBytes = 8 * 1024 * 1024;
 
@@ -101,8 +102,10 @@ export function AssessmentForm({
   }
 
   async function removePhoto(photo: Photo) {
-    const response = await fetch(photo.url, { method: "DELETE" });
-    if (response.ok || response.status === 404) {
+    const response = await fetch(photo.url, { method: "DELETE" }).catch(() => null);
+    if (!response) {
+      setPhotoMessage({ ok: false, text: "No connection; the photo was not removed." });
+    } else if (response.ok || response.status === 404) {
       keepPhotos(photos.filter((entry) => entry.id !== photo.id));
       setPhotoMessage({ ok: true, text: "Photo removed." });
     } else {
@@ -111,7 +114,7 @@ export function AssessmentForm({
   }
 
   const onSubmit = form.handleSubmit(async (values) => {
-    const outcomeOfAction = await recordAssessmentAction(assessmentId, values);
+    const outcomeOfAction = await reachAction(() => recordAssessmentAction(assessmentId, values));
     setResult(
       outcomeOfAction.ok ? { ok: true, message: outcomeOfAction.message ?? "Recorded." } : outcomeOfAction,
     );
