@@ -59,8 +59,13 @@ test.describe("signing in", () => {
     }
   });
 
-  test("signing out ends the session", async ({ page }) => {
+  test("signing out ends the session; without a connection it says the session is still open", async ({ page, context }) => {
     await signIn(page, demo.athlete);
+    await context.setOffline(true);
+    await page.getByRole("button", { name: "Sign out" }).click();
+    await expect(page.getByTestId("sign-out-status")).toHaveText("Still signed in: no answer. Try again.");
+    await expect(page.getByTestId("signed-in-as")).toBeVisible();
+    await context.setOffline(false);
     await page.getByRole("button", { name: "Sign out" }).click();
     await expect(page).toHaveURL(/\/sign-in/);
     await page.goto("/learn");

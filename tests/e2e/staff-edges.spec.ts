@@ -301,6 +301,14 @@ test.describe("coach and admin edges", () => {
     await context.close();
   });
 
+  test("a roster that cannot be fetched says so in words, not the browser's", async ({ page }) => {
+    await signIn(page, demo.coach);
+    await page.route("**/api/roster/matrix", (route) => route.abort("internetdisconnected"));
+    await page.goto("/roster");
+    await expect(page.getByText("No answer from Slipway: the roster could not be loaded.")).toBeVisible();
+    await expect(page.getByText("Failed to fetch")).toHaveCount(0);
+  });
+
   test("the club's time zone sets the day of the cleaning log, on the athletes' page too, and the clock of times shown", async ({ page }) => {
     // A zone whose date differs from UTC's right now: UTC+14 from 10:00 UTC, UTC-11 before 11:00 UTC
     // (IANA Time Zone Database, IANA, 2025).

@@ -107,7 +107,13 @@ export function RosterMatrixView() {
         if (controller.signal.aborted) return;
         setLoad({
           state: "failed",
-          message: error instanceof Error ? error.message : "The roster could not be loaded.",
+          // A fetch that got no answer rejects with the browser's own words ("Failed to fetch").
+          message:
+            error instanceof TypeError
+              ? "No answer from Slipway: the roster could not be loaded. Reload the page once you have a connection."
+              : error instanceof Error
+                ? error.message
+                : "The roster could not be loaded.",
         });
       });
     return () => controller.abort();
