@@ -29,6 +29,22 @@ test.describe("signing in", () => {
     await expect(status).toContainText("do not match an active account");
   });
 
+  test("signing in without a connection says so, not that the password is wrong", async ({ page, context }) => {
+    await page.goto("/sign-in");
+    const form = page.getByTestId("password-sign-in");
+    await form.getByLabel("E-mail").fill(demo.athlete);
+    await form.getByLabel("Password").fill(demo.password);
+    await expect(form.getByRole("button", { name: "Sign in" })).toBeEnabled();
+    await context.setOffline(true);
+    await form.getByRole("button", { name: "Sign in" }).click();
+    const status = page.getByTestId("sign-in-status");
+    await expect(status).toContainText("Slipway could not be reached, so you are not signed in yet.");
+    await expect(status).not.toContainText("do not match");
+    await context.setOffline(false);
+    await form.getByRole("button", { name: "Sign in" }).click();
+    await expect(page.getByTestId("signed-in-as")).toBeVisible();
+  });
+
   test("the landing page's button takes a visitor to sign-in and a signed-in coach to their roster", async ({ page }) => {
     await page.goto("/");
     await page.getByRole("link", { name: "Open Slipway" }).click();

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { useRouter } from "next/navigation";
-import { signIn } from "next-auth/react";
+import { startSession } from "@/lib/auth/start-session";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { z } from "zod";
@@ -38,8 +38,8 @@ export function AcceptInvitationForm({ token, email, defaultName }: { token: str
       setFailure(result.message);
       return;
     }
-    const signedIn = await signIn("password", { email, password: values.password, redirect: false });
-    if (signedIn?.ok && !signedIn.error) {
+    const signedIn = await startSession("password", { email, password: values.password });
+    if (signedIn.ok) {
       router.replace("/home");
       router.refresh();
     } else {

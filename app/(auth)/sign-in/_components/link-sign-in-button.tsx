@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { useRouter } from "next/navigation";
 import Link from "next/link";
-import { signIn } from "next-auth/react";
+import { startSession } from "@/lib/auth/start-session";
 import { Button } from "@/components/ui/button";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 
@@ -11,6 +11,7 @@ export function LinkSignInButton({ token }: { token: string }) {
   const router = useRouter();
   const [pending, setPending] = useState(false);
   const [failed, setFailed] = useState(false);
+  const [unreached, setUnreached] = useState(false);
   return (
     <div className="space-y-4">
       <Button
@@ -21,10 +22,16 @@ export function LinkSignInButton({ token }: { token: string }) {
         onClick={async () => {
           setPending(true);
           setFailed(false);
-          const result = await signIn("link", { token, redirect: false });
-          if (result?.ok && !result.error) {
+          setUnreached(false);
+          const result = await startSession("link", { token });
+          if (result.ok) {
             router.replace("/home");
             router.refresh();
+            return;
+          }
+          if (result.reason === "unreached") {
+            setPending(false);
+            setUnreached(true);
             return;
           }
           setPending(false);
@@ -34,6 +41,12 @@ export function LinkSignInButton({ token }: { token: string }) {
         Sign in to Slipway
       </Button>
       <LiveStatus>
+        {unreached && (
+          <Notice
+            tone="error"
+            title="Slipway could not be reached, so you are not signed in yet. Try again once you have a connection."
+          />
+        )}
         {failed && (
           <Notice tone="error" title="This link has expired or was already used.">
             <Link href="/sign-in" className="underline">

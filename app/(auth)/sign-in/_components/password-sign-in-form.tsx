@@ -2,11 +2,11 @@
 
 import { useState } from "react";
 import { useRouter } from "next/navigation";
-import { signIn } from "next-auth/react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { z } from "zod";
 import { signInSchema } from "@/lib/validations/members";
+import { startSession } from "@/lib/auth/start-session";
 import { TextField } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 import { LiveStatus, Notice } from "@/components/ui/notice";
@@ -16,6 +16,7 @@ type SignInInput = z.infer<typeof signInSchema>;
 const failureMessages: Record<string, string> = {
   throttled: "Too many failed attempts. Wait 15 minutes, or ask for a one-time link below.",
   default: "That e-mail address and password do not match an active account.",
+  unreached: "Slipway could not be reached, so you are not signed in yet. Check the connection and try again.",
 };
 
 export function PasswordSignInForm({ callbackUrl }: { callbackUrl: string }) {
@@ -26,13 +27,13 @@ export function PasswordSignInForm({ callbackUrl }: { callbackUrl: string }) {
 
   const onSubmit = form.handleSubmit(async (values) => {
     setFailure(null);
-    const result = await signIn("password", { ...values, redirect: false });
-    if (result?.ok && !result.error) {
+    const result = await startSession("password", values);
+    if (result.ok) {
       router.replace(callbackUrl);
       router.refresh();
       return;
     }
-    setFailure(result?.status === 429 || result?.error === "throttled" ? failureMessages.throttled! : failureMessages.default!);
+    setFailure(failureMessages[result.reason === "refused" ? "default" : result.reason]!);
   });
 
   return (
