@@ -1,8 +1,10 @@
+import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
 import { demo, signIn } from "./support/auth";
 import { answerQuiz, firstPassOf, openQuiz, storedQuestions } from "./support/attempts";
 import { formatLongDate, isoDateOf } from "@/lib/clearance/dates";
 import { machineTimeZone } from "@/lib/care/calendar";
+import { loadAthleteEmail } from "@/lib/seed/load-athletes";
 
 /** Every request that would open or resume a quiz attempt, from now on. */
 function attemptRequests(page: Page): string[] {
@@ -215,4 +217,22 @@ test("a passed quiz opens on the pass and the way on; only the practise button s
   expect(await (await resumedOnReload).json()).toMatchObject({ attemptId: opening.attemptId, resumed: true });
   await expect(page.getByTestId("quiz-form")).toBeVisible();
   await expect(page.getByTestId("quiz-passed")).toHaveCount(0);
+});
+
+test("a lesson finished without a connection says so, and Try again brings the lesson back from the server", async ({ page, context }) => {
+  await signIn(page, loadAthleteEmail(33));
+  await page.goto("/learn/grip-cleaning");
+  const finished = page.getByRole("button", { name: "I've read it: start the quiz" });
+  await expect(finished).toBeVisible();
+  await context.setOffline(true);
+  await finished.click();
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("No connection");
+  await expect(page.getByRole("main").getByRole("alert")).toContainText("the last change you made may not have been");
+  const scan = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"]).analyze();
+  expect(scan.violations.map((violation) => violation.id)).toEqual([]);
+  await context.setOffline(false);
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("Something went wrong");
+  await page.getByRole("button", { name: "Try again" }).click();
+  await expect(page.getByRole("button", { name: "I've read it: start the quiz" })).toBeVisible();
+  await expect(page).toHaveURL(/\/learn\/grip-cleaning$/);
 });
