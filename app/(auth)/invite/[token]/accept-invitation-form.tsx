@@ -13,6 +13,7 @@ import { LiveStatus, Notice } from "@/components/ui/notice";
 import { minPasswordLength } from "@/lib/auth/password-rules";
 import { acceptInvitationAction } from "./actions";
 import { reachAction } from "@/lib/http/reach-action";
+import { ClientForm } from "@/components/ui/client-form";
 
 const formSchema = acceptInvitationSchema
   .extend({ confirm: z.string() })
@@ -48,7 +49,7 @@ export function AcceptInvitationForm({ token, email, defaultName }: { token: str
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4 rounded-lg bg-white p-4 shadow-sm">
+    <ClientForm onSubmit={onSubmit} noValidate className="space-y-4 rounded-lg bg-white p-4 shadow-sm">
       <input type="hidden" {...form.register("token")} />
       <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register("name")} />
       <TextField
@@ -64,6 +65,6 @@ export function AcceptInvitationForm({ token, email, defaultName }: { token: str
       <Button type="submit" pending={isSubmitting} pendingLabel="Creating your account…" className="w-full">
         Create account and sign in
       </Button>
-    </form>
+    </ClientForm>
   );
 }

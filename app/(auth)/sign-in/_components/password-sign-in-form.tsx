@@ -10,6 +10,7 @@ import { startSession } from "@/lib/auth/start-session";
 import { TextField } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 import { LiveStatus, Notice } from "@/components/ui/notice";
+import { ClientForm } from "@/components/ui/client-form";
 
 type SignInInput = z.infer<typeof signInSchema>;
 
@@ -37,7 +38,7 @@ export function PasswordSignInForm({ callbackUrl }: { callbackUrl: string }) {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4" data-testid="password-sign-in">
+    <ClientForm onSubmit={onSubmit} noValidate className="space-y-4" data-testid="password-sign-in">
       <TextField label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
       <TextField
         label="Password"
@@ -50,6 +51,6 @@ export function PasswordSignInForm({ callbackUrl }: { callbackUrl: string }) {
       <Button type="submit" pending={isSubmitting} pendingLabel="Signing in…" className="w-full">
         Sign in
       </Button>
-    </form>
+    </ClientForm>
   );
 }

@@ -10,6 +10,7 @@ import { Button } from "@/components/ui/button";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { requestSignInLinkAction } from "../actions";
 import { reachAction } from "@/lib/http/reach-action";
+import { ClientForm } from "@/components/ui/client-form";
 
 type LinkInput = z.infer<typeof signInLinkSchema>;
 
@@ -23,7 +24,7 @@ export function SignInLinkForm() {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4">
+    <ClientForm onSubmit={onSubmit} noValidate className="space-y-4">
       <TextField label="E-mail for the link" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
       <LiveStatus testId="link-status">
         {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
@@ -31,6 +32,6 @@ export function SignInLinkForm() {
       <Button type="submit" variant="secondary" pending={isSubmitting} pendingLabel="Sending…" className="w-full">
         E-mail me a link
       </Button>
-    </form>
+    </ClientForm>
   );
 }

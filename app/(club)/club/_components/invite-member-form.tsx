@@ -10,6 +10,7 @@ import { Button } from "@/components/ui/button";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { inviteMemberAction } from "../actions";
 import { reachAction } from "@/lib/http/reach-action";
+import { ClientForm } from "@/components/ui/client-form";
 
 type InviteInput = z.infer<typeof invitationSchema>;
 
@@ -37,7 +38,7 @@ export function InviteMemberForm() {
   };
 
   return (
-    <form onSubmit={onSubmit} noValidate className="grid gap-4 sm:grid-cols-2" data-testid="invite-form">
+    <ClientForm onSubmit={onSubmit} noValidate className="grid gap-4 sm:grid-cols-2" data-testid="invite-form">
       <TextField label="Name" autoComplete="off" error={errors.name?.message} {...form.register("name")} />
       <TextField label="E-mail" type="email" autoComplete="off" error={errors.email?.message} {...form.register("email")} />
       <SelectField
@@ -60,6 +61,6 @@ export function InviteMemberForm() {
           {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
         </LiveStatus>
       </div>
-    </form>
+    </ClientForm>
   );
 }

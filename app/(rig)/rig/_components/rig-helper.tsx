@@ -27,6 +27,7 @@ import type { ClubOarLimits } from "@/lib/rigging/limits";
 import type { RigPlanRequestInput } from "@/lib/validations/rig";
 import { measuredOarSchema, rigPlanRouteSchema, type MeasuredOarInput, type SavedRigPlanInput } from "@/lib/validations/rig-plans";
 import type { BoatSummary, OarSetSummary } from "@/lib/data/fleet";
+import { ClientForm } from "@/components/ui/client-form";
 
 interface RigHelperProps {
   boats: BoatSummary[];
@@ -202,7 +203,7 @@ export function RigHelper({ boats, oarSets, limits, halfSwivelCm, userId, initia
 
   return (
     <div className="space-y-6">
-      <form onSubmit={onSubmit} noValidate className="space-y-4 rounded-lg bg-white p-4 shadow-sm" data-testid="rig-helper">
+      <ClientForm onSubmit={onSubmit} noValidate className="space-y-4 rounded-lg bg-white p-4 shadow-sm" data-testid="rig-helper">
         <SelectField
           label="Boat you are moving to"
           disabled={!hydrated}
@@ -266,7 +267,7 @@ export function RigHelper({ boats, oarSets, limits, halfSwivelCm, userId, initia
         <Button type="submit" pending={isSubmitting} pendingLabel="Working it out…" className="w-full">
           Show my steps
         </Button>
-      </form>
+      </ClientForm>
 
       {outcome && (
         <>

@@ -9,6 +9,7 @@ import { LiveStatus, Notice } from "@/components/ui/notice";
 import { clubSettingsFormSchema, type ClubSettingsForm } from "@/lib/validations/club-settings-form";
 import { saveClubSettingsAction } from "../actions";
 import { reachAction } from "@/lib/http/reach-action";
+import { ClientForm } from "@/components/ui/client-form";
 
 type Path = FieldPath<ClubSettingsForm>;
 
@@ -59,7 +60,7 @@ export function ClubSettingsFormView({
 
   const modulesError = errorAt(errors, "clearanceModules");
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-6" data-testid="settings-form">
+    <ClientForm onSubmit={onSubmit} noValidate className="space-y-6" data-testid="settings-form">
       <fieldset className="grid gap-4 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-3">
         <legend className="px-1 text-lg font-semibold">Quizzes</legend>
         <TextField
@@ -168,6 +169,6 @@ export function ClubSettingsFormView({
           {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
         </LiveStatus>
       </div>
-    </form>
+    </ClientForm>
   );
 }

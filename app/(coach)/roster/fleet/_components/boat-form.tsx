@@ -12,6 +12,7 @@ import { createBoatAction, updateBoatAction } from "../actions";
 import { SaveFeedback, type SaveOutcome } from "./save-feedback";
 import { optionalCmValue } from "./form-helpers";
 import { reachAction } from "@/lib/http/reach-action";
+import { ClientForm } from "@/components/ui/client-form";
 
 interface BoatFormProps {
   /** Present when editing. */
@@ -49,7 +50,7 @@ export function BoatForm({ boatId, initial, linkedSets = [], halfSwivelCm }: Boa
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4" data-testid="boat-form">
+    <ClientForm onSubmit={onSubmit} noValidate className="space-y-4" data-testid="boat-form">
       <TextField label="Boat name" autoComplete="off" error={errors.name?.message} {...form.register("name")} />
       <SelectField
         label="Class"
@@ -84,7 +85,7 @@ export function BoatForm({ boatId, initial, linkedSets = [], halfSwivelCm }: Boa
       <Button type="submit" pending={isSubmitting} pendingLabel="Saving…" className="w-full sm:w-auto">
         {boatId === undefined ? "Add the boat" : "Save changes"}
       </Button>
-    </form>
+    </ClientForm>
   );
 }
 

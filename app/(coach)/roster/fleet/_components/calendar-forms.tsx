@@ -11,6 +11,7 @@ import { formatIsoDate } from "@/lib/care/calendar";
 import { raceDaySchemaFor, type RaceDayInput } from "@/lib/validations/cleaning";
 import { addRaceDayAction, removeRaceDayAction, sendDigestNowAction, setHumidSpellAction } from "../actions";
 import { reachAction } from "@/lib/http/reach-action";
+import { ClientForm } from "@/components/ui/client-form";
 
 type Status = { ok: boolean; message?: string } | null;
 
@@ -70,14 +71,14 @@ export function RaceDaysForm({ raceDays, today }: { raceDays: string[]; today: s
           ))}
         </ul>
       )}
-      <form onSubmit={onSubmit} noValidate className="flex flex-wrap items-end gap-3" data-testid="race-day-form">
+      <ClientForm onSubmit={onSubmit} noValidate className="flex flex-wrap items-end gap-3" data-testid="race-day-form">
         <div className="min-w-48 flex-1">
           <TextField label="Add a race day" type="date" min={today} error={errors.raceDay?.message} {...form.register("raceDay")} />
         </div>
         <Button type="submit" pending={isSubmitting} pendingLabel="Adding…">
           Add race day
         </Button>
-      </form>
+      </ClientForm>
       <LiveStatus testId="race-day-status">{status && <Notice tone={status.ok ? "success" : "error"} title={status.message} />}</LiveStatus>
     </div>
   );

@@ -15,6 +15,7 @@ import { createOarSetAction, updateOarSetAction } from "../actions";
 import { SaveFeedback, type SaveOutcome } from "./save-feedback";
 import { cmValue, wholeValue } from "./form-helpers";
 import { reachAction } from "@/lib/http/reach-action";
+import { ClientForm } from "@/components/ui/client-form";
 
 interface OarSetFormProps {
   oarSetId?: number;
@@ -59,7 +60,7 @@ export function OarSetForm({ oarSetId, initial, boats, limits, defaultClickCm }:
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4" data-testid="oar-set-form">
+    <ClientForm onSubmit={onSubmit} noValidate className="space-y-4" data-testid="oar-set-form">
       <TextField label="Set name" autoComplete="off" error={errors.name?.message} {...form.register("name")} />
       <SelectField
         label="Oars"
@@ -148,6 +149,6 @@ export function OarSetForm({ oarSetId, initial, boats, limits, defaultClickCm }:
       <Button type="submit" pending={isSubmitting} pendingLabel="Saving…" className="w-full sm:w-auto">
         {oarSetId === undefined ? "Add the oar set" : "Save changes"}
       </Button>
-    </form>
+    </ClientForm>
   );
 }

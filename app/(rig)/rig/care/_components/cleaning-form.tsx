@@ -11,6 +11,7 @@ import { cleaningMethodLabels, cleaningMethods } from "@/lib/care/methods";
 import { cleaningRecordSchemaFor, type CleaningRecordFormInput, type CleaningRecordInput } from "@/lib/validations/cleaning";
 import { recordCleaningAction } from "../actions";
 import { reachAction } from "@/lib/http/reach-action";
+import { ClientForm } from "@/components/ui/client-form";
 
 interface CleaningFormProps {
   oarSets: { id: number; name: string }[];
@@ -48,7 +49,7 @@ export function CleaningForm({ oarSets, members, me, today }: CleaningFormProps)
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-4" data-testid="cleaning-form">
+    <ClientForm onSubmit={onSubmit} noValidate className="space-y-4" data-testid="cleaning-form">
       <SelectField
         label="Oar set"
         error={errors.oarSetId?.message}
@@ -92,6 +93,6 @@ export function CleaningForm({ oarSets, members, me, today }: CleaningFormProps)
       <Button type="submit" pending={isSubmitting} pendingLabel="Recording…" className="w-full">
         Record the cleaning
       </Button>
-    </form>
+    </ClientForm>
   );
 }

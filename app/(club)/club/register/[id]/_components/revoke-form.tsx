@@ -12,6 +12,7 @@ import { LiveStatus, Notice } from "@/components/ui/notice";
 import { revokeCertificateSchema } from "@/lib/validations/certification";
 import { revokeCertificateAction } from "../actions";
 import { reachAction } from "@/lib/http/reach-action";
+import { ClientForm } from "@/components/ui/client-form";
 
 /**
  * Revoke a certificate: the reason is kept in the audit log and the register. Revoking cannot be undone,
@@ -66,7 +67,7 @@ export function RevokeCertificateForm({
   return (
     <>
       {!revoked && (
-        <form onSubmit={onSubmit} noValidate className="space-y-3" data-testid="revoke-form">
+        <ClientForm onSubmit={onSubmit} noValidate className="space-y-3" data-testid="revoke-form">
           <p className="text-sm text-slate-700">
             {kind === "module"
               ? "Revoking withdraws this module's pass: the athlete needs a new practical sign-off, and a rigging clearance certificate that stands on it is revoked too."
@@ -81,7 +82,7 @@ export function RevokeCertificateForm({
           <Button type="submit" variant="danger">
             Revoke certificate…
           </Button>
-        </form>
+        </ClientForm>
       )}
       <Dialog
         open={confirming !== null}

@@ -11,6 +11,7 @@ import { LiveStatus, Notice } from "@/components/ui/notice";
 import { liftSuspensionSchema, suspendClearanceSchema } from "@/lib/validations/certification";
 import { liftSuspensionAction, suspendClearanceAction } from "../actions";
 import { reachAction } from "@/lib/http/reach-action";
+import { ClientForm } from "@/components/ui/client-form";
 
 type Outcome = { ok: boolean; message?: string } | null;
 
@@ -58,7 +59,7 @@ function SuspendClearanceForm({
     else router.refresh();
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-3" data-testid="suspend-form">
+    <ClientForm onSubmit={onSubmit} noValidate className="space-y-3" data-testid="suspend-form">
       <TextField
         label="Reason for suspending"
         hint="The athlete sees this."
@@ -68,7 +69,7 @@ function SuspendClearanceForm({
       <Button type="submit" variant="danger" pending={form.formState.isSubmitting} pendingLabel="Suspending…">
         Suspend clearance
       </Button>
-    </form>
+    </ClientForm>
   );
 }
 
@@ -92,7 +93,7 @@ function LiftSuspensionForm({
     else router.refresh();
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="space-y-3" data-testid="lift-form">
+    <ClientForm onSubmit={onSubmit} noValidate className="space-y-3" data-testid="lift-form">
       <TextField
         label="Note (optional)"
         error={form.formState.errors.note?.message}
@@ -101,6 +102,6 @@ function LiftSuspensionForm({
       <Button type="submit" pending={form.formState.isSubmitting} pendingLabel="Lifting…">
         Lift the suspension
       </Button>
-    </form>
+    </ClientForm>
   );
 }

@@ -17,6 +17,7 @@ import {
 import { assessmentSchemaFor, maxEvidencePhotos } from "@/lib/validations/certification";
 import { recordAssessmentAction } from "../actions";
 import { reachAction } from "@/lib/http/reach-action";
+import { ClientForm } from "@/components/ui/client-form";
 
 const maxPhotoBytes = 8 * 1024 * 1024;
 
@@ -132,7 +133,7 @@ export function AssessmentForm({
   return (
     <div className="space-y-4">
       {!done && (
-        <form onSubmit={onSubmit} noValidate className="space-y-6" data-testid="assessment-form">
+        <ClientForm onSubmit={onSubmit} noValidate className="space-y-6" data-testid="assessment-form">
           <div className="space-y-4">
             {checklist.map((item, index) => {
               const error = itemErrors[item.id]?.message;
@@ -262,7 +263,7 @@ export function AssessmentForm({
               Record the sign-off
             </Button>
           </div>
-        </form>
+        </ClientForm>
       )}
       <LiveStatus testId="assessment-status">
         {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
