@@ -12,17 +12,27 @@ export function machineTimeZone(): string {
   return Intl.DateTimeFormat().resolvedOptions().timeZone;
 }
 
-const dayFormatters = new Map<string, Intl.DateTimeFormat>();
+/** The Intl formats this file asks for, each made once a zone. */
+const zoneFormats = {
+  day: { year: "numeric", month: "2-digit", day: "2-digit" },
+  offset: { hourCycle: "h23", year: "numeric", month: "numeric", day: "numeric", hour: "numeric", minute: "numeric", second: "numeric" },
+  instant: { day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit", hourCycle: "h23", timeZoneName: "short" },
+} satisfies Record<string, Intl.DateTimeFormatOptions>;
 
-function dayFormatter(timeZone: string): Intl.DateTimeFormat {
-  let formatter = dayFormatters.get(timeZone);
+const zoneFormatters = new Map<string, Intl.DateTimeFormat>();
+
+/** An en-GB formatter of `format` in `timeZone`, kept for the process; a RangeError for a name Intl does not know. */
+function zoneFormatter(format: keyof typeof zoneFormats, timeZone: string): Intl.DateTimeFormat {
+  const key = `${format} ${timeZone}`;
+  let formatter = zoneFormatters.get(key);
   if (!formatter) {
-    // Throws a RangeError for a name Intl does not know.
-    formatter = new Intl.DateTimeFormat("en-GB", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" });
-    dayFormatters.set(timeZone, formatter);
+    formatter = new Intl.DateTimeFormat("en-GB", { timeZone, ...zoneFormats[format] });
+    zoneFormatters.set(key, formatter);
   }
   return formatter;
 }
+
+const dayFormatter = (timeZone: string) => zoneFormatter("day", timeZone);
 
 /** Whether Intl knows `name` as a time zone ("Europe/Oslo", "UTC"): the check behind the club setting. */
 export function isTimeZone(name: string): boolean {
@@ -55,24 +65,9 @@ function intlIsoDate(timeZone: string, instant: Date): string {
   return `${part("year")}-${part("month")}-${part("day")}`;
 }
 
-const offsetFormatters = new Map<string, Intl.DateTimeFormat>();
-
 /** How far `timeZone`'s wall clock is ahead of UTC at `epochMs`, in milliseconds (Intl, to the second). */
 function zoneOffsetMs(timeZone: string, epochMs: number): number {
-  let formatter = offsetFormatters.get(timeZone);
-  if (!formatter) {
-    formatter = new Intl.DateTimeFormat("en-GB", {
-      timeZone,
-      hourCycle: "h23",
-      year: "numeric",
-      month: "numeric",
-      day: "numeric",
-      hour: "numeric",
-      minute: "numeric",
-      second: "numeric",
-    });
-    offsetFormatters.set(timeZone, formatter);
-  }
+  const formatter = zoneFormatter("offset", timeZone);
   const value = (type: Intl.DateTimeFormatPartTypes) =>
     Number(formatter.formatToParts(epochMs).find((entry) => entry.type === type)?.value);
   const wallClock = Date.UTC(value("year"), value("month") - 1, value("day"), value("hour"), value("minute"), value("second"));
@@ -134,8 +129,6 @@ export function midnightInZone(isoDate: string, timeZone: string): string {
   return `${wall}${sign}${hours}:${minutes}`;
 }
 
-const instantFormatters = new Map<string, Intl.DateTimeFormat>();
-
 /**
  * A moment for people, on the club's clock and saying which clock, e.g. "1 Jul 2026, 13:34 BST" or
  * "2 Dec 2026, 12:34 GMT+13": when an attempt was sent in or a sign-off recorded. Server-rendered only
@@ -144,21 +137,7 @@ const instantFormatters = new Map<string, Intl.DateTimeFormat>();
 export function formatInstantInZone(instant: Date | string, timeZone: string): string {
   const moment = typeof instant === "string" ? new Date(instant) : instant;
   if (!Number.isFinite(moment.getTime())) throw new RangeError("formatInstantInZone needs a valid date");
-  let formatter = instantFormatters.get(timeZone);
-  if (!formatter) {
-    formatter = new Intl.DateTimeFormat("en-GB", {
-      timeZone,
-      day: "numeric",
-      month: "short",
-      year: "numeric",
-      hour: "2-digit",
-      minute: "2-digit",
-      hourCycle: "h23",
-      timeZoneName: "short",
-    });
-    instantFormatters.set(timeZone, formatter);
-  }
-  return formatter.format(moment);
+  return zoneFormatter("instant", timeZone).format(moment);
 }
 
 /** ISO weekday of a day number: Monday 1 … Sunday 7 (day 0, 1970-01-01, was a Thursday). */
