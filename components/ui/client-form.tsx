@@ -13,7 +13,7 @@ export function ClientForm({ className, children, ...props }: FormHTMLAttributes
   const hydrated = useHydrated();
   return (
     <form {...props}>
-      <fieldset disabled={!hydrated} className={`m-0 min-w-0 border-0 p-0 ${className ?? ""}`}>
+      <fieldset disabled={!hydrated} className={`min-w-0 ${className ?? ""}`}>
         {children}
       </fieldset>
     </form>
