@@ -29,6 +29,13 @@ export function areaForPath(pathname: string): Area {
   return "public";
 }
 
+/** Who a refused page is for, in the words the 403 page uses ("This page is for …"). */
+export function areaAudience(area: Area): string {
+  if (area === "admin") return "club administrators";
+  if (area === "coach") return "coaches and club administrators";
+  return "members of the club";
+}
+
 const roleRank: Record<Role, number> = { athlete: 1, coach: 2, admin: 3 };
 const areaRank: Record<Area, number> = { public: 0, member: 1, coach: 2, admin: 3 };
 

@@ -112,12 +112,21 @@ test.describe("guards", () => {
     await signIn(page, demo.athlete);
     const response = await page.goto("/roster");
     expect(response?.status()).toBe(403);
-    await expect(page.getByTestId("forbidden")).toBeVisible();
+    await expect(page.getByTestId("forbidden")).toContainText("This page is for coaches and club administrators.");
     const club = await page.goto("/club");
     expect(club?.status()).toBe(403);
+    await expect(page.getByTestId("forbidden")).toContainText("This page is for club administrators.");
     const api = await page.request.get("/api/roster");
     expect(api.status()).toBe(403);
     expect(await api.json()).toMatchObject({ error: "forbidden" });
+  });
+
+  test("a coach opening an administrators' page is told it is for club administrators", async ({ page }) => {
+    await signIn(page, demo.coach);
+    const response = await page.goto("/club/register");
+    expect(response?.status()).toBe(403);
+    await expect(page.getByTestId("forbidden")).toContainText("This page is for club administrators.");
+    await expect(page.getByTestId("forbidden")).not.toContainText("coaches");
   });
 
   test("a coach sees the roster API, and the health check reports the database", async ({ page }) => {

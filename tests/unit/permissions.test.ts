@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import {
+  areaAudience,
   areaForPath,
   assertAllowed,
   assertSignedIn,
@@ -53,6 +54,17 @@ describe("areas", () => {
     expect(homePathFor("athlete")).toBe("/learn");
     expect(homePathFor("coach")).toBe("/roster");
     expect(homePathFor("admin")).toBe("/club");
+  });
+});
+
+describe("who a refused page is for (the 403 page's words)", () => {
+  it.each([
+    ["/club/register", "club administrators"],
+    ["/club", "club administrators"],
+    ["/roster/sign-offs", "coaches and club administrators"],
+    ["/learn", "members of the club"],
+  ] as const)("%s is for %s", (path, audience) => {
+    expect(areaAudience(areaForPath(path))).toBe(audience);
   });
 });
 
