@@ -219,20 +219,49 @@ test("a passed quiz opens on the pass and the way on; only the practise button s
   await expect(page.getByTestId("quiz-passed")).toHaveCount(0);
 });
 
-test("a lesson finished without a connection says so, and Try again brings the lesson back from the server", async ({ page, context }) => {
+test("a lesson finished without a connection says so beside the lesson, and the button works once back online", async ({ page, context }) => {
   await signIn(page, loadAthleteEmail(33));
   await page.goto("/learn/grip-cleaning");
   const finished = page.getByRole("button", { name: "I've read it: start the quiz" });
   await expect(finished).toBeVisible();
   await context.setOffline(true);
   await finished.click();
-  await expect(page.getByRole("heading", { level: 1 })).toHaveText("No connection");
-  await expect(page.getByRole("main").getByRole("alert")).toContainText("the last change you made may not have been");
+  await expect(page.getByTestId("finish-lesson-offline")).toContainText("You are offline, so the quiz cannot start yet.");
+  await expect(page).toHaveURL(/\/learn\/grip-cleaning$/);
+  await expect(page.getByRole("heading", { level: 1 })).not.toHaveText("No connection");
   const scan = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"]).analyze();
   expect(scan.violations.map((violation) => violation.id)).toEqual([]);
   await context.setOffline(false);
+  await expect(page.getByTestId("finish-lesson-offline")).toHaveCount(0);
+  await finished.click();
+  await expect(page).toHaveURL(/\/learn\/grip-cleaning\/quiz$/);
+  await expect(page.getByTestId("quiz-form")).toBeVisible();
+});
+
+test("a lesson finished while the server gives no answer shows the error page, and Try again brings the lesson back", async ({ page }) => {
+  await signIn(page, loadAthleteEmail(33));
+  await page.goto("/learn/grip-cleaning");
+  const finished = page.getByRole("button", { name: "I've read it: start the quiz" });
+  await expect(finished).toBeVisible();
+  await page.route("**/learn/grip-cleaning", (route) => (route.request().method() === "POST" ? route.abort("connectionreset") : route.continue()));
+  await finished.click();
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("Something went wrong");
+  await expect(page.getByRole("main").getByRole("alert")).toContainText("the last change you made may not have been");
+  await page.unroute("**/learn/grip-cleaning");
   await page.getByRole("button", { name: "Try again" }).click();
   await expect(page.getByRole("button", { name: "I've read it: start the quiz" })).toBeVisible();
   await expect(page).toHaveURL(/\/learn\/grip-cleaning$/);
+});
+
+test("without JavaScript the lesson's button still records the read and goes on to the quiz", async ({ page, browser }) => {
+  await signIn(page, loadAthleteEmail(33));
+  const context = await browser.newContext({ javaScriptEnabled: false, storageState: await page.context().storageState() });
+  try {
+    const plain = await context.newPage();
+    await plain.goto("/learn/setting-inboard");
+    await plain.getByRole("button", { name: "I've read it: start the quiz" }).click();
+    await expect(plain).toHaveURL(/\/learn\/setting-inboard\/quiz$/);
+  } finally {
+    await context.close();
+  }
 });

@@ -6,6 +6,7 @@ import { renderLesson } from "@/lib/content/render";
 import { PageTitle } from "@/components/ui/page-title";
 import { buttonClasses } from "@/components/ui/button-classes";
 import { finishLessonAction } from "./actions";
+import { FinishLessonForm } from "./_components/finish-lesson-form";
 
 interface Props {
   params: Promise<{ slug: string }>;
@@ -41,13 +42,13 @@ export default async function LessonPage({ params }: Props) {
         <p className="text-sm text-slate-700">Best read after: {prerequisites.map((meta) => meta.title).join(", ")}.</p>
       )}
       <div className="lesson-body space-y-4">{content}</div>
-      <form action={finishLessonAction} className="rounded-lg bg-white p-4 shadow-sm">
+      <FinishLessonForm action={finishLessonAction}>
         <input type="hidden" name="slug" value={lesson.meta.slug} />
         <p className="mb-3">Finished reading? The quiz has {lesson.meta.quiz.draw} questions; some ask you to work out real settings.</p>
         <button type="submit" className={`${buttonClasses("primary")} w-full sm:w-auto`}>
           I&apos;ve read it: start the quiz
         </button>
-      </form>
+      </FinishLessonForm>
     </article>
   );
 }
