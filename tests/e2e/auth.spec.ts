@@ -179,7 +179,11 @@ test.describe("mail", () => {
     await expect(newcomer).toHaveURL(/\/learn$/);
     await expect(newcomer.getByTestId("signed-in-as")).toContainText("Noor Ellery");
 
-    await newcomer.goto(new URL(link!).pathname);
+    const used = await newcomer.goto(new URL(link!).pathname);
+    expect(used?.status()).toBe(404);
+    await expect(newcomer.getByText("This invitation link is no longer valid.")).toBeVisible();
+    const unknown = await newcomer.goto(`/invite/${"z".repeat(40)}`);
+    expect(unknown?.status()).toBe(404);
     await expect(newcomer.getByText("This invitation link is no longer valid.")).toBeVisible();
     await context.close();
   });

@@ -1,7 +1,6 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { notFound } from "next/navigation";
 import { PageTitle } from "@/components/ui/page-title";
-import { Notice } from "@/components/ui/notice";
 import { findPendingInvitation } from "@/lib/data/users";
 import { roleLabels } from "@/lib/auth/roles";
 import { AcceptInvitationForm } from "./accept-invitation-form";
@@ -11,20 +10,8 @@ export const metadata: Metadata = { title: "Accept your invitation" };
 export default async function InvitationPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
   const invitation = token.length <= 100 ? await findPendingInvitation(token) : null;
-  if (!invitation) {
-    return (
-      <div className="mx-auto max-w-md">
-        <PageTitle>Invitation</PageTitle>
-        <Notice tone="error" title="This invitation link is no longer valid.">
-          It may have been used already or be more than 14 days old. Ask your club administrator for a new one, or{" "}
-          <Link href="/sign-in" className="underline">
-            sign in
-          </Link>{" "}
-          if you already have an account.
-        </Notice>
-      </div>
-    );
-  }
+  // Used, replaced, expired or never issued: a 404, whose page (not-found.tsx) lists what may have happened.
+  if (!invitation) notFound();
   return (
     <div className="mx-auto max-w-md">
       <PageTitle lead={`${invitation.clubName} invited ${invitation.email} as ${roleLabels[invitation.role].toLowerCase()}.`}>
