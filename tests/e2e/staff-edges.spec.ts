@@ -301,6 +301,32 @@ test.describe("coach and admin edges", () => {
     await context.close();
   });
 
+  test("a form on a page opened before an update (its action unknown to the server) says to reload; nothing is saved", async ({ page }) => {
+    await signIn(page, demo.coach);
+    await page.goto("/roster/fleet/care");
+    const form = page.getByTestId("race-day-form");
+    await expect(form.getByRole("button", { name: "Add race day" })).toBeEnabled();
+    // What a tab older than the running build sends: an action id the server was not built with.
+    let refused = 0;
+    await page.route("**/roster/fleet/care", async (route) => {
+      const request = route.request();
+      if (request.method() !== "POST" || !request.headers()["next-action"]) return route.continue();
+      const response = await route.fetch({ headers: { ...request.headers(), "next-action": "7f".repeat(21) } });
+      // Next's answer to an unknown action: 409, plain text, flagged by this header.
+      refused += response.status() === 409 && response.headers()["x-nextjs-action-not-found"] === "1" ? 1 : 0;
+      return route.fulfill({ response });
+    });
+    const day = addDaysIso(localIsoDate(), 402);
+    await form.getByLabel("Add a race day").fill(day);
+    await form.getByRole("button", { name: "Add race day" }).click();
+    await expect(page.getByTestId("race-day-status")).toContainText("Slipway was updated after this page was opened, so nothing was saved.");
+    expect(refused).toBe(1);
+    await expect(form.getByLabel("Add a race day")).toHaveValue(day);
+    await page.unroute("**/roster/fleet/care");
+    await page.reload();
+    await expect(page.getByRole("button", { name: `Remove the race day ${formatIsoDate(day)}` })).toHaveCount(0);
+  });
+
   test("a roster that cannot be fetched says so in words, not the browser's", async ({ page }) => {
     await signIn(page, demo.coach);
     await page.route("**/api/roster/matrix", (route) => route.abort("internetdisconnected"));

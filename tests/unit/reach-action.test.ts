@@ -1,5 +1,7 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { reachAction, unreachedMessage } from "@/lib/http/reach-action";
+import { redirect } from "next/navigation";
+import { UnrecognizedActionError } from "next/dist/client/components/unrecognized-action-error";
+import { outdatedPageMessage, reachAction, unreachedMessage } from "@/lib/http/reach-action";
 
 describe("reachAction", () => {
   afterEach(() => {
@@ -27,5 +29,20 @@ describe("reachAction", () => {
     const outcome = await reachAction(() => Promise.reject(new TypeError("Failed to fetch")));
     expect(outcome.message).toBe(unreachedMessage(false));
     expect(outcome.message).toContain("offline, so nothing was saved");
+  });
+
+  it("tells a page older than the last update to reload, since the server no longer has its action", async () => {
+    vi.spyOn(console, "warn").mockImplementation(() => {});
+    const outcome = await reachAction(() => Promise.reject(new UnrecognizedActionError('Server Action "7f00" was not found on the server.')));
+    expect(outcome).toEqual({ ok: false, message: outdatedPageMessage, fieldErrors: {} });
+    expect(outcome.message).toContain("Reload the page");
+  });
+
+  it("lets an action's redirect through to Next's router instead of calling it a failure", async () => {
+    await expect(
+      reachAction(async () => {
+        redirect("/learn");
+      }),
+    ).rejects.toMatchObject({ digest: expect.stringContaining("NEXT_REDIRECT") });
   });
 });
