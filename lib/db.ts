@@ -20,9 +20,7 @@ function configuredSqlite(): typeof sqlite3 {
           return;
         }
         this.configure("busyTimeout", 5000);
-        this.exec(`PRAGMA journal_mode=WAL; PRAGMA synchronous=${synchronous};`, (pragmaErr) =>
-          callback?.(pragmaErr ?? null),
-        );
+        this.exec(`PRAGMA journal_mode=WAL; PRAGMA synchronous=${synchronous};`, (pragmaErr) => callback?.(pragmaErr ?? null));
       });
     }
   }
@@ -205,7 +203,10 @@ function preparedOn(connection: SqliteConnection, sql: string): Promise<Prepared
     if (kept.size >= maxPreparedPerConnection) {
       const [oldestSql, oldest] = kept.entries().next().value!;
       kept.delete(oldestSql);
-      void oldest.then((unused) => unused.finalize(), () => undefined);
+      void oldest.then(
+        (unused) => unused.finalize(),
+        () => undefined,
+      );
     }
     kept.set(sql, statement);
   }
@@ -368,7 +369,8 @@ async function runBatch(connection: SqliteConnection, batch: readonly PendingKey
   if (rows === null) {
     // One row broke a constraint, so the whole statement was undone: find it by running them singly.
     const outcomes: Outcome[] = [];
-    for (const write of batch) outcomes.push(...(await runBatch(connection, [write]).catch((error: unknown) => [constraintOutcome(error)])));
+    for (const write of batch)
+      outcomes.push(...(await runBatch(connection, [write]).catch((error: unknown) => [constraintOutcome(error)])));
     return outcomes;
   }
   // Compared as text: SQLite may hand back a key bound as "7" as the integer 7 of the column.

@@ -11,10 +11,7 @@ import type { Club } from "@/models/Club";
 import type { User } from "@/models/User";
 
 /** A coach stopped an athlete's clearance to rig unsupervised; active until lifted. */
-export class ClearanceSuspension extends Model<
-  InferAttributes<ClearanceSuspension>,
-  InferCreationAttributes<ClearanceSuspension>
-> {
+export class ClearanceSuspension extends Model<InferAttributes<ClearanceSuspension>, InferCreationAttributes<ClearanceSuspension>> {
   declare id: CreationOptional<number>;
   declare clubId: ForeignKey<Club["id"]>;
   declare athleteId: ForeignKey<User["id"]>;

@@ -1,11 +1,4 @@
-import {
-  DataTypes,
-  Model,
-  type CreationOptional,
-  type InferAttributes,
-  type InferCreationAttributes,
-  type Sequelize,
-} from "sequelize";
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
 export class Club extends Model<InferAttributes<Club>, InferCreationAttributes<Club>> {
   declare id: CreationOptional<number>;

@@ -15,10 +15,7 @@ export const evidenceMediaTypes = ["image/jpeg", "image/png", "image/webp"] as c
 export type EvidenceMediaType = (typeof evidenceMediaTypes)[number];
 
 /** A photo a coach took at a practical sign-off, stored in uploadsDir() under a random name. */
-export class EvidencePhoto extends Model<
-  InferAttributes<EvidencePhoto>,
-  InferCreationAttributes<EvidencePhoto>
-> {
+export class EvidencePhoto extends Model<InferAttributes<EvidencePhoto>, InferCreationAttributes<EvidencePhoto>> {
   declare id: string;
   declare clubId: ForeignKey<Club["id"]>;
   declare athleteId: ForeignKey<User["id"]>;

@@ -19,10 +19,7 @@ export type AssessmentStatus = (typeof assessmentStatuses)[number];
  * One practical sign-off: asked for (waiting), then decided by a coach (passed or not yet). The
  * checklist is copied in at the decision, so a later edit of the lesson never rewrites what was observed.
  */
-export class PracticalAssessment extends Model<
-  InferAttributes<PracticalAssessment>,
-  InferCreationAttributes<PracticalAssessment>
-> {
+export class PracticalAssessment extends Model<InferAttributes<PracticalAssessment>, InferCreationAttributes<PracticalAssessment>> {
   declare id: string;
   declare clubId: ForeignKey<Club["id"]>;
   declare athleteId: ForeignKey<User["id"]>;

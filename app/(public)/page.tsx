@@ -6,10 +6,9 @@ export default function LandingPage() {
     <div className="space-y-6">
       <h1 className="text-3xl font-bold tracking-tight text-river-900">Set your own oars, safely.</h1>
       <p className="text-lg text-slate-800">
-        Slipway is your club&apos;s short course on looking after adjustable oars: measuring overall length, setting
-        the inboard with the collar, changing boats, securing everything before you go afloat, and keeping grips
-        clean. Read a lesson on your phone, work through a practical quiz, and ask a coach to watch you do it for
-        real.
+        Slipway is your club&apos;s short course on looking after adjustable oars: measuring overall length, setting the inboard with the
+        collar, changing boats, securing everything before you go afloat, and keeping grips clean. Read a lesson on your phone, work through
+        a practical quiz, and ask a coach to watch you do it for real.
       </p>
       <ul className="list-disc space-y-1 pl-6 text-slate-800">
         <li>Athletes: lessons, quizzes and your certificates.</li>

@@ -13,11 +13,7 @@ export async function ClearanceSummary({ actor, onCertificatesPage = false }: { 
   const { standing } = await clearanceOf(actor);
   const { clearance } = standing;
   return (
-    <section
-      aria-labelledby="clearance-heading"
-      className="space-y-2 rounded-lg bg-white p-4 shadow-sm"
-      data-testid="clearance-summary"
-    >
+    <section aria-labelledby="clearance-heading" className="space-y-2 rounded-lg bg-white p-4 shadow-sm" data-testid="clearance-summary">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h2 id="clearance-heading" className="text-lg font-semibold">
           Rigging without a coach
@@ -26,17 +22,12 @@ export async function ClearanceSummary({ actor, onCertificatesPage = false }: { 
       </div>
       {clearance.state === "cleared" && clearance.expiresOn && (
         <p>
-          You may rig your own oars within the club&apos;s limits up to and including{" "}
-          {formatLongDate(lastValidDay(clearance.expiresOn))}.
+          You may rig your own oars within the club&apos;s limits up to and including {formatLongDate(lastValidDay(clearance.expiresOn))}.
           Check every collar and screw before each outing.
         </p>
       )}
-      {clearance.state === "suspended" && (
-        <p>{suspendedClearanceText(clearance.suspension?.reason)}</p>
-      )}
-      {clearance.state === "expired" && (
-        <p>A module pass has run out. Ask a coach to sign it off again; until then rig with a coach.</p>
-      )}
+      {clearance.state === "suspended" && <p>{suspendedClearanceText(clearance.suspension?.reason)}</p>}
+      {clearance.state === "expired" && <p>A module pass has run out. Ask a coach to sign it off again; until then rig with a coach.</p>}
       {clearance.state === "not-cleared" && <p>{notClearedText(standing.modules, clearance.requiredModules)}</p>}
       {!onCertificatesPage && (
         <p>

@@ -17,11 +17,7 @@ interface PracticalSignOffPanelProps {
  * The practical sign-off of one module for the signed-in athlete: where it stands, the coach's last
  * note, the request button once the quiz is passed, and the certificate once signed off.
  */
-export async function PracticalSignOffPanel({
-  actor,
-  moduleSlug,
-  showChecklist = true,
-}: PracticalSignOffPanelProps) {
+export async function PracticalSignOffPanel({ actor, moduleSlug, showChecklist = true }: PracticalSignOffPanelProps) {
   const view = await practicalViewFor(actor, moduleSlug);
   return (
     <section
@@ -56,36 +52,28 @@ export async function PracticalSignOffPanel({
           testId="practical-note"
         >
           <p className="whitespace-pre-wrap">{view.latestDecision.note}</p>
-          <p className="mt-1 text-sm">
-            Recorded {formatLongDate(view.latestDecision.assessedOn)}.
-          </p>
+          <p className="mt-1 text-sm">Recorded {formatLongDate(view.latestDecision.assessedOn)}.</p>
         </Notice>
       )}
 
       {view.openRequest && (
         <p>
           <span aria-hidden="true">◔ </span>
-          You asked {view.openRequest.coachName ?? "any coach"} on{" "}
-          {formatLongDate(view.openRequest.requestedOn)}. Bring your oars to the rack;
-          the coach records what they see on a tablet.
+          You asked {view.openRequest.coachName ?? "any coach"} on {formatLongDate(view.openRequest.requestedOn)}. Bring your oars to the
+          rack; the coach records what they see on a tablet.
         </p>
       )}
 
       {view.currentPass && (
         <p>
           <span aria-hidden="true">✓ </span>
-          Signed off on {formatLongDate(view.currentPass.signedOffOn)}; the pass expires on{" "}
-          {formatLongDate(view.currentPass.expiresOn)}.
+          Signed off on {formatLongDate(view.currentPass.signedOffOn)}; the pass expires on {formatLongDate(view.currentPass.expiresOn)}.
         </p>
       )}
 
       {view.certificate && (
         <p className="flex flex-wrap gap-x-4 gap-y-2">
-          <a
-            href={view.certificate.pdfUrl}
-            className="font-semibold text-river-700 underline"
-            data-testid="certificate-download"
-          >
+          <a href={view.certificate.pdfUrl} className="font-semibold text-river-700 underline" data-testid="certificate-download">
             Download certificate {view.certificate.serial} (PDF)
           </a>
           <a href={view.certificate.verifyUrl} className="text-river-700 underline">
@@ -94,14 +82,8 @@ export async function PracticalSignOffPanel({
         </p>
       )}
 
-      <RequestSignOffForm
-        moduleSlug={moduleSlug}
-        coaches={view.coaches}
-        canRequest={view.requestProblem === null}
-      />
-      {view.requestProblem && !view.openRequest && (
-        <p className="text-sm text-slate-700">{view.requestProblem}</p>
-      )}
+      <RequestSignOffForm moduleSlug={moduleSlug} coaches={view.coaches} canRequest={view.requestProblem === null} />
+      {view.requestProblem && !view.openRequest && <p className="text-sm text-slate-700">{view.requestProblem}</p>}
 
       <p className="text-sm text-slate-700">
         Until a coach has signed off every module your club requires, rig only with a coach beside you.{" "}

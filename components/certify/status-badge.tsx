@@ -14,17 +14,7 @@ const toneClasses: Record<BadgeTone, string> = {
 };
 
 /** A status in words with an icon; the colour only repeats what the words say. */
-export function StatusBadge({
-  tone,
-  icon,
-  label,
-  testId,
-}: {
-  tone: BadgeTone;
-  icon: string;
-  label: string;
-  testId?: string;
-}) {
+export function StatusBadge({ tone, icon, label, testId }: { tone: BadgeTone; icon: string; label: string; testId?: string }) {
   return (
     <span
       data-testid={testId}

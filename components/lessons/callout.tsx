@@ -69,20 +69,14 @@ function Callout({ kind, title, children }: CalloutProps & { kind: CalloutKind }
   const headingId = useId();
   const style = STYLES[kind];
   return (
-    <div
-      role="note"
-      aria-labelledby={headingId}
-      className={`my-6 rounded-r-lg border-l-4 px-4 py-3 ${style.box}`}
-    >
+    <div role="note" aria-labelledby={headingId} className={`my-6 rounded-r-lg border-l-4 px-4 py-3 ${style.box}`}>
       <p id={headingId} className="flex items-center gap-2 text-base font-bold">
         <span className={style.icon}>
           <CalloutIcon kind={kind} />
         </span>
         {title ?? style.heading}
       </p>
-      <div className="mt-1 text-base leading-7 [&>p]:my-2 [&>ul]:my-2 [&>ul]:list-disc [&>ul]:pl-6">
-        {children}
-      </div>
+      <div className="mt-1 text-base leading-7 [&>p]:my-2 [&>ul]:my-2 [&>ul]:list-disc [&>ul]:pl-6">{children}</div>
     </div>
   );
 }

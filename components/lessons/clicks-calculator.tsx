@@ -2,12 +2,7 @@
 
 import { useId, useState } from "react";
 import { inboardClicks } from "@/lib/rigging/adjust";
-import {
-  describeClicks,
-  evaluateClicksInput,
-  formatCm,
-  type ClicksField,
-} from "@/components/lessons/lesson-format";
+import { describeClicks, evaluateClicksInput, formatCm, type ClicksField } from "@/components/lessons/lesson-format";
 import { useHydrated } from "@/components/ui/use-hydrated";
 
 export interface ClicksCalculatorProps {
@@ -20,11 +15,7 @@ export interface ClicksCalculatorProps {
 }
 
 /** Works out how many collar clicks, and which way, take the inboard from its measured to its target value. */
-export function ClicksCalculator({
-  defaultCurrentCm = 87,
-  defaultTargetCm = 88,
-  defaultClickCm = 0.5,
-}: ClicksCalculatorProps) {
+export function ClicksCalculator({ defaultCurrentCm = 87, defaultTargetCm = 88, defaultClickCm = 0.5 }: ClicksCalculatorProps) {
   const id = useId();
   const hydrated = useHydrated();
   const [currentText, setCurrentText] = useState(formatCm(defaultCurrentCm));
@@ -43,26 +34,18 @@ export function ClicksCalculator({
   ];
 
   return (
-    <section
-      aria-labelledby={`${id}-heading`}
-      className="my-6 rounded-lg border border-slate-300 bg-white p-4 text-slate-900"
-    >
+    <section aria-labelledby={`${id}-heading`} className="my-6 rounded-lg border border-slate-300 bg-white p-4 text-slate-900">
       <h3 id={`${id}-heading`} className="text-lg font-semibold">
         Clicks calculator
       </h3>
       <p className="mt-2 text-base leading-7 text-slate-800">
-        Worked example: you measure {formatCm(defaultCurrentCm)} cm and the target is{" "}
-        {formatCm(defaultTargetCm)} cm. The difference is {formatCm(exampleDifferenceCm)} cm, and{" "}
-        {formatCm(exampleDifferenceCm)} ÷ {formatCm(defaultClickCm)} = {formatCm(exampleRatio)}
+        Worked example: you measure {formatCm(defaultCurrentCm)} cm and the target is {formatCm(defaultTargetCm)} cm. The difference is{" "}
+        {formatCm(exampleDifferenceCm)} cm, and {formatCm(exampleDifferenceCm)} ÷ {formatCm(defaultClickCm)} = {formatCm(exampleRatio)}
         {exampleRatio === example.clicks ? "" : `, nearest whole number ${example.clicks}`}. So:{" "}
         {describeClicks(example, defaultClickCm).join(" ")}
       </p>
 
-      <form
-        className="mt-4 grid gap-4 sm:grid-cols-3"
-        onSubmit={(event) => event.preventDefault()}
-        noValidate
-      >
+      <form className="mt-4 grid gap-4 sm:grid-cols-3" onSubmit={(event) => event.preventDefault()} noValidate>
         {fields.map((field) => {
           const inputId = `${id}-${field.name}`;
           const error = outcome.ok ? undefined : outcome.errors[field.name];
@@ -106,14 +89,11 @@ export function ClicksCalculator({
         ) : (
           <p>Fix the number marked “Check this” above to see the clicks.</p>
         )}
-        <p className="mt-1 text-sm text-slate-700">
-          Then seat the collar in its click, tighten it and measure the inboard again.
-        </p>
+        <p className="mt-1 text-sm text-slate-700">Then seat the collar in its click, tighten it and measure the inboard again.</p>
       </div>
       <noscript>
         <p className="mt-3 text-sm text-slate-700">
-          The calculator needs JavaScript to try your own numbers. The worked example above shows the same
-          steps.
+          The calculator needs JavaScript to try your own numbers. The worked example above shows the same steps.
         </p>
       </noscript>
     </section>

@@ -5,7 +5,10 @@ import { inboardClicks, type InboardClicks } from "@/lib/rigging/adjust";
  * ("287 cm", "287cm"). Null if not a number, and for any other unit ("2870 mm"): no guessing at units.
  */
 export function parseCmInput(text: string): number | null {
-  const normalised = text.trim().replace(/\s*cm$/i, "").replace(",", ".");
+  const normalised = text
+    .trim()
+    .replace(/\s*cm$/i, "")
+    .replace(",", ".");
   if (!/^(\d+(\.\d*)?|\.\d+)$/.test(normalised)) return null;
   const value = Number(normalised);
   return Number.isFinite(value) ? value : null;
@@ -55,13 +58,11 @@ const CLICK_MAX_CM = 2;
 
 export type ClicksField = "current" | "target" | "click";
 export type ClicksOutcome =
-  | { ok: true; result: InboardClicks; clickCm: number }
-  | { ok: false; errors: Partial<Record<ClicksField, string>> };
+  { ok: true; result: InboardClicks; clickCm: number } | { ok: false; errors: Partial<Record<ClicksField, string>> };
 
 function readInboard(text: string, what: string): { value: number } | { error: string } {
   const value = parseCmInput(text);
-  if (value === null)
-    return { error: `Enter the ${what} as a number of centimetres, for example 88 or 87.5.` };
+  if (value === null) return { error: `Enter the ${what} as a number of centimetres, for example 88 or 87.5.` };
   if (value < INBOARD_MIN_CM || value > INBOARD_MAX_CM) {
     return {
       error: `An inboard of ${formatCm(value)} cm is unlikely: inboards are between ${INBOARD_MIN_CM} and ${INBOARD_MAX_CM} cm. Measure again.`,
@@ -71,11 +72,7 @@ function readInboard(text: string, what: string): { value: number } | { error: s
 }
 
 /** Checks the calculator's three typed values and, when all are sensible, computes the clicks. */
-export function evaluateClicksInput(
-  currentText: string,
-  targetText: string,
-  clickText: string,
-): ClicksOutcome {
+export function evaluateClicksInput(currentText: string, targetText: string, clickText: string): ClicksOutcome {
   const current = readInboard(currentText, "inboard you measured");
   const target = readInboard(targetText, "target inboard");
   const clickCm = parseCmInput(clickText);

@@ -17,10 +17,7 @@ export interface OarDiagramProps {
   caption?: string;
 }
 
-const TYPICAL: Record<
-  OarKind,
-  { lengthCm: number; inboardCm: number; gripUnits: number; bladeUnits: number }
-> = {
+const TYPICAL: Record<OarKind, { lengthCm: number; inboardCm: number; gripUnits: number; bladeUnits: number }> = {
   // Typical settings for the drawing only; a club's own numbers come from its rigging sheet.
   scull: { lengthCm: 288, inboardCm: 88, gripUnits: 36, bladeUnits: 62 },
   sweep: { lengthCm: 374, inboardCm: 116, gripUnits: 60, bladeUnits: 70 },
@@ -35,41 +32,15 @@ const Y_OAR = 100;
 const Y_INNER_DIMENSIONS = 174;
 const Y_OVERALL_DIMENSION = 222;
 
-function Arrow({
-  x1,
-  x2,
-  y,
-  label,
-  emphasised,
-}: {
-  x1: number;
-  x2: number;
-  y: number;
-  label: string;
-  emphasised: boolean;
-}) {
+function Arrow({ x1, x2, y, label, emphasised }: { x1: number; x2: number; y: number; label: string; emphasised: boolean }) {
   const head = emphasised ? 8 : 6;
   const half = emphasised ? 4.5 : 3.5;
   return (
     <g className={emphasised ? "text-river-700" : "text-slate-600"}>
-      <line
-        x1={x1 + head}
-        x2={x2 - head}
-        y1={y}
-        y2={y}
-        stroke="currentColor"
-        strokeWidth={emphasised ? 3 : 1.5}
-      />
+      <line x1={x1 + head} x2={x2 - head} y1={y} y2={y} stroke="currentColor" strokeWidth={emphasised ? 3 : 1.5} />
       <polygon points={`${x1},${y} ${x1 + head},${y - half} ${x1 + head},${y + half}`} fill="currentColor" />
       <polygon points={`${x2},${y} ${x2 - head},${y - half} ${x2 - head},${y + half}`} fill="currentColor" />
-      <text
-        x={(x1 + x2) / 2}
-        y={y - 8}
-        textAnchor="middle"
-        fontSize={14}
-        fontWeight={emphasised ? 700 : 500}
-        fill="currentColor"
-      >
+      <text x={(x1 + x2) / 2} y={y - 8} textAnchor="middle" fontSize={14} fontWeight={emphasised ? 700 : 500} fill="currentColor">
         {label}
       </text>
     </g>
@@ -87,9 +58,7 @@ export function OarDiagram({ kind, highlight, lengthCm, inboardCm, caption }: Oa
   const length = lengthCm ?? typical.lengthCm;
   const inboard = inboardCm ?? typical.inboardCm;
   if (!(length > 0) || !(inboard > 0) || inboard >= length) {
-    throw new Error(
-      `OarDiagram: inboard (${inboard}) must be positive and shorter than the length (${length})`,
-    );
+    throw new Error(`OarDiagram: inboard (${inboard}) must be positive and shorter than the length (${length})`);
   }
   const outboard = outboardCm(length, inboard);
 
@@ -118,8 +87,7 @@ export function OarDiagram({ kind, highlight, lengthCm, inboardCm, caption }: Oa
     "Z",
   ].join(" ");
 
-  const shadeX =
-    highlight === "inboard" ? X_HANDLE_END : highlight === "outboard" ? xCollarFace : X_HANDLE_END;
+  const shadeX = highlight === "inboard" ? X_HANDLE_END : highlight === "outboard" ? xCollarFace : X_HANDLE_END;
   const shadeWidth =
     highlight === "inboard"
       ? xCollarFace - X_HANDLE_END

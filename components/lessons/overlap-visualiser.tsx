@@ -109,11 +109,7 @@ function NumberField({
 }
 
 /** Shows a pair of sculls crossing over the boat's centre line and the overlap a span and inboard give. */
-export function OverlapVisualiser({
-  defaultSpanCm = 159,
-  defaultInboardCm = 88,
-  halfSwivelCm = 2,
-}: OverlapVisualiserProps) {
+export function OverlapVisualiser({ defaultSpanCm = 159, defaultInboardCm = 88, halfSwivelCm = 2 }: OverlapVisualiserProps) {
   const id = useId();
   const hydrated = useHydrated();
   const [values, setValues] = useState({ span: defaultSpanCm, inboard: defaultInboardCm });
@@ -170,16 +166,12 @@ export function OverlapVisualiser({
   const descId = `${id}-desc`;
 
   return (
-    <section
-      aria-labelledby={`${id}-heading`}
-      className="my-6 rounded-lg border border-slate-300 bg-white p-4 text-slate-900"
-    >
+    <section aria-labelledby={`${id}-heading`} className="my-6 rounded-lg border border-slate-300 bg-white p-4 text-slate-900">
       <h3 id={`${id}-heading`} className="text-lg font-semibold">
         Span and overlap
       </h3>
       <p className="mt-2 text-base leading-7 text-slate-800">
-        Seen from above with the sculls square to the boat. Change the span or the inboard and watch where the
-        handle ends finish.
+        Seen from above with the sculls square to the boat. Change the span or the inboard and watch where the handle ends finish.
       </p>
 
       <div className="mt-4 grid gap-4 sm:grid-cols-2">
@@ -224,15 +216,7 @@ export function OverlapVisualiser({
 
         <path d={hullPath()} className="fill-slate-100 stroke-slate-400" strokeWidth={1.5} />
         <g className="text-slate-600">
-          <line
-            x1={CENTRE_X}
-            x2={CENTRE_X}
-            y1={6}
-            y2={214}
-            stroke="currentColor"
-            strokeWidth={1.5}
-            strokeDasharray="6 4"
-          />
+          <line x1={CENTRE_X} x2={CENTRE_X} y1={6} y2={214} stroke="currentColor" strokeWidth={1.5} strokeDasharray="6 4" />
           <text x={CENTRE_X + 6} y={16} fontSize={13} fill="currentColor" {...HALO}>
             centre line
           </text>
@@ -240,22 +224,8 @@ export function OverlapVisualiser({
 
         {/* Riggers, swivels and pins */}
         <g className="text-slate-500">
-          <line
-            x1={CENTRE_X - HULL_HALF_WIDTH}
-            x2={xLeftPin}
-            y1={Y_RIGGER}
-            y2={Y_RIGGER}
-            stroke="currentColor"
-            strokeWidth={2.5}
-          />
-          <line
-            x1={CENTRE_X + HULL_HALF_WIDTH}
-            x2={xRightPin}
-            y1={Y_RIGGER}
-            y2={Y_RIGGER}
-            stroke="currentColor"
-            strokeWidth={2.5}
-          />
+          <line x1={CENTRE_X - HULL_HALF_WIDTH} x2={xLeftPin} y1={Y_RIGGER} y2={Y_RIGGER} stroke="currentColor" strokeWidth={2.5} />
+          <line x1={CENTRE_X + HULL_HALF_WIDTH} x2={xRightPin} y1={Y_RIGGER} y2={Y_RIGGER} stroke="currentColor" strokeWidth={2.5} />
           {[xLeftPin, xRightPin].map((x) => (
             <g key={x}>
               <rect
@@ -280,14 +250,7 @@ export function OverlapVisualiser({
 
         {/* The sculls: shafts run off the picture towards the blades; handles drawn thicker. */}
         <g className="text-slate-800">
-          <line
-            x1={0}
-            x2={xLeftHandleEnd - grip}
-            y1={Y_LEFT_SCULL}
-            y2={Y_LEFT_SCULL}
-            stroke="currentColor"
-            strokeWidth={4}
-          />
+          <line x1={0} x2={xLeftHandleEnd - grip} y1={Y_LEFT_SCULL} y2={Y_LEFT_SCULL} stroke="currentColor" strokeWidth={4} />
           <line
             x1={xLeftHandleEnd - grip}
             x2={xLeftHandleEnd}
@@ -297,14 +260,7 @@ export function OverlapVisualiser({
             strokeWidth={9}
             strokeLinecap="round"
           />
-          <line
-            x1={WIDTH}
-            x2={xRightHandleEnd + grip}
-            y1={Y_RIGHT_SCULL}
-            y2={Y_RIGHT_SCULL}
-            stroke="currentColor"
-            strokeWidth={4}
-          />
+          <line x1={WIDTH} x2={xRightHandleEnd + grip} y1={Y_RIGHT_SCULL} y2={Y_RIGHT_SCULL} stroke="currentColor" strokeWidth={4} />
           <line
             x1={xRightHandleEnd + grip}
             x2={xRightHandleEnd}
@@ -334,41 +290,16 @@ export function OverlapVisualiser({
             stroke="currentColor"
             strokeDasharray="3 3"
           />
-          <line
-            x1={bracketFrom}
-            x2={bracketTo}
-            y1={Y_OVERLAP}
-            y2={Y_OVERLAP}
-            stroke="currentColor"
-            strokeWidth={3}
-          />
-          <text
-            x={CENTRE_X}
-            y={Y_OVERLAP + 24}
-            textAnchor="middle"
-            fontSize={15}
-            fontWeight={700}
-            fill="currentColor"
-            {...HALO}
-          >
+          <line x1={bracketFrom} x2={bracketTo} y1={Y_OVERLAP} y2={Y_OVERLAP} stroke="currentColor" strokeWidth={3} />
+          <text x={CENTRE_X} y={Y_OVERLAP + 24} textAnchor="middle" fontSize={15} fontWeight={700} fill="currentColor" {...HALO}>
             {overlapLabel}
           </text>
         </g>
 
         {/* Span: pin to pin */}
         <g className="text-slate-700">
-          <line
-            x1={xLeftPin}
-            x2={xRightPin}
-            y1={Y_SPAN}
-            y2={Y_SPAN}
-            stroke="currentColor"
-            strokeWidth={1.5}
-          />
-          <polygon
-            points={`${xLeftPin},${Y_SPAN} ${xLeftPin + 7},${Y_SPAN - 3.5} ${xLeftPin + 7},${Y_SPAN + 3.5}`}
-            fill="currentColor"
-          />
+          <line x1={xLeftPin} x2={xRightPin} y1={Y_SPAN} y2={Y_SPAN} stroke="currentColor" strokeWidth={1.5} />
+          <polygon points={`${xLeftPin},${Y_SPAN} ${xLeftPin + 7},${Y_SPAN - 3.5} ${xLeftPin + 7},${Y_SPAN + 3.5}`} fill="currentColor" />
           <polygon
             points={`${xRightPin},${Y_SPAN} ${xRightPin - 7},${Y_SPAN - 3.5} ${xRightPin - 7},${Y_SPAN + 3.5}`}
             fill="currentColor"
@@ -393,18 +324,18 @@ export function OverlapVisualiser({
               : ` (the handle ends miss each other by ${formatCm(-protocolOverlap)} cm)`}
         </p>
         <p className="mt-1">
-          Convention: {convention}. Here: 2 × ({formatCm(inboard)} + {formatCm(halfSwivelCm)}) −{" "}
-          {formatCm(span)} = {formatSignedCm(protocolOverlap)} cm.
+          Convention: {convention}. Here: 2 × ({formatCm(inboard)} + {formatCm(halfSwivelCm)}) − {formatCm(span)} ={" "}
+          {formatSignedCm(protocolOverlap)} cm.
         </p>
         <p className="mt-1">
-          Simple figure (no swivel): 2 × {formatCm(inboard)} − {formatCm(span)} ={" "}
-          {formatSignedCm(simpleOverlap)} cm. Always say which one you mean.
+          Simple figure (no swivel): 2 × {formatCm(inboard)} − {formatCm(span)} = {formatSignedCm(simpleOverlap)} cm. Always say which one
+          you mean.
         </p>
       </div>
       <noscript>
         <p className="mt-3 text-sm text-slate-700">
-          The sliders need JavaScript. The picture and numbers above show a span of {formatCm(defaultSpanCm)}{" "}
-          cm with an inboard of {formatCm(defaultInboardCm)} cm.
+          The sliders need JavaScript. The picture and numbers above show a span of {formatCm(defaultSpanCm)} cm with an inboard of{" "}
+          {formatCm(defaultInboardCm)} cm.
         </p>
       </noscript>
     </section>

@@ -3,7 +3,11 @@ import { cleaningCautions } from "@/lib/care/digest";
 /** The grip-cleaning cautions, short, with the usual deference to the coach and local rules. */
 export function CleaningCautions() {
   return (
-    <section aria-labelledby="cautions-heading" className="rounded-md border-l-4 border-signal-600 bg-signal-100 p-3 text-slate-900" data-testid="cleaning-cautions">
+    <section
+      aria-labelledby="cautions-heading"
+      className="rounded-md border-l-4 border-signal-600 bg-signal-100 p-3 text-slate-900"
+      data-testid="cleaning-cautions"
+    >
       <h2 id="cautions-heading" className="font-semibold">
         <span aria-hidden="true">! </span>Cleaning safely
       </h2>

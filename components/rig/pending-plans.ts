@@ -61,11 +61,7 @@ function removePending(clientId: string): void {
   write(parsePending(pendingSnapshot()).filter((item) => item.payload.clientId !== clientId));
 }
 
-export type SendOutcome =
-  | { kind: "saved" }
-  | { kind: "unreachable" }
-  | { kind: "signed-out" }
-  | { kind: "refused"; message: string };
+export type SendOutcome = { kind: "saved" } | { kind: "unreachable" } | { kind: "signed-out" } | { kind: "refused"; message: string };
 
 /** Sends one plan to the server; "unreachable" covers no network and server errors (worth trying again). */
 export async function sendPlan(payload: SavedRigPlanInput): Promise<SendOutcome> {

@@ -33,7 +33,10 @@ export function PlanStepsView({ steps, warnings, source }: PlanStepsViewProps) {
         {steps.map((step, index) => (
           <li key={step.key} data-testid={`step-${step.key}`} className="rounded-lg bg-white p-4 shadow-sm">
             <h3 className="font-semibold text-river-900">
-              <span className="mr-2 inline-flex h-7 w-7 items-center justify-center rounded-full bg-river-700 text-sm text-white" aria-hidden="true">
+              <span
+                className="mr-2 inline-flex h-7 w-7 items-center justify-center rounded-full bg-river-700 text-sm text-white"
+                aria-hidden="true"
+              >
                 {index + 1}
               </span>
               <span className="sr-only">Step {index + 1}: </span>

@@ -48,7 +48,9 @@ function handleLines(plan: RigPlanResponse, context: PlanContext): string[] {
     `Measure from the blade tip to the end of the handle: it should read ${formatCm(context.target.lengthCm)} cm.`,
   ];
   const startCm = inboardAfterLengthChangeCm(context.measured.inboardCm, plan.length.changeCm);
-  lines.push(`The collar has not moved, so the inboard now reads ${formatCm(startCm)} cm (it was ${formatCm(context.measured.inboardCm)} cm).`);
+  lines.push(
+    `The collar has not moved, so the inboard now reads ${formatCm(startCm)} cm (it was ${formatCm(context.measured.inboardCm)} cm).`,
+  );
   return lines;
 }
 

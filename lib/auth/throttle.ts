@@ -54,7 +54,10 @@ export function clientAddress(headers: Headers): string {
   const forwarded = (headers.get("x-forwarded-for") ?? "").slice(0, 512);
   const hops = trustedProxyCount();
   if (hops === 0) return forwarded.trim().slice(0, 100) || "unknown";
-  const entries = forwarded.split(",").map((entry) => entry.trim()).filter(Boolean);
+  const entries = forwarded
+    .split(",")
+    .map((entry) => entry.trim())
+    .filter(Boolean);
   return entries[entries.length - hops] ?? entries[0] ?? "unknown";
 }
 

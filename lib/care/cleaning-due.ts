@@ -27,11 +27,7 @@ export interface CleaningDueState {
 export const weeklyCleanDays = 7;
 
 /** Rules checked in this order when two fall due on the same day. */
-const reasonPriority: readonly Exclude<CleaningDueReason, "never-cleaned" | "ok">[] = [
-  "over-7-days",
-  "race-day-next",
-  "humid-spell",
-];
+const reasonPriority: readonly Exclude<CleaningDueReason, "never-cleaned" | "ok">[] = ["over-7-days", "race-day-next", "humid-spell"];
 
 /**
  * Handle cleaning rule (common practice: at least weekly, before every race, daily in hot humid
@@ -62,8 +58,7 @@ export function cleaningDueState(input: CleaningDueInput): CleaningDueState {
 
   const first = candidates.reduce((best, candidate) =>
     candidate.day < best.day ||
-    (candidate.day === best.day &&
-      reasonPriority.indexOf(candidate.reason) < reasonPriority.indexOf(best.reason))
+    (candidate.day === best.day && reasonPriority.indexOf(candidate.reason) < reasonPriority.indexOf(best.reason))
       ? candidate
       : best,
   );

@@ -17,8 +17,7 @@ export interface BadgeSource {
 }
 
 const criteria = {
-  module:
-    "Pass the module's quiz, then show a coach of the club, hands-on, every item of the module's practical checklist.",
+  module: "Pass the module's quiz, then show a coach of the club, hands-on, every item of the module's practical checklist.",
   clearance:
     "Hold a current pass (quiz and coach's practical sign-off) of every module the club requires before an athlete rigs without a coach.",
 };
@@ -31,10 +30,7 @@ const criteria = {
 export function openBadgeCredential(source: BadgeSource, baseUrl: string): Record<string, unknown> {
   const achievementKey = source.kind === "module" ? `module:${source.moduleSlug ?? "unknown"}` : "clearance";
   return {
-    "@context": [
-      "https://www.w3.org/ns/credentials/v2",
-      "https://purl.imsglobal.org/spec/ob/v3p0/context-3.0.3.json",
-    ],
+    "@context": ["https://www.w3.org/ns/credentials/v2", "https://purl.imsglobal.org/spec/ob/v3p0/context-3.0.3.json"],
     id: `${baseUrl}/api/verify/${source.code}`,
     type: ["VerifiableCredential", "OpenBadgeCredential"],
     name: source.title,
@@ -46,9 +42,7 @@ export function openBadgeCredential(source: BadgeSource, baseUrl: string): Recor
     validUntil: midnightInZone(source.expiresOn, source.timeZone),
     credentialSubject: {
       type: ["AchievementSubject"],
-      identifier: [
-        { type: "IdentityObject", identityType: "name", hashed: false, identityHash: source.athleteName },
-      ],
+      identifier: [{ type: "IdentityObject", identityType: "name", hashed: false, identityHash: source.athleteName }],
       achievement: {
         id: `urn:slipway:achievement:${source.clubSlug}:${achievementKey}`,
         type: ["Achievement"],

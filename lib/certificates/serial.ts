@@ -21,8 +21,7 @@ export function nextSerialNumber(highestSoFar: number | null): number {
 
 /** PREFIX-YEAR-NNNN; numbers past 9999 simply grow a digit, so the order still reads right. */
 export function formatSerial(prefix: string, year: number, serialNumber: number): string {
-  if (!(Number.isInteger(serialNumber) && serialNumber >= 1))
-    throw new RangeError(`serial number must be 1 or more, got ${serialNumber}`);
+  if (!(Number.isInteger(serialNumber) && serialNumber >= 1)) throw new RangeError(`serial number must be 1 or more, got ${serialNumber}`);
   return `${prefix}-${year}-${String(serialNumber).padStart(4, "0")}`;
 }
 

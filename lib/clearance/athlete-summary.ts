@@ -76,10 +76,7 @@ export function athleteStanding(
     const mine = facts.assessments.filter((assessment) => assessment.moduleSlug === slug);
     const openRequest = mine.some((assessment) => assessment.status === "waiting");
     const decided = mine
-      .filter(
-        (assessment) =>
-          (assessment.status === "passed" || assessment.status === "not-yet") && assessment.assessedAt,
-      )
+      .filter((assessment) => (assessment.status === "passed" || assessment.status === "not-yet") && assessment.assessedAt)
       .sort((a, b) => b.assessedAt!.getTime() - a.assessedAt!.getTime())[0];
     const latestDecision = decided
       ? {
@@ -127,7 +124,9 @@ export function notClearedText(modules: readonly ModuleStanding[], requiredModul
   const parts: string[] = [];
   if (quizToPass > 0) parts.push(`${quizToPass} ${quizToPass === 1 ? "needs its" : "need their"} quiz passed, then a practical sign-off`);
   if (quizPassed > 0) {
-    parts.push(`${quizPassed} ${quizPassed === 1 ? "has its quiz passed and needs" : "have their quiz passed and need"} a coach's practical sign-off`);
+    parts.push(
+      `${quizPassed} ${quizPassed === 1 ? "has its quiz passed and needs" : "have their quiz passed and need"} a coach's practical sign-off`,
+    );
   }
   const until = "Until then, rig with a coach beside you.";
   if (remaining.length === 0) return until;

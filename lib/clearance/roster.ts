@@ -39,12 +39,7 @@ export const rosterFilterLabels: Record<RosterFilter, string> = {
 };
 
 /** Whether a row passes the roster's filter and name search (case- and accent-insensitive). */
-export function rosterRowMatches(
-  row: RosterRow,
-  filter: RosterFilter,
-  search: string,
-  today: string,
-): boolean {
+export function rosterRowMatches(row: RosterRow, filter: RosterFilter, search: string, today: string): boolean {
   const needle = fold(search.trim());
   if (needle && !fold(row.name).includes(needle) && !fold(row.email).includes(needle)) return false;
   switch (filter) {

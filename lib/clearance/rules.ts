@@ -109,14 +109,7 @@ export const clearanceStateLabels: Record<ClearanceState, { label: string; icon:
 
 /** Where one athlete stands with one module, quiz and practical together. */
 export type ModuleStatus =
-  | "not-started"
-  | "lesson-read"
-  | "quiz-failed"
-  | "ready-for-sign-off"
-  | "waiting-for-sign-off"
-  | "not-yet"
-  | "passed"
-  | "expired";
+  "not-started" | "lesson-read" | "quiz-failed" | "ready-for-sign-off" | "waiting-for-sign-off" | "not-yet" | "passed" | "expired";
 
 export const moduleStatusLabels: Record<ModuleStatus, { label: string; icon: string }> = {
   "not-started": { label: "Not started", icon: "–" },
@@ -143,20 +136,11 @@ export interface ModuleStatusInput {
  * Otherwise: waiting when a sign-off is asked for, "not yet" after the coach's latest verdict, expired
  * when an old pass ran out, else the quiz stage.
  */
-export function moduleStatus({
-  quizStage,
-  latestPass,
-  openRequest,
-  latestDecision,
-  today,
-}: ModuleStatusInput): ModuleStatus {
+export function moduleStatus({ quizStage, latestPass, openRequest, latestDecision, today }: ModuleStatusInput): ModuleStatus {
   const quizPassed = quizStage === "quiz-passed";
   if (quizPassed && latestPass && isPassCurrent(latestPass, today)) return "passed";
   if (openRequest) return "waiting-for-sign-off";
-  if (
-    latestDecision?.outcome === "not-yet" &&
-    (!latestPass || latestDecision.decidedOn >= latestPass.signedOffOn)
-  ) {
+  if (latestDecision?.outcome === "not-yet" && (!latestPass || latestDecision.decidedOn >= latestPass.signedOffOn)) {
     return "not-yet";
   }
   if (latestPass && quizPassed) return "expired";
@@ -174,19 +158,10 @@ export interface SignOffRequestCheck {
 }
 
 /** Why the athlete may not ask for a sign-off now, or null when they may. */
-export function signOffRequestProblem({
-  quizPassed,
-  openRequest,
-  latestPass,
-  today,
-}: SignOffRequestCheck): string | null {
+export function signOffRequestProblem({ quizPassed, openRequest, latestPass, today }: SignOffRequestCheck): string | null {
   if (!quizPassed) return "Pass the module's quiz first, then ask a coach to watch you.";
   if (openRequest) return "You have already asked; a coach will watch you soon.";
-  if (
-    latestPass &&
-    isPassCurrent(latestPass, today) &&
-    daysUntil(today, latestPass.expiresOn) > renewalWindowDays
-  ) {
+  if (latestPass && isPassCurrent(latestPass, today) && daysUntil(today, latestPass.expiresOn) > renewalWindowDays) {
     return "You have passed this module; you can renew it in the last 30 days before it expires.";
   }
   return null;

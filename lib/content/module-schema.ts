@@ -4,9 +4,7 @@ import { quizRecipeSchema } from "@/lib/quiz/recipe";
 const KEBAB_CASE = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
 
 /** A kebab-case identifier: lower-case letters and digits joined by single hyphens. */
-export const kebabCaseSchema = z
-  .string()
-  .regex(KEBAB_CASE, { error: "must be kebab-case (lower-case letters, digits, single hyphens)" });
+export const kebabCaseSchema = z.string().regex(KEBAB_CASE, { error: "must be kebab-case (lower-case letters, digits, single hyphens)" });
 
 /** One thing a coach watches the athlete do at the practical sign-off. */
 export const checklistItemSchema = z.strictObject({

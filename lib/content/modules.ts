@@ -1,12 +1,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import matter from "gray-matter";
-import {
-  describeIssues,
-  kebabCaseSchema,
-  moduleFrontmatterSchema,
-  type ModuleMeta,
-} from "@/lib/content/module-schema";
+import { describeIssues, kebabCaseSchema, moduleFrontmatterSchema, type ModuleMeta } from "@/lib/content/module-schema";
 
 /** A lesson that failed validation; the message names the file and, where there is one, the field. */
 export class LessonContentError extends Error {
@@ -55,22 +50,14 @@ export function parseModuleFile(fileName: string, raw: string): LessonModule {
 
   const expectedSlug = fileName.endsWith(MDX_EXTENSION) ? fileName.slice(0, -MDX_EXTENSION.length) : fileName;
   if (meta.slug !== expectedSlug) {
-    throw new LessonContentError(
-      fileName,
-      "slug",
-      `invalid frontmatter: slug: "${meta.slug}" must equal the file name "${expectedSlug}"`,
-    );
+    throw new LessonContentError(fileName, "slug", `invalid frontmatter: slug: "${meta.slug}" must equal the file name "${expectedSlug}"`);
   }
   if (body.trim().length === 0) {
     throw new LessonContentError(fileName, null, "the lesson body is empty");
   }
   // The lesson page renders the title as the page's only h1, so lessons start at h2.
   if (/^#\s/m.test(body)) {
-    throw new LessonContentError(
-      fileName,
-      null,
-      "uses a level-1 heading (#); lessons start at ## because the page supplies the h1",
-    );
+    throw new LessonContentError(fileName, null, "uses a level-1 heading (#); lessons start at ## because the page supplies the h1");
   }
   return { meta, source: body };
 }
@@ -134,10 +121,7 @@ function readCatalogue(): ModuleCatalogue {
     .filter((name) => name.endsWith(MDX_EXTENSION))
     .sort();
   const lessons = fileNames.map((fileName) =>
-    parseModuleFile(
-      fileName,
-      fs.readFileSync(path.join(process.cwd(), "content", "modules", fileName), "utf8"),
-    ),
+    parseModuleFile(fileName, fs.readFileSync(path.join(process.cwd(), "content", "modules", fileName), "utf8")),
   );
   const sorted = checkModuleSet(lessons);
   return {

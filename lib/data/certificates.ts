@@ -5,13 +5,7 @@ import { databaseReady } from "@/lib/data/database";
 import { recordAudit } from "@/lib/data/audit";
 import { readClubLogo } from "@/lib/data/club-logo";
 import { clubToday, settingsForClub, todayOfClub } from "@/lib/data/club-settings";
-import {
-  assertAllowed,
-  assertVisible,
-  canManageClub,
-  canViewAthlete,
-  type Actor,
-} from "@/lib/auth/permissions";
+import { assertAllowed, assertVisible, canManageClub, canViewAthlete, type Actor } from "@/lib/auth/permissions";
 import { ConflictError } from "@/lib/http/errors";
 import { publicBaseUrl } from "@/lib/env";
 import { getModule } from "@/lib/content/modules";
@@ -94,21 +88,14 @@ export async function certificatesOfAthlete(actor: Actor, athleteId: number): Pr
       ["serialNumber", "DESC"],
     ],
   });
-  const [suspended, { timeZone }] = await Promise.all([
-    suspendedAthletes([athleteId]),
-    settingsForClub(athlete.clubId),
-  ]);
+  const [suspended, { timeZone }] = await Promise.all([suspendedAthletes([athleteId]), settingsForClub(athlete.clubId)]);
   const today = isoDateOf(new Date(), timeZone);
   return certificates.map((certificate) => summarise(certificate, today, suspended.has(athleteId)));
 }
 
 /** Internal: renders a stored certificate to PDF (called after the issuing transaction has committed). */
 export async function renderStoredCertificate(certificate: Certificate): Promise<Uint8Array> {
-  const [club, logo, fonts] = await Promise.all([
-    Club.findByPk(certificate.clubId),
-    readClubLogo(certificate.clubId),
-    pdfFonts(),
-  ]);
+  const [club, logo, fonts] = await Promise.all([Club.findByPk(certificate.clubId), readClubLogo(certificate.clubId), pdfFonts()]);
   // A PDF made after expiry (from the club's day on), or of a clearance while a coach's suspension
   // stands, says so on the page.
   const suspended = certificate.kind === "clearance" && (await suspendedAthletes([certificate.athleteId])).has(certificate.athleteId);
@@ -119,9 +106,7 @@ export async function renderStoredCertificate(certificate: Certificate): Promise
   );
   let lines: string[];
   if (certificate.kind === "module") {
-    const assessment = certificate.assessmentId
-      ? await PracticalAssessment.findByPk(certificate.assessmentId)
-      : null;
+    const assessment = certificate.assessmentId ? await PracticalAssessment.findByPk(certificate.assessmentId) : null;
     const checklist = assessment?.checklist ?? getModule(certificate.moduleSlug ?? "")?.meta.checklist ?? [];
     lines = checklist.map((item) => item.label);
   } else {
@@ -151,10 +136,7 @@ export function certificateFileName(certificate: { serial: string }): string {
 }
 
 /** The PDF of one certificate, for its athlete and for coaches and admins of their club (404 otherwise). */
-export async function certificatePdfFor(
-  actor: Actor,
-  certificateId: string,
-): Promise<{ bytes: Uint8Array; fileName: string }> {
+export async function certificatePdfFor(actor: Actor, certificateId: string): Promise<{ bytes: Uint8Array; fileName: string }> {
   await databaseReady();
   const certificate = await Certificate.findByPk(certificateId);
   const athlete = certificate ? await User.findByPk(certificate.athleteId) : null;
@@ -197,11 +179,7 @@ export async function assertMayRevokeCertificate(actor: Actor, certificateId: st
  * An admin revokes a certificate with a reason (audited). A revoked module certificate no longer counts
  * as a pass, so a current clearance certificate standing on that module is revoked with it.
  */
-export async function revokeCertificate(
-  actor: Actor,
-  certificateId: string,
-  reason: string,
-): Promise<{ revoked: string[] }> {
+export async function revokeCertificate(actor: Actor, certificateId: string, reason: string): Promise<{ revoked: string[] }> {
   await assertMayRevokeCertificate(actor, certificateId);
   const now = new Date();
   // The certificate is of the actor's club (asserted above): its clearances current on the club's day.
@@ -209,8 +187,7 @@ export async function revokeCertificate(
   return writeTransaction(async (transaction) => {
     const certificate = await Certificate.findByPk(certificateId, { transaction });
     if (!certificate) throw new ConflictError("The certificate is gone.");
-    if (certificate.revokedAt)
-      throw new ConflictError(`Certificate ${certificate.serial} is already revoked.`);
+    if (certificate.revokedAt) throw new ConflictError(`Certificate ${certificate.serial} is already revoked.`);
     const revoked = [certificate];
     if (certificate.kind === "module" && certificate.moduleSlug) {
       const clearances = await Certificate.findAll({
@@ -222,17 +199,11 @@ export async function revokeCertificate(
         },
         transaction,
       });
-      revoked.push(
-        ...clearances.filter((clearance) => clearance.coveredModules.includes(certificate.moduleSlug!)),
-      );
+      revoked.push(...clearances.filter((clearance) => clearance.coveredModules.includes(certificate.moduleSlug!)));
     }
     for (const entry of revoked) {
-      const entryReason =
-        entry === certificate ? reason : `Module certificate ${certificate.serial} was revoked: ${reason}`;
-      await entry.update(
-        { revokedAt: now, revokedById: actor.id, revokeReason: entryReason },
-        { transaction },
-      );
+      const entryReason = entry === certificate ? reason : `Module certificate ${certificate.serial} was revoked: ${reason}`;
+      await entry.update({ revokedAt: now, revokedById: actor.id, revokeReason: entryReason }, { transaction });
       await recordAudit(
         {
           clubId: actor.clubId,
@@ -273,10 +244,7 @@ export async function verifyCode(code: string): Promise<PublicVerification | nul
   await databaseReady();
   const certificate = await Certificate.findOne({ where: { verificationCode: code } });
   if (!certificate || certificate.verificationCode !== code) return null;
-  const [suspended, club] = await Promise.all([
-    suspendedAthletes([certificate.athleteId]),
-    Club.findByPk(certificate.clubId),
-  ]);
+  const [suspended, club] = await Promise.all([suspendedAthletes([certificate.athleteId]), Club.findByPk(certificate.clubId)]);
   // The certificate's own club decides the day, whoever asks and from wherever.
   const { timeZone } = readClubSettings(club?.settings);
   const today = isoDateOf(new Date(), timeZone);

@@ -4,22 +4,10 @@ import { listModules } from "@/lib/content/modules";
 import { rawBoolean, rawDate } from "@/lib/data/sql";
 import type { ModuleMeta } from "@/lib/content/module-schema";
 import { readClubSettings, type ClubSettings } from "@/lib/validations/club-settings";
-import {
-  athleteStanding,
-  type AssessmentFact,
-  type AthleteFacts,
-  type AthleteStanding,
-} from "@/lib/clearance/athlete-summary";
+import { athleteStanding, type AssessmentFact, type AthleteFacts, type AthleteStanding } from "@/lib/clearance/athlete-summary";
 import type { AttemptSummary } from "@/lib/learning/progress";
 import type { ModulePass } from "@/lib/clearance/rules";
-import {
-  Certificate,
-  ClearanceSuspension,
-  Club,
-  LessonRead,
-  PracticalAssessment,
-  QuizAttempt,
-} from "@/models";
+import { Certificate, ClearanceSuspension, Club, LessonRead, PracticalAssessment, QuizAttempt } from "@/models";
 
 interface CollectedFacts extends AthleteFacts {
   lessonReads: string[];
@@ -32,10 +20,7 @@ interface CollectedFacts extends AthleteFacts {
  * Internal to lib/data: loads what the clearance rules need for many athletes in five queries. Callers
  * have already checked permission. Pass the write transaction when inside one, so its writes are seen.
  */
-export async function factsForAthletes(
-  athleteIds: readonly number[],
-  transaction?: Transaction,
-): Promise<Map<number, AthleteFacts>> {
+export async function factsForAthletes(athleteIds: readonly number[], transaction?: Transaction): Promise<Map<number, AthleteFacts>> {
   const ids = [...new Set(athleteIds)];
   const facts = new Map<number, CollectedFacts>(
     ids.map((id) => [id, { lessonReads: [], attempts: [], assessments: [], passes: [], suspension: null }]),
@@ -113,10 +98,7 @@ export interface ClubCertificationContext {
 }
 
 /** The club, its settings and the course's modules with the ones required for clearance. */
-export async function clubCertificationContext(
-  clubId: number,
-  transaction?: Transaction,
-): Promise<ClubCertificationContext> {
+export async function clubCertificationContext(clubId: number, transaction?: Transaction): Promise<ClubCertificationContext> {
   const club = await Club.findByPk(clubId, { transaction });
   if (!club) throw new Error(`club ${clubId} is missing`);
   const settings = readClubSettings(club.settings);

@@ -105,7 +105,14 @@ export async function sendWeeklyCleaningDigests(now: Date = new Date()): Promise
       await writeTransaction(async (transaction) => {
         await claimed.update({ state: "sent", recipients: mail.recipients.length, sentAt: new Date() }, { transaction });
         await recordAudit(
-          { clubId: club.id, actorId: null, action: "cleaning.digest-sent", subjectType: "club", subjectId: club.id, details: { isoWeek, recipients: mail.recipients.length } },
+          {
+            clubId: club.id,
+            actorId: null,
+            action: "cleaning.digest-sent",
+            subjectType: "club",
+            subjectId: club.id,
+            details: { isoWeek, recipients: mail.recipients.length },
+          },
           transaction,
         );
       });
@@ -156,7 +163,14 @@ export async function sendCleaningDigestNow(actor: Actor, now: Date = new Date()
         );
       }
       await recordAudit(
-        { clubId: club.id, actorId: actor.id, action: "cleaning.digest-sent", subjectType: "club", subjectId: club.id, details: { isoWeek, recipients: mail.recipients.length, manual: true } },
+        {
+          clubId: club.id,
+          actorId: actor.id,
+          action: "cleaning.digest-sent",
+          subjectType: "club",
+          subjectId: club.id,
+          details: { isoWeek, recipients: mail.recipients.length, manual: true },
+        },
         transaction,
       );
     });

@@ -188,7 +188,14 @@ async function updateCalendar(
     // Only these two keys change; every other stored setting is kept as it was.
     await club.update({ settings: { ...club.settings, raceDays, humidSpell: next.humidSpell } }, { transaction });
     await recordAudit(
-      { clubId: actor.clubId, actorId: actor.id, action, subjectType: "club", subjectId: club.id, details: { raceDays, humidSpell: next.humidSpell } },
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action,
+        subjectType: "club",
+        subjectId: club.id,
+        details: { raceDays, humidSpell: next.humidSpell },
+      },
       transaction,
     );
     return { raceDays, humidSpell: next.humidSpell, changed: true };

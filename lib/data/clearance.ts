@@ -51,10 +51,7 @@ export async function clearanceOf(
 async function visibleAthleteForSuspension(actor: Actor, athleteId: number): Promise<User> {
   const athlete = await User.findByPk(athleteId);
   assertVisible(!!athlete && canViewAthlete(actor, athlete));
-  assertAllowed(
-    canSuspendClearance(actor, athlete),
-    "Only a coach of the club can suspend or lift a clearance, never their own.",
-  );
+  assertAllowed(canSuspendClearance(actor, athlete), "Only a coach of the club can suspend or lift a clearance, never their own.");
   return athlete;
 }
 
@@ -153,8 +150,7 @@ async function computeRosterMatrix(actor: Actor, today: string): Promise<RosterM
     }),
   ]);
   const waitingCount = new Map<number, number>();
-  for (const entry of waiting)
-    waitingCount.set(entry.athleteId, (waitingCount.get(entry.athleteId) ?? 0) + 1);
+  for (const entry of waiting) waitingCount.set(entry.athleteId, (waitingCount.get(entry.athleteId) ?? 0) + 1);
   const slugs = context.modules.map((meta) => meta.slug);
   const rows = athletes.map((athlete): RosterRow => {
     const standing = athleteStanding(slugs, context.requiredModules, facts.get(athlete.id)!, {
@@ -283,8 +279,7 @@ export async function athleteRecordFor(actor: Actor, athleteId: number): Promise
     },
     attributes: ["id", "name"],
   });
-  const nameOf = (id: number | null | undefined) =>
-    id ? (people.find((person) => person.id === id)?.name ?? null) : null;
+  const nameOf = (id: number | null | undefined) => (id ? (people.find((person) => person.id === id)?.name ?? null) : null);
   const moduleTitles = Object.fromEntries(context.modules.map((meta) => [meta.slug, meta.title]));
   const titleOf = (slug: string) => moduleTitles[slug] ?? slug;
 

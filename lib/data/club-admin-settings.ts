@@ -39,10 +39,7 @@ export async function clubSettingsForAdmin(actor: Actor): Promise<ClubSettingsPa
  * not know (other features' settings) are kept as stored. Past results are never rewritten: attempts
  * keep their own pass mark and certificates their own dates.
  */
-export async function updateClubSettings(
-  actor: Actor,
-  form: ClubSettingsForm,
-): Promise<{ changed: string[] }> {
+export async function updateClubSettings(actor: Actor, form: ClubSettingsForm): Promise<{ changed: string[] }> {
   await databaseReady();
   assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators change the club's settings.");
   const known = new Set(listModules().map((meta) => meta.slug));

@@ -51,9 +51,7 @@ function isCompletePngLogo(fileName: string, bytes: Uint8Array): boolean {
  * a PNG or JPEG (the type is sniffed from the bytes, whatever the name says), or a PNG that does not
  * decode whole: uploads are checked, but a logo stored before that check could stall every PDF).
  */
-export async function readClubLogo(
-  clubId: number,
-): Promise<{ bytes: Uint8Array; type: ClubLogoType } | null> {
+export async function readClubLogo(clubId: number): Promise<{ bytes: Uint8Array; type: ClubLogoType } | null> {
   await databaseReady();
   const club = await Club.findByPk(clubId, { attributes: ["id", "logoFile"] });
   const fileName = club?.logoFile;

@@ -30,8 +30,7 @@ export async function assertCanAddEvidence(actor: Actor, assessmentId: string): 
   assertAllowed(canSignOff(actor, athlete), "Only a coach of the club can add evidence to a sign-off.");
   if (assessment.status !== "waiting") throw new ConflictError("This sign-off has already been recorded.");
   const count = await EvidencePhoto.count({ where: { assessmentId } });
-  if (count >= maxEvidencePhotos)
-    throw new ConflictError(`A sign-off keeps at most ${maxEvidencePhotos} photos.`);
+  if (count >= maxEvidencePhotos) throw new ConflictError(`A sign-off keeps at most ${maxEvidencePhotos} photos.`);
 }
 
 /**
@@ -54,8 +53,7 @@ export async function addEvidencePhoto(
   try {
     await writeTransaction(async (transaction) => {
       const count = await EvidencePhoto.count({ where: { assessmentId }, transaction });
-      if (count >= maxEvidencePhotos)
-        throw new ConflictError(`A sign-off keeps at most ${maxEvidencePhotos} photos.`);
+      if (count >= maxEvidencePhotos) throw new ConflictError(`A sign-off keeps at most ${maxEvidencePhotos} photos.`);
       await EvidencePhoto.create(
         {
           id,
@@ -87,9 +85,7 @@ export async function readEvidencePhoto(
   const athlete = photo ? await User.findByPk(photo.athleteId) : null;
   assertVisible(!!photo && !!athlete && canViewAthlete(actor, athlete));
   try {
-    const bytes = new Uint8Array(
-      await fs.readFile(path.join(evidenceDir(), path.basename(photo.storedName))),
-    );
+    const bytes = new Uint8Array(await fs.readFile(path.join(evidenceDir(), path.basename(photo.storedName))));
     return {
       bytes,
       mediaType: photo.mediaType,

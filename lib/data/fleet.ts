@@ -112,10 +112,20 @@ export async function listFleet(actor: Actor, options: { includeArchived?: boole
   const visible = links.filter((link) => setIds.has(link.oarSetId));
   return {
     boats: boats
-      .map((boat) => toBoatSummary(boat, visible.filter((link) => link.boatId === boat.id).map((link) => link.oarSetId)))
+      .map((boat) =>
+        toBoatSummary(
+          boat,
+          visible.filter((link) => link.boatId === boat.id).map((link) => link.oarSetId),
+        ),
+      )
       .sort(byName),
     oarSets: oarSets
-      .map((set) => toOarSetSummary(set, visible.filter((link) => link.oarSetId === set.id).map((link) => link.boatId)))
+      .map((set) =>
+        toOarSetSummary(
+          set,
+          visible.filter((link) => link.oarSetId === set.id).map((link) => link.boatId),
+        ),
+      )
       .sort(byName),
   };
 }
@@ -140,7 +150,10 @@ export async function getBoatDetails(actor: Actor, boatId: number): Promise<Boat
       })
     : [];
   return {
-    boat: toBoatSummary(boat, sets.map((set) => set.id)),
+    boat: toBoatSummary(
+      boat,
+      sets.map((set) => set.id),
+    ),
     oarSets: sets.map((set) => toOarSetSummary(set, [boatId])).sort(byName),
     settings: await rigSettingsFor(actor),
   };
@@ -200,7 +213,14 @@ export async function createBoat(actor: Actor, input: BoatInput): Promise<SavedF
     await assertNameFree("boat", actor, input.name, null, transaction);
     const created = await Boat.create({ clubId: actor.clubId, ...boatColumns(input) }, { transaction });
     await recordAudit(
-      { clubId: actor.clubId, actorId: actor.id, action: "boat.created", subjectType: "boat", subjectId: created.id, details: { name: created.name } },
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action: "boat.created",
+        subjectType: "boat",
+        subjectId: created.id,
+        details: { name: created.name },
+      },
       transaction,
     );
     return created;
@@ -225,7 +245,14 @@ export async function updateBoat(actor: Actor, boatId: number, input: BoatInput)
     }
     await existing.update(boatColumns(input), { transaction });
     await recordAudit(
-      { clubId: actor.clubId, actorId: actor.id, action: "boat.updated", subjectType: "boat", subjectId: boatId, details: { name: input.name } },
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action: "boat.updated",
+        subjectType: "boat",
+        subjectId: boatId,
+        details: { name: input.name },
+      },
       transaction,
     );
     return { boat: existing, sets: linked };
@@ -245,7 +272,13 @@ export async function setBoatArchived(actor: Actor, boatId: number, archived: bo
     if (!archived) await assertNameFree("boat", actor, boat.name, boatId, transaction);
     await boat.update({ archivedAt: archived ? new Date() : null }, { transaction });
     await recordAudit(
-      { clubId: actor.clubId, actorId: actor.id, action: archived ? "boat.archived" : "boat.restored", subjectType: "boat", subjectId: boatId },
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action: archived ? "boat.archived" : "boat.restored",
+        subjectType: "boat",
+        subjectId: boatId,
+      },
       transaction,
     );
   });
@@ -295,7 +328,11 @@ async function linkBoats(actor: Actor, set: OarSet, boatIds: number[], transacti
   const removed = [...current].filter((id) => !keep.has(id));
   if (removed.length) await BoatOarSet.destroy({ where: { oarSetId: set.id, boatId: { [Op.in]: removed } }, transaction });
   const added = boatIds.filter((id) => !current.has(id));
-  if (added.length) await BoatOarSet.bulkCreate(added.map((boatId) => ({ boatId, oarSetId: set.id })), { transaction });
+  if (added.length)
+    await BoatOarSet.bulkCreate(
+      added.map((boatId) => ({ boatId, oarSetId: set.id })),
+      { transaction },
+    );
 }
 
 /** A coach or admin adds an oar set and the boats it is used in; values outside the club's limits are saved with warnings. */
@@ -308,7 +345,14 @@ export async function createOarSet(actor: Actor, input: OarSetInput): Promise<Sa
     const created = await OarSet.create({ clubId: actor.clubId, ...oarSetColumns(input) }, { transaction });
     await linkBoats(actor, created, input.boatIds, transaction);
     await recordAudit(
-      { clubId: actor.clubId, actorId: actor.id, action: "oar-set.created", subjectType: "oar_set", subjectId: created.id, details: { name: created.name } },
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action: "oar-set.created",
+        subjectType: "oar_set",
+        subjectId: created.id,
+        details: { name: created.name },
+      },
       transaction,
     );
     return created;
@@ -327,7 +371,14 @@ export async function updateOarSet(actor: Actor, oarSetId: number, input: OarSet
     await existing.update(oarSetColumns(input), { transaction });
     await linkBoats(actor, existing, input.boatIds, transaction);
     await recordAudit(
-      { clubId: actor.clubId, actorId: actor.id, action: "oar-set.updated", subjectType: "oar_set", subjectId: oarSetId, details: { name: input.name } },
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action: "oar-set.updated",
+        subjectType: "oar_set",
+        subjectId: oarSetId,
+        details: { name: input.name },
+      },
       transaction,
     );
     return existing;
@@ -345,7 +396,13 @@ export async function setOarSetArchived(actor: Actor, oarSetId: number, archived
     if (!archived) await assertNameFree("oar set", actor, set.name, oarSetId, transaction);
     await set.update({ archivedAt: archived ? new Date() : null }, { transaction });
     await recordAudit(
-      { clubId: actor.clubId, actorId: actor.id, action: archived ? "oar-set.archived" : "oar-set.restored", subjectType: "oar_set", subjectId: oarSetId },
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action: archived ? "oar-set.archived" : "oar-set.restored",
+        subjectType: "oar_set",
+        subjectId: oarSetId,
+      },
       transaction,
     );
   });
@@ -357,7 +414,10 @@ export async function getBoatForEdit(actor: Actor, boatId: number): Promise<Boat
   assertAllowed(canManageFleet(actor, actor.clubId), "Only coaches and administrators can change boats.");
   const boat = await boatOfClub(actor, boatId);
   const links = await BoatOarSet.findAll({ where: { boatId } });
-  return toBoatSummary(boat, links.map((link) => link.oarSetId));
+  return toBoatSummary(
+    boat,
+    links.map((link) => link.oarSetId),
+  );
 }
 
 /** One oar set for its edit form (fleet managers; archived ones included). */
@@ -366,5 +426,8 @@ export async function getOarSetForEdit(actor: Actor, oarSetId: number): Promise<
   assertAllowed(canManageFleet(actor, actor.clubId), "Only coaches and administrators can change oar sets.");
   const set = await oarSetOfClub(actor, oarSetId);
   const links = await BoatOarSet.findAll({ where: { oarSetId } });
-  return toOarSetSummary(set, links.map((link) => link.boatId));
+  return toOarSetSummary(
+    set,
+    links.map((link) => link.boatId),
+  );
 }

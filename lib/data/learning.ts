@@ -195,8 +195,7 @@ function alreadySubmitted(row: AttemptRow): ConflictError {
   return new ConflictError("This attempt was already submitted; here is its stored result.", { extra: { result: storedResultOf(row) } });
 }
 
-const selectAttempt =
-  "SELECT id, user_id, questions, pass_mark, score, passed, results, submitted_at FROM quiz_attempts WHERE id = ?";
+const selectAttempt = "SELECT id, user_id, questions, pass_mark, score, passed, results, submitted_at FROM quiz_attempts WHERE id = ?";
 
 /** Stores a grade only while the attempt is open (the write queue merges these, see writeKeyedUpdate). */
 const storeGrade: KeyedUpdate = {

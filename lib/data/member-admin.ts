@@ -45,7 +45,14 @@ export async function changeMemberRole(actor: Actor, memberId: number, role: Rol
     const from = member.role;
     await member.update({ role, tokenVersion: member.tokenVersion + 1 }, { transaction });
     await recordAudit(
-      { clubId: actor.clubId, actorId: actor.id, action: "member.role_changed", subjectType: "user", subjectId: member.id, details: { from, to: role } },
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action: "member.role_changed",
+        subjectType: "user",
+        subjectId: member.id,
+        details: { from, to: role },
+      },
       transaction,
     );
     return toSummary(member);

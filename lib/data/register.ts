@@ -43,9 +43,7 @@ export async function registerFor(actor: Actor, filter: RegisterFilter): Promise
       ],
     }),
   ]);
-  const suspended = await suspendedAthletes(
-    certificates.filter((entry) => entry.kind === "clearance").map((entry) => entry.athleteId),
-  );
+  const suspended = await suspendedAthletes(certificates.filter((entry) => entry.kind === "clearance").map((entry) => entry.athleteId));
   const today = todayOfClub(club);
   const entries = certificates
     .map((certificate) => summarise(certificate, today, suspended.has(certificate.athleteId)))
@@ -61,20 +59,14 @@ export async function registerFor(actor: Actor, filter: RegisterFilter): Promise
 
 /** The filters in words, printed on every page of the register. */
 export function registerFilterSummary(filter: RegisterFilter): string {
-  const title = filter.module
-    ? (listModules().find((meta) => meta.slug === filter.module)?.title ?? filter.module)
-    : "All modules";
+  const title = filter.module ? (listModules().find((meta) => meta.slug === filter.module)?.title ?? filter.module) : "All modules";
   const kind = {
     all: "module and clearance certificates",
     module: "module certificates",
     clearance: "clearance certificates",
   }[filter.kind];
-  const status =
-    filter.status === "all" ? "any status" : certificateStatusLabels[filter.status].label.toLowerCase();
-  const dates =
-    filter.from || filter.to
-      ? `issued ${filter.from || "from the start"} to ${filter.to || "today"}`
-      : "all dates";
+  const status = filter.status === "all" ? "any status" : certificateStatusLabels[filter.status].label.toLowerCase();
+  const dates = filter.from || filter.to ? `issued ${filter.from || "from the start"} to ${filter.to || "today"}` : "all dates";
   return `${title} · ${kind} · ${status} · ${dates}`;
 }
 

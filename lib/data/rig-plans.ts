@@ -24,8 +24,10 @@ export interface SavedPlanOutcome {
 export async function saveRigPlan(actor: Actor, input: SavedRigPlan): Promise<SavedPlanOutcome> {
   await databaseReady();
   const [boat, set] = await Promise.all([Boat.findByPk(input.boatId), OarSet.findByPk(input.oarSetId)]);
-  if (!boat || boat.clubId !== actor.clubId) throw new NotFoundError("boatId: no such boat in your club.", { boatId: ["no such boat in your club"] });
-  if (!set || set.clubId !== actor.clubId) throw new NotFoundError("oarSetId: no such oar set in your club.", { oarSetId: ["no such oar set in your club"] });
+  if (!boat || boat.clubId !== actor.clubId)
+    throw new NotFoundError("boatId: no such boat in your club.", { boatId: ["no such boat in your club"] });
+  if (!set || set.clubId !== actor.clubId)
+    throw new NotFoundError("oarSetId: no such oar set in your club.", { oarSetId: ["no such oar set in your club"] });
   const request = input.request;
   if (oarTypeOfClass(boat.boatClass) !== set.oarType || set.oarType !== request.oarType) {
     const message = `${set.name} (${set.oarType}) does not go with ${boat.name} (${boat.boatClass}).`;

@@ -10,15 +10,7 @@ import { clubCertificationContext, standingOf } from "@/lib/data/certification-f
 import { settingsForClub } from "@/lib/data/club-settings";
 import { issueCertificate, issueClearanceIfNewlyHeld } from "@/lib/data/certificate-issue";
 import { certificateFileName, renderStoredCertificate, verifyUrlFor } from "@/lib/data/certificates";
-import {
-  assertAllowed,
-  assertVisible,
-  canRequestSignOff,
-  canSignOff,
-  canViewAthlete,
-  isCoach,
-  type Actor,
-} from "@/lib/auth/permissions";
+import { assertAllowed, assertVisible, canRequestSignOff, canSignOff, canViewAthlete, isCoach, type Actor } from "@/lib/auth/permissions";
 import { ConflictError, NotFoundError, ValidationError } from "@/lib/http/errors";
 import { getModule } from "@/lib/content/modules";
 import type { ChecklistItem, ModuleMeta } from "@/lib/content/module-schema";
@@ -75,11 +67,7 @@ export interface PracticalView {
 }
 
 /** One module's practical for the athlete (or a coach of their club): status, checklist, coach's last word. */
-export async function practicalViewFor(
-  actor: Actor,
-  slug: string,
-  athleteId = actor.id,
-): Promise<PracticalView> {
+export async function practicalViewFor(actor: Actor, slug: string, athleteId = actor.id): Promise<PracticalView> {
   await databaseReady();
   const meta = requireModule(slug);
   const athlete = await User.findByPk(athleteId);
@@ -87,9 +75,7 @@ export async function practicalViewFor(
   const context = await clubCertificationContext(athlete.clubId);
   const { timeZone } = context.settings;
   const today = isoDateOf(new Date(), timeZone);
-  const standing = (await standingOf(athlete.id, context, today)).modules.find(
-    (entry) => entry.slug === slug,
-  )!;
+  const standing = (await standingOf(athlete.id, context, today)).modules.find((entry) => entry.slug === slug)!;
   const [open, decided, certificate, coaches] = await Promise.all([
     PracticalAssessment.findOne({ where: { athleteId, moduleSlug: slug, status: "waiting" } }),
     PracticalAssessment.findOne({
@@ -161,10 +147,7 @@ export async function requestSignOff(
   await databaseReady();
   const meta = requireModule(input.moduleSlug);
   const athlete = await User.findByPk(actor.id);
-  assertAllowed(
-    !!athlete && canRequestSignOff(actor, athlete),
-    "Only the athlete can ask for their own sign-off.",
-  );
+  assertAllowed(!!athlete && canRequestSignOff(actor, athlete), "Only the athlete can ask for their own sign-off.");
   let chosenCoach: User | null = null;
   if (input.coachId !== null) {
     chosenCoach = await User.findByPk(input.coachId);
@@ -184,9 +167,7 @@ export async function requestSignOff(
   const context = await clubCertificationContext(actor.clubId);
   const today = isoDateOf(now, context.settings.timeZone);
   const assessmentId = await writeTransaction(async (transaction) => {
-    const standing = (await standingOf(actor.id, context, today, transaction)).modules.find(
-      (entry) => entry.slug === meta.slug,
-    )!;
+    const standing = (await standingOf(actor.id, context, today, transaction)).modules.find((entry) => entry.slug === meta.slug)!;
     if (standing.requestProblem) {
       throw new ConflictError(standing.requestProblem, {
         fieldErrors: { moduleSlug: [standing.requestProblem] },
@@ -217,9 +198,7 @@ export async function requestSignOff(
     );
     return created.id;
   });
-  const recipients = chosenCoach
-    ? [chosenCoach]
-    : await User.findAll({ where: { clubId: actor.clubId, role: "coach", status: "active" } });
+  const recipients = chosenCoach ? [chosenCoach] : await User.findAll({ where: { clubId: actor.clubId, role: "coach", status: "active" } });
   for (const coach of recipients) {
     await sendMailSafely({
       to: coach.email,
@@ -322,10 +301,7 @@ function evidenceSummary(photo: EvidencePhoto): EvidenceSummary {
 }
 
 /** Loads an assessment the actor may see (404 otherwise) together with its athlete. */
-async function visibleAssessment(
-  actor: Actor,
-  assessmentId: string,
-): Promise<{ assessment: PracticalAssessment; athlete: User }> {
+async function visibleAssessment(actor: Actor, assessmentId: string): Promise<{ assessment: PracticalAssessment; athlete: User }> {
   const assessment = await PracticalAssessment.findByPk(assessmentId);
   const athlete = assessment ? await User.findByPk(assessment.athleteId) : null;
   assertVisible(!!assessment && !!athlete && canViewAthlete(actor, athlete));
@@ -336,10 +312,7 @@ async function visibleAssessment(
 export async function assessmentForCoach(actor: Actor, assessmentId: string): Promise<AssessmentDetail> {
   await databaseReady();
   const { assessment, athlete } = await visibleAssessment(actor, assessmentId);
-  assertAllowed(
-    canSignOff(actor, athlete),
-    "Only a coach of the club can assess a practical, and never their own.",
-  );
+  assertAllowed(canSignOff(actor, athlete), "Only a coach of the club can assess a practical, and never their own.");
   const meta = getModule(assessment.moduleSlug)?.meta;
   const [photos, names, best, { timeZone }] = await Promise.all([
     EvidencePhoto.findAll({ where: { assessmentId }, order: [["createdAt", "ASC"]] }),
@@ -381,17 +354,10 @@ export interface RecordedAssessment {
  * the athlete is sent back with the note. Photos uploaded to this sign-off but not kept in the form are
  * deleted.
  */
-export async function recordAssessment(
-  actor: Actor,
-  assessmentId: string,
-  input: unknown,
-): Promise<RecordedAssessment> {
+export async function recordAssessment(actor: Actor, assessmentId: string, input: unknown): Promise<RecordedAssessment> {
   await databaseReady();
   const { assessment: found, athlete } = await visibleAssessment(actor, assessmentId);
-  assertAllowed(
-    canSignOff(actor, athlete),
-    "Only a coach of the club can sign off a practical, and never their own.",
-  );
+  assertAllowed(canSignOff(actor, athlete), "Only a coach of the club can sign off a practical, and never their own.");
   const meta = requireModule(found.moduleSlug);
   const parsed = assessmentSchemaFor(meta.checklist).safeParse(input);
   if (!parsed.success) throw validationErrorFrom(parsed.error);
@@ -477,9 +443,7 @@ export async function recordAssessment(
     return { issued: certificates, discarded: dropped.map((photo) => photo.storedName) };
   });
 
-  await Promise.all(
-    discarded.map((name) => fs.rm(path.join(uploadsDir(), "evidence", name), { force: true })),
-  );
+  await Promise.all(discarded.map((name) => fs.rm(path.join(uploadsDir(), "evidence", name), { force: true })));
   const mailed =
     outcome === "passed"
       ? await mailCertificates(athlete, meta, issued, actor.name)
@@ -495,12 +459,7 @@ export async function recordAssessment(
   };
 }
 
-async function mailCertificates(
-  athlete: User,
-  meta: ModuleMeta,
-  certificates: Certificate[],
-  coachName: string,
-): Promise<boolean> {
+async function mailCertificates(athlete: User, meta: ModuleMeta, certificates: Certificate[], coachName: string): Promise<boolean> {
   const attachments = [];
   for (const certificate of certificates) {
     attachments.push({
@@ -513,9 +472,7 @@ async function mailCertificates(
   const moduleCertificate = certificates.find((certificate) => certificate.kind === "module");
   return sendMailSafely({
     to: athlete.email,
-    subject: clearance
-      ? `You may now rig unsupervised: ${meta.title} signed off`
-      : `Signed off: ${meta.title}`,
+    subject: clearance ? `You may now rig unsupervised: ${meta.title} signed off` : `Signed off: ${meta.title}`,
     text: [
       `Hello ${athlete.name},`,
       "",
@@ -523,9 +480,7 @@ async function mailCertificates(
       moduleCertificate
         ? `Your certificate ${moduleCertificate.serial} is attached; it expires on ${formatLongDate(moduleCertificate.expiresOn)}.`
         : "",
-      moduleCertificate
-        ? `Anyone can check it here: ${verifyUrlFor(moduleCertificate.verificationCode)}`
-        : "",
+      moduleCertificate ? `Anyone can check it here: ${verifyUrlFor(moduleCertificate.verificationCode)}` : "",
       ...(clearance
         ? [
             "",
@@ -540,12 +495,7 @@ async function mailCertificates(
   });
 }
 
-async function mailNotYet(
-  athlete: User,
-  meta: ModuleMeta,
-  note: string,
-  coachName: string,
-): Promise<boolean> {
+async function mailNotYet(athlete: User, meta: ModuleMeta, note: string, coachName: string): Promise<boolean> {
   return sendMailSafely({
     to: athlete.email,
     subject: `Not yet: ${meta.title}`,

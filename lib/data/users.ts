@@ -75,10 +75,15 @@ export async function authenticateWithLink(token: string): Promise<SessionUser |
 export async function sessionUserById(id: number, tokenVersion: number): Promise<SessionUser | null> {
   await databaseReady();
   // Every signed-in request runs this: plain SQL (lib/data/sql.ts) instead of a model query.
-  const [user] = await selectRows<{ id: number; club_id: number; role: Role; name: string; email: string; status: string; token_version: number }>(
-    "SELECT id, club_id, role, name, email, status, token_version FROM users WHERE id = ?",
-    [id],
-  );
+  const [user] = await selectRows<{
+    id: number;
+    club_id: number;
+    role: Role;
+    name: string;
+    email: string;
+    status: string;
+    token_version: number;
+  }>("SELECT id, club_id, role, name, email, status, token_version FROM users WHERE id = ?", [id]);
   if (!user || user.status !== "active" || user.token_version !== tokenVersion) return null;
   return { id: user.id, clubId: user.club_id, role: user.role, name: user.name, email: user.email, tokenVersion: user.token_version };
 }
@@ -195,7 +200,12 @@ export async function inviteMembers(
   assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators can invite members.");
   const club = await Club.findByPk(actor.clubId);
   if (!club) throw new NotFoundError();
-  const prepared = inputs.map((input) => ({ email: normaliseEmail(input.email), name: input.name.trim(), role: input.role, token: newToken() }));
+  const prepared = inputs.map((input) => ({
+    email: normaliseEmail(input.email),
+    name: input.name.trim(),
+    role: input.role,
+    token: newToken(),
+  }));
   const invitationIds = await writeTransaction(async (transaction) => {
     const ids: number[] = [];
     for (const item of prepared) {
@@ -212,7 +222,14 @@ export async function inviteMembers(
         { transaction },
       );
       await recordAudit(
-        { clubId: actor.clubId, actorId: actor.id, action: "member.invited", subjectType: "invitation", subjectId: created.id, details: { email: item.email, role: item.role, via } },
+        {
+          clubId: actor.clubId,
+          actorId: actor.id,
+          action: "member.invited",
+          subjectType: "invitation",
+          subjectId: created.id,
+          details: { email: item.email, role: item.role, via },
+        },
         transaction,
       );
       ids.push(created.id);

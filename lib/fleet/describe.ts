@@ -48,12 +48,7 @@ export interface OarSetInBoat {
  * outboard and ratios, and the overlap by the measurement-protocol convention (named, with the half
  * swivel width used) next to the simple overlap.
  */
-export function describeOarSetInBoat(
-  boat: DescribedBoat,
-  set: DescribedOarSet,
-  halfSwivelCm: number,
-  limits: ClubOarLimits,
-): OarSetInBoat {
+export function describeOarSetInBoat(boat: DescribedBoat, set: DescribedOarSet, halfSwivelCm: number, limits: ClubOarLimits): OarSetInBoat {
   const noun = set.oarType === "sculling" ? (set.oarCount === 1 ? "scull" : "sculls") : set.oarCount === 1 ? "sweep oar" : "sweep oars";
   const lines = [
     `${set.oarCount} ${noun}. Set each to an overall length of ${cm(set.targetLengthCm)} and an inboard of ${cm(set.targetInboardCm)}.`,

@@ -65,12 +65,7 @@ export interface OarSetWarningInput {
  */
 export function oarSetWarnings(set: OarSetWarningInput, limits: ClubOarLimits): string[] {
   const warnings: string[] = [];
-  if (
-    Number.isFinite(set.targetLengthCm) &&
-    Number.isFinite(set.targetInboardCm) &&
-    set.targetLengthCm > 0 &&
-    set.targetInboardCm > 0
-  ) {
+  if (Number.isFinite(set.targetLengthCm) && Number.isFinite(set.targetInboardCm) && set.targetLengthCm > 0 && set.targetInboardCm > 0) {
     warnings.push(...checkLimits(set.oarType, { lengthCm: set.targetLengthCm, inboardCm: set.targetInboardCm }, limits));
   }
   if (set.oarType === "sculling" && set.oarCount !== undefined && Number.isInteger(set.oarCount) && set.oarCount % 2 === 1) {

@@ -99,6 +99,7 @@ export async function actionRequestProblem(request: Request): Promise<Error | nu
   if (actionId === null) return null;
   const root = form.get("0");
   if (root === null) return new ValidationError("0: the action's arguments are missing", { "0": ["missing"] });
-  if (typeof root !== "string") return new ValidationError("0: the action's arguments must be a text field, not a file", { "0": ["must be a text field"] });
+  if (typeof root !== "string")
+    return new ValidationError("0: the action's arguments must be a text field, not a file", { "0": ["must be a text field"] });
   return argumentListProblem(root, { multipart: true, field: "0" });
 }

@@ -5,8 +5,7 @@ import { AppError, type FieldErrors } from "@/lib/http/errors";
  * form shows beside it (the roster import's report when no row could be invited).
  */
 export type ActionResult<T = undefined> =
-  | { ok: true; message?: string; data?: T }
-  | { ok: false; message: string; fieldErrors: FieldErrors; data?: T };
+  { ok: true; message?: string; data?: T } | { ok: false; message: string; fieldErrors: FieldErrors; data?: T };
 
 /** Maps a typed error to an action's failure result; unexpected errors are logged and stay vague. */
 export function actionFailure(error: unknown): { ok: false; message: string; fieldErrors: FieldErrors } {

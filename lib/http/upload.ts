@@ -73,11 +73,7 @@ export async function readUploadedFile(
 }
 
 /** The image type read from the bytes themselves; 415 unless it is one of `allowed`. */
-export async function sniffImageType<T extends string>(
-  bytes: Uint8Array,
-  allowed: readonly T[],
-  what: string,
-): Promise<T> {
+export async function sniffImageType<T extends string>(bytes: Uint8Array, allowed: readonly T[], what: string): Promise<T> {
   const detected = await fileTypeFromBuffer(bytes);
   const mime = detected?.mime as string | undefined;
   if (!mime || !(allowed as readonly string[]).includes(mime)) {
@@ -95,10 +91,7 @@ export async function sniffImageType<T extends string>(
   if (mime === "image/png") {
     const check = checkPng(bytes, size.width, size.height);
     if (check === "too-many-pixels") {
-      throw new UnsupportedMediaError(
-        `${what} has more than ${maxCheckedPngPixels / 1_000_000} megapixels; export it smaller.`,
-        "file",
-      );
+      throw new UnsupportedMediaError(`${what} has more than ${maxCheckedPngPixels / 1_000_000} megapixels; export it smaller.`, "file");
     }
     if (check === "damaged") throw damaged;
   }

@@ -41,7 +41,11 @@ export function stepAfterQuizPass(slug: string, status: ModuleStatus): StepAfter
     case "waiting-for-sign-off":
       return { href: practical, label: "See your sign-off request", why: "You have asked a coach to watch your practical." };
     case "not-yet":
-      return { href: practical, label: "Read the coach's note", why: "A coach would like you to practise before signing off the practical." };
+      return {
+        href: practical,
+        label: "Read the coach's note",
+        why: "A coach would like you to practise before signing off the practical.",
+      };
     case "expired":
       return { href: practical, label: "Renew the practical", why: "Your practical pass has run out; a coach can sign you off again." };
     default:

@@ -37,7 +37,10 @@ function toMessage(id: string, stored: StoredJsonMail): OutboxMessage {
 
 /** Messages in the local outbox, newest first. */
 export async function listOutbox(limit = 100): Promise<OutboxMessage[]> {
-  const names = (await fs.readdir(outboxDir())).filter((name) => name.endsWith(".json")).sort().reverse();
+  const names = (await fs.readdir(outboxDir()))
+    .filter((name) => name.endsWith(".json"))
+    .sort()
+    .reverse();
   const messages = await Promise.all(
     names.slice(0, limit).map(async (name) => {
       const id = name.slice(0, -5);

@@ -62,7 +62,10 @@ const roleByWord = new Map<string, Role>([
 ]);
 
 function normaliseHeader(header: string): string {
-  const key = header.replace(/^\uFEFF/, "").trim().toLowerCase();
+  const key = header
+    .replace(/^\uFEFF/, "")
+    .trim()
+    .toLowerCase();
   return headerAliases[key] ?? key;
 }
 
@@ -145,15 +148,22 @@ export function checkRoster(text: string, context: RosterContext = {}): RosterCh
 
     const name = (record.name ?? "").trim();
     if (!name) rowProblems.push({ row, field: "name", message: "Missing name." });
-    else if (name.length > maxNameLength) rowProblems.push({ row, field: "name", message: `Name longer than ${maxNameLength} characters.` });
-    else if (!oneLineTextPattern.test(name)) rowProblems.push({ row, field: "name", message: "Name with control characters (invisible characters): retype it." });
+    else if (name.length > maxNameLength)
+      rowProblems.push({ row, field: "name", message: `Name longer than ${maxNameLength} characters.` });
+    else if (!oneLineTextPattern.test(name))
+      rowProblems.push({ row, field: "name", message: "Name with control characters (invisible characters): retype it." });
 
     const rawEmail = (record.email ?? "").trim();
     const email = rawEmail.toLowerCase();
     if (!rawEmail) rowProblems.push({ row, field: "email", message: "Missing e-mail address." });
-    else if (!emailSchema.safeParse(email).success) rowProblems.push({ row, field: "email", message: `"${rawEmail}" is not an e-mail address.` });
+    else if (!emailSchema.safeParse(email).success)
+      rowProblems.push({ row, field: "email", message: `"${rawEmail}" is not an e-mail address.` });
     else if (firstRowByEmail.has(email)) {
-      rowProblems.push({ row, field: "email", message: `Same e-mail address as row ${firstRowByEmail.get(email)}; an address is invited once, from its first row.` });
+      rowProblems.push({
+        row,
+        field: "email",
+        message: `Same e-mail address as row ${firstRowByEmail.get(email)}; an address is invited once, from its first row.`,
+      });
     } else if (context.existingEmails?.has(email)) {
       rowProblems.push({ row, field: "email", message: "Already a member: this address has an account." });
     } else if (context.pendingEmails?.has(email)) {
@@ -163,7 +173,8 @@ export function checkRoster(text: string, context: RosterContext = {}): RosterCh
 
     const roleWord = (record.role ?? "").trim().toLowerCase();
     const role = roleWord ? roleByWord.get(roleWord) : "athlete";
-    if (!role) rowProblems.push({ row, field: "role", message: `Unknown role "${(record.role ?? "").trim()}": use athlete, coach or admin.` });
+    if (!role)
+      rowProblems.push({ row, field: "role", message: `Unknown role "${(record.role ?? "").trim()}": use athlete, coach or admin.` });
 
     if (rowProblems.length > 0 || !role) problems.push(...rowProblems);
     else entries.push({ row, name, email, role });

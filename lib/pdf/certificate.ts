@@ -53,8 +53,7 @@ export function certificateStamp(
 ): { word: string; notice: string | null } | null {
   if (input.status === "revoked") return { word: "REVOKED", notice: null };
   if (input.status === "expired") {
-    const after =
-      input.kind === "clearance" ? "Rig with a coach standing by until it is renewed." : "Ask a coach about renewing it.";
+    const after = input.kind === "clearance" ? "Rig with a coach standing by until it is renewed." : "Ask a coach about renewing it.";
     return { word: "EXPIRED", notice: `Expired on ${formatLongDate(input.expiresOn)}: no longer valid. ${after}` };
   }
   if (input.status === "suspended" && input.kind === "clearance") {
@@ -104,9 +103,7 @@ function drawQrCode(page: PDFPage, text: string): void {
 async function embedLogo(document: PDFDocument, logo: LogoImage | null): Promise<PDFImage | null> {
   if (!logo) return null;
   try {
-    return logo.type === "image/png"
-      ? await document.embedPng(logo.bytes)
-      : await document.embedJpg(logo.bytes);
+    return logo.type === "image/png" ? await document.embedPng(logo.bytes) : await document.embedJpg(logo.bytes);
   } catch {
     // A logo pdf-lib cannot read (e.g. an exotic PNG) must not stop a certificate from being issued.
     return null;
@@ -117,15 +114,11 @@ async function embedLogo(document: PDFDocument, logo: LogoImage | null): Promise
  * Slipway's certificate: one A4 page with the club (and logo), the athlete, what was certified, who
  * signed it off, the dates, the serial, and a QR code to the public verification page.
  */
-export async function renderCertificatePdf(
-  input: CertificatePdfInput,
-  fonts: FontBytes,
-): Promise<Uint8Array> {
+export async function renderCertificatePdf(input: CertificatePdfInput, fonts: FontBytes): Promise<Uint8Array> {
   const document = await PDFDocument.create();
   const regular = await embedPlainFont(document, fonts.regular);
   const bold = await embedPlainFont(document, fonts.bold);
-  const kindLabel =
-    input.kind === "module" ? "Practical sign-off certificate" : "Rigging clearance certificate";
+  const kindLabel = input.kind === "module" ? "Practical sign-off certificate" : "Rigging clearance certificate";
   document.setTitle(`${kindLabel} ${input.serial}: ${input.athleteName}`);
   document.setAuthor(input.clubName);
   document.setCreator("Slipway");
@@ -266,18 +259,15 @@ export async function renderCertificatePdf(
   }
   // A clearance can also be suspended by a coach, and its page then says so.
   const states = input.kind === "clearance" ? "valid, expired, suspended or revoked" : "valid, expired or revoked";
-  page.drawText(
-    `Scan the code or type the address. The page shows whether it is ${states}.`,
-    {
-      x: textX,
-      y: urlY - 6,
-      size: 8,
-      font: regular,
-      color: muted,
-      maxWidth: right - textX,
-      lineHeight: 10.5,
-    },
-  );
+  page.drawText(`Scan the code or type the address. The page shows whether it is ${states}.`, {
+    x: textX,
+    y: urlY - 6,
+    size: 8,
+    font: regular,
+    color: muted,
+    maxWidth: right - textX,
+    lineHeight: 10.5,
+  });
 
   const caution =
     "This certificate records what a coach saw on the day. The coach on duty and the club's own rules decide who goes afloat. " +

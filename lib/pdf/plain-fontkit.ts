@@ -26,9 +26,7 @@ function hasTrueTypeInternals(subset: Subset): subset is Subset & TrueTypeSubset
  */
 function padGlyphsToEvenLength(subset: Subset): Subset {
   if (!hasTrueTypeInternals(subset)) {
-    throw new Error(
-      "Not a fontkit 1.1.1 TrueType subset: see lib/pdf/plain-fontkit.ts before changing fonts",
-    );
+    throw new Error("Not a fontkit 1.1.1 TrueType subset: see lib/pdf/plain-fontkit.ts before changing fonts");
   }
   const addGlyph = subset._addGlyph.bind(subset);
   subset._addGlyph = (glyphId: number): number => {

@@ -53,8 +53,7 @@ const columns: Column[] = [
   { header: "Expires", width: 62, value: (row) => row.expiresOn },
   { header: "Status", width: 56, value: (row) => row.status },
 ];
-const signatureWidth =
-  a4Landscape.width - margin.left - margin.right - columns.reduce((sum, column) => sum + column.width, 0);
+const signatureWidth = a4Landscape.width - margin.left - margin.right - columns.reduce((sum, column) => sum + column.width, 0);
 
 /** Rows that fit on every page under the repeated title block and column header. */
 export const registerRowsPerPage = rowsPerPage({
@@ -118,9 +117,7 @@ function drawCell(page: PDFPage, font: PDFFont, text: string, x: number, rowTop:
   }
   const lines = wrapTextLines(font, text, wrappedCellSize, maxWidth, 2);
   const baselines = lines.length === 1 ? [rowTop - 14] : [rowTop - 9.5, rowTop - 18];
-  lines.forEach((line, index) =>
-    page.drawText(line, { x, y: baselines[index]!, size: wrappedCellSize, font, color: ink }),
-  );
+  lines.forEach((line, index) => page.drawText(line, { x, y: baselines[index]!, size: wrappedCellSize, font, color: ink }));
 }
 
 /**

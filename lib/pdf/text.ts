@@ -84,8 +84,7 @@ export function fitText(font: PDFFont, text: string, size: number, maxWidth: num
   let high = characters.length;
   while (low < high) {
     const middle = Math.ceil((low + high) / 2);
-    if (textWidth(font, characters.slice(0, middle).join("").trimEnd() + ellipsis, size) <= maxWidth)
-      low = middle;
+    if (textWidth(font, characters.slice(0, middle).join("").trimEnd() + ellipsis, size) <= maxWidth) low = middle;
     else high = middle - 1;
   }
   return low === 0 ? ellipsis : characters.slice(0, low).join("").trimEnd() + ellipsis;

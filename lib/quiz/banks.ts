@@ -51,10 +51,8 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
   "fact:handle-mechanisms": [
     {
       kind: "single",
-      prompt:
-        "On adjustable-handle sculls and oars, what are the two usual ways the handle is held in place?",
-      correct:
-        "Clamped by screws and slid along the shaft, or wound in and out by a screw in the end of the handle",
+      prompt: "On adjustable-handle sculls and oars, what are the two usual ways the handle is held in place?",
+      correct: "Clamped by screws and slid along the shaft, or wound in and out by a screw in the end of the handle",
       wrong: [
         "Glued in, so only a boatbuilder can change it",
         "Held only by the grip rubber pressing on the shaft",
@@ -84,8 +82,7 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
         "Take the screws out and leave them out so it is easier next time",
         "Tap it along with a hammer",
       ],
-      explanation:
-        "A clamped handle only moves when its screws are loose, and it must be clamped tight again before the oar is used.",
+      explanation: "A clamped handle only moves when its screws are loose, and it must be clamped tight again before the oar is used.",
     },
   ],
   "fact:stub-markings": [
@@ -93,11 +90,7 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
       kind: "single",
       prompt: "The handle of your oar has a mark labelled 288. Can you set the oar by that mark alone?",
       correct: "No: handles get swapped between oars, so measure the whole oar with a tape",
-      wrong: [
-        "Yes: the marks are made for each oar when it is built",
-        "Yes, as long as the mark is easy to read",
-        "Only on sweep oars",
-      ],
+      wrong: ["Yes: the marks are made for each oar when it is built", "Yes, as long as the mark is easy to read", "Only on sweep oars"],
       explanation:
         "Handles are swapped between oars, so a mark on a handle may have been made for a different shaft. Measure from the blade tip to the handle end every time.",
     },
@@ -116,14 +109,8 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
     {
       kind: "multiple",
       prompt: "Which are good habits when setting overall length? Choose all that apply.",
-      correct: [
-        "Measure from the blade tip to the handle end with a tape",
-        "Measure again after every change",
-      ],
-      wrong: [
-        "Set the handle to the printed mark and skip the tape",
-        "Copy the setting from the oar next to yours without measuring",
-      ],
+      correct: ["Measure from the blade tip to the handle end with a tape", "Measure again after every change"],
+      wrong: ["Set the handle to the printed mark and skip the tape", "Copy the setting from the oar next to yours without measuring"],
       explanation:
         "Marks on a handle may belong to another oar and neighbouring oars can differ, so measure with a tape and measure again after each change.",
     },
@@ -132,8 +119,7 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
     {
       kind: "single",
       prompt: "What is the inboard of an oar?",
-      correct:
-        "The distance from the end of the handle to the face of the collar that rests against the swivel",
+      correct: "The distance from the end of the handle to the face of the collar that rests against the swivel",
       wrong: [
         "The distance from the collar to the blade tip",
         "The distance from the end of the handle to the handle-side edge of the collar",
@@ -167,11 +153,7 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
     {
       kind: "multiple",
       prompt: "Which checks show a collar is ready for rowing? Choose all that apply.",
-      correct: [
-        "It sits in a click, not between two",
-        "Its screws are tight",
-        "The inboard measures what you set",
-      ],
+      correct: ["It sits in a click, not between two", "Its screws are tight", "The inboard measures what you set"],
       wrong: ["It spins freely around the shaft", "One screw has been left out to save time"],
       explanation:
         "Seated in a click, screws tight, and the inboard measured again: then the collar will hold. A loose or spinning collar can slip.",
@@ -226,8 +208,7 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
     },
     {
       kind: "single",
-      prompt:
-        "You set the inboard exactly right, then lengthen the oar by 1 cm at the handle. What has happened to the inboard?",
+      prompt: "You set the inboard exactly right, then lengthen the oar by 1 cm at the handle. What has happened to the inboard?",
       correct: "It has grown by 1 cm, so it must be set again",
       wrong: ["Nothing, because the collar did not move", "It has shrunk by 1 cm", "It has grown by 2 cm"],
       explanation:
@@ -239,24 +220,15 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
       kind: "single",
       prompt: "The setting on the rig card is outside your club's limits. What do you do?",
       correct: "Ask a coach before going afloat",
-      wrong: [
-        "Set it anyway: the card must be right",
-        "Set it to the nearest limit and go out",
-        "Keep the old setting and say nothing",
-      ],
+      wrong: ["Set it anyway: the card must be right", "Set it to the nearest limit and go out", "Keep the old setting and say nothing"],
       explanation:
         "A figure outside the club's limits may be a mistake or a special setting. Only a coach can say which, so ask before going afloat.",
     },
     {
       kind: "single",
-      prompt:
-        "Halfway through a change you are not sure which way the collar should move. What is the right thing to do?",
+      prompt: "Halfway through a change you are not sure which way the collar should move. What is the right thing to do?",
       correct: "Stop and ask a coach before going afloat",
-      wrong: [
-        "Guess, and check after the outing",
-        "Leave the collar loose and go out",
-        "Copy whatever the next oar looks like",
-      ],
+      wrong: ["Guess, and check after the outing", "Leave the collar loose and go out", "Copy whatever the next oar looks like"],
       explanation:
         "When in doubt, ask a coach before going afloat. A wrong guess or a loose collar can spoil the outing or make the oar unrowable.",
     },
@@ -283,24 +255,19 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
         "So the collar can be moved while you row",
         "They do not need to be tight if the collar is in a click",
       ],
-      explanation:
-        "A collar that is not in a click with tight screws can slip, and a slipped collar leaves the oar unrowable.",
+      explanation: "A collar that is not in a click with tight screws can slip, and a slipped collar leaves the oar unrowable.",
     },
   ],
   "fact:pre-launch-checks": [
     {
       kind: "multiple",
-      prompt:
-        "You have just changed your oar's settings. Which checks do you make before going afloat? Choose all that apply.",
+      prompt: "You have just changed your oar's settings. Which checks do you make before going afloat? Choose all that apply.",
       correct: [
         "Measure the overall length and the inboard again",
         "Check each collar sits in a click with its screws tight",
         "Check the settings are inside the club's limits",
       ],
-      wrong: [
-        "Skip the checks because you used the same oar yesterday",
-        "Loosen the collar a little so it can settle",
-      ],
+      wrong: ["Skip the checks because you used the same oar yesterday", "Loosen the collar a little so it can settle"],
       explanation:
         "After any change: measure again, make sure the collars are seated with tight screws, and check the figures are inside the club's limits. Then go afloat.",
     },
@@ -308,11 +275,7 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
       kind: "single",
       prompt: "You have finished a rig change. What comes next?",
       correct: "Check everything again before going afloat",
-      wrong: [
-        "Carry the oar straight to the water",
-        "Ask a friend to try it on the water first",
-        "Nothing: the change is finished",
-      ],
+      wrong: ["Carry the oar straight to the water", "Ask a friend to try it on the water first", "Nothing: the change is finished"],
       explanation:
         "Every change ends with a check: length, inboard, collars seated and tight, figures inside the club's limits. Only then go afloat.",
     },
@@ -323,18 +286,13 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
       prompt: "What do you scrub rubber handle grips with?",
       correct: "A soft brass wire brush or a pot scourer",
       wrong: ["A steel wire brush", "A sheet of sandpaper", "A knife blade"],
-      explanation:
-        "Club practice is a soft brass brush or a pot scourer, never steel, with a mild alkaline cleaner, then a rinse.",
+      explanation: "Club practice is a soft brass brush or a pot scourer, never steel, with a mild alkaline cleaner, then a rinse.",
     },
     {
       kind: "single",
       prompt: "A friend offers you a steel wire brush to clean your grips. What do you say?",
       correct: "No thanks: grips are scrubbed with soft brass or a pot scourer, never steel",
-      wrong: [
-        "Yes: the harder the brush, the cleaner the grip",
-        "Yes, as long as the grip is wet",
-        "Yes, but only once a season",
-      ],
+      wrong: ["Yes: the harder the brush, the cleaner the grip", "Yes, as long as the grip is wet", "Yes, but only once a season"],
       explanation: "Use a soft brass brush or a pot scourer on grips. Never use steel.",
     },
   ],
@@ -352,16 +310,14 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
       prompt: "It has been hot and humid all week. How often do you clean your handles?",
       correct: "Every day",
       wrong: ["Once a week as usual", "Only before races", "Never while it is hot"],
-      explanation:
-        "In hot, humid weather handles are cleaned daily, on top of the weekly and before-race cleans.",
+      explanation: "In hot, humid weather handles are cleaned daily, on top of the weekly and before-race cleans.",
     },
     {
       kind: "single",
       prompt: "You cleaned your handles four days ago and race tomorrow. Do you clean them today?",
       correct: "Yes: handles are cleaned before every race",
       wrong: ["No: it has not been a week yet", "No: clean them after the race instead"],
-      explanation:
-        "The weekly clean is a minimum. Before a race you clean them again, whatever the day count.",
+      explanation: "The weekly clean is a minimum. Before a race you clean them again, whatever the day count.",
     },
   ],
   "fact:sticky-when-wet": [
@@ -370,8 +326,7 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
       prompt: "How can you tell a rubber handle grip is properly clean?",
       correct: "It feels sticky when wet",
       wrong: ["It feels slippery when wet", "It looks shiny", "It smells of cleaner"],
-      explanation:
-        "A clean grip feels sticky, not slippery, when it is wet. A slippery grip still has dirt or grease on it.",
+      explanation: "A clean grip feels sticky, not slippery, when it is wet. A slippery grip still has dirt or grease on it.",
     },
     {
       kind: "single",
@@ -389,8 +344,7 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
   "fact:chemical-safety": [
     {
       kind: "multiple",
-      prompt:
-        "You are cleaning grips with a trisodium phosphate solution. What do you do? Choose all that apply.",
+      prompt: "You are cleaning grips with a trisodium phosphate solution. What do you do? Choose all that apply.",
       correct: [
         "Wear protective gloves and eye protection",
         "Follow the product's label",
@@ -404,11 +358,7 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
       kind: "single",
       prompt: "A splash of trisodium phosphate solution gets in your eye. What do you do first?",
       correct: "Rinse the eye with plenty of water for several minutes, then tell a coach",
-      wrong: [
-        "Rub it dry with a towel",
-        "Carry on and rinse it at the end",
-        "Put some cleaner on a cloth and wipe it",
-      ],
+      wrong: ["Rub it dry with a towel", "Carry on and rinse it at the end", "Put some cleaner on a cloth and wipe it"],
       explanation:
         "The safety card for trisodium phosphate says to rinse the eyes with plenty of water for several minutes. Then get help from a coach.",
     },
@@ -416,11 +366,7 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
       kind: "single",
       prompt: "Can you mix bleach with another cleaner to get the grips clean faster?",
       correct: "No: never mix cleaners; use one product and follow its label",
-      wrong: [
-        "Yes, if the door is open",
-        "Yes, bleach works better with a little ammonia",
-        "Yes, if you wear gloves",
-      ],
+      wrong: ["Yes, if the door is open", "Yes, bleach works better with a little ammonia", "Yes, if you wear gloves"],
       explanation:
         "Cleaning guidance is clear: never mix bleach with ammonia or any other cleaner. Use one product at a time and follow its label.",
     },
@@ -428,11 +374,7 @@ export const fixedBanks: Record<FixedBankName, BankVariant[]> = {
       kind: "single",
       prompt: "Why not use solvents or paint thinners on handle grips?",
       correct: "They can damage rubber and foam grips",
-      wrong: [
-        "They make grips too sticky",
-        "They are fine on any grip",
-        "They are only a problem on sweep oars",
-      ],
+      wrong: ["They make grips too sticky", "They are fine on any grip", "They are only a problem on sweep oars"],
       explanation:
         "Solvents and thinners can break down rubber and foam grips (and are flammable), so stick to a mild alkaline cleaner, a brass brush and water.",
     },
@@ -506,10 +448,7 @@ export function bankVariantCount(name: FixedBankName): number {
  */
 export function bankQuestion(name: FixedBankName, rng: Rng, variantIndex?: number): Question {
   const variants = fixedBanks[name];
-  const variant =
-    variantIndex === undefined
-      ? pick(rng, variants)
-      : (variants[variantIndex % variants.length] as BankVariant);
+  const variant = variantIndex === undefined ? pick(rng, variants) : (variants[variantIndex % variants.length] as BankVariant);
   const base = { id: name, generator: name, prompt: variant.prompt, explanation: variant.explanation };
   switch (variant.kind) {
     case "single":

@@ -3,13 +3,7 @@ import { generators } from "@/lib/quiz/generators";
 import { createRng, shuffle } from "@/lib/quiz/random";
 import { isComputedGenerator, quizRecipeSchema } from "@/lib/quiz/recipe";
 import type { GeneratorName, QuizRecipe } from "@/lib/quiz/recipe";
-import type {
-  ComputedGeneratorName,
-  FixedBankName,
-  PublicQuestion,
-  Question,
-  QuizSettings,
-} from "@/lib/quiz/types";
+import type { ComputedGeneratorName, FixedBankName, PublicQuestion, Question, QuizSettings } from "@/lib/quiz/types";
 
 export interface BuildQuizInput {
   recipe: QuizRecipe;
@@ -41,19 +35,13 @@ function assertSettings(settings: QuizSettings): void {
  */
 export function buildQuiz({ recipe, seed, settings }: BuildQuizInput): Question[] {
   const checked = quizRecipeSchema.safeParse(recipe);
-  if (!checked.success)
-    throw new RangeError(`invalid quiz recipe: ${checked.error.issues[0]?.message ?? "unknown"}`);
+  if (!checked.success) throw new RangeError(`invalid quiz recipe: ${checked.error.issues[0]?.message ?? "unknown"}`);
   assertSettings(settings);
 
-  const uses: GeneratorName[] = recipe.items.flatMap((item) =>
-    Array.from({ length: item.count }, () => item.use),
-  );
+  const uses: GeneratorName[] = recipe.items.flatMap((item) => Array.from({ length: item.count }, () => item.use));
   const computedUses = uses.filter((name) => isComputedName(name));
   const fixedUses = uses.filter((name) => !isComputedName(name));
-  const computedDraw = Math.min(
-    computedUses.length,
-    Math.ceil((recipe.draw * computedUses.length) / uses.length),
-  );
+  const computedDraw = Math.min(computedUses.length, Math.ceil((recipe.draw * computedUses.length) / uses.length));
   const fixedDraw = recipe.draw - computedDraw;
 
   const drawRng = createRng(`${seed}|draw`);

@@ -4,8 +4,7 @@ import type { Choice, Rng } from "@/lib/quiz/types";
 const choiceIds = ["a", "b", "c", "d", "e", "f", "g", "h", "i", "j"] as const;
 
 function assertUnique(labels: readonly string[]): void {
-  if (new Set(labels).size !== labels.length)
-    throw new RangeError(`choice labels repeat: ${labels.join(" | ")}`);
+  if (new Set(labels).size !== labels.length) throw new RangeError(`choice labels repeat: ${labels.join(" | ")}`);
   if (labels.length > choiceIds.length) throw new RangeError(`at most ${choiceIds.length} choices`);
 }
 
@@ -13,10 +12,7 @@ function assertUnique(labels: readonly string[]): void {
  * Shuffles labels and names them a, b, c… in the order shown, so an id says nothing about the answer.
  * Returns the choices and a lookup from label to id.
  */
-export function shuffledChoices(
-  rng: Rng,
-  labels: readonly string[],
-): { choices: Choice[]; idOf: (label: string) => string } {
+export function shuffledChoices(rng: Rng, labels: readonly string[]): { choices: Choice[]; idOf: (label: string) => string } {
   assertUnique(labels);
   const choices = shuffle(rng, labels).map((label, index) => ({ id: choiceIds[index] as string, label }));
   const idOf = (label: string): string => {
@@ -28,21 +24,13 @@ export function shuffledChoices(
 }
 
 /** A single-choice set: one correct label among wrong ones, shuffled. */
-export function singleChoice(
-  rng: Rng,
-  correct: string,
-  wrong: readonly string[],
-): { choices: Choice[]; answer: string } {
+export function singleChoice(rng: Rng, correct: string, wrong: readonly string[]): { choices: Choice[]; answer: string } {
   const { choices, idOf } = shuffledChoices(rng, [correct, ...wrong]);
   return { choices, answer: idOf(correct) };
 }
 
 /** A multiple-choice set: the answer lists the correct ids in the order shown. */
-export function multipleChoice(
-  rng: Rng,
-  correct: readonly string[],
-  wrong: readonly string[],
-): { choices: Choice[]; answer: string[] } {
+export function multipleChoice(rng: Rng, correct: readonly string[], wrong: readonly string[]): { choices: Choice[]; answer: string[] } {
   const { choices } = shuffledChoices(rng, [...correct, ...wrong]);
   const answer = choices.filter((c) => correct.includes(c.label)).map((c) => c.id);
   return { choices, answer };

@@ -39,18 +39,11 @@ export function gradeAnswer(question: Question, value: unknown): boolean {
     case "multiple": {
       if (!isStringArray(answer) || !isStringArray(value)) return false;
       const givenIds = new Set(value);
-      return (
-        givenIds.size === value.length &&
-        givenIds.size === answer.length &&
-        answer.every((id) => givenIds.has(id))
-      );
+      return givenIds.size === value.length && givenIds.size === answer.length && answer.every((id) => givenIds.has(id));
     }
     case "order":
       return (
-        isStringArray(answer) &&
-        isStringArray(value) &&
-        value.length === answer.length &&
-        answer.every((id, index) => value[index] === id)
+        isStringArray(answer) && isStringArray(value) && value.length === answer.length && answer.every((id, index) => value[index] === id)
       );
   }
 }
@@ -89,11 +82,7 @@ export interface QuizGrade {
  * Grades a whole quiz: a missing answer is wrong; score = correct ÷ questions (3 decimals); passed when
  * the unrounded score reaches `passMark`, a fraction from 0 to 1 (0.8 means 80 %). An empty quiz fails.
  */
-export function gradeQuiz(
-  questions: readonly Question[],
-  answers: Readonly<Record<string, unknown>>,
-  passMark: number,
-): QuizGrade {
+export function gradeQuiz(questions: readonly Question[], answers: Readonly<Record<string, unknown>>, passMark: number): QuizGrade {
   if (!(Number.isFinite(passMark) && passMark >= 0 && passMark <= 1)) {
     throw new RangeError(`passMark must be a fraction from 0 to 1, got ${passMark}`);
   }

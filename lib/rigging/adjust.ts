@@ -39,19 +39,14 @@ export function lengthChange(measuredLengthCm: number, targetLengthCm: number): 
  * the collar moves towards the blade to lengthen the inboard, towards the handle to shorten it; the
  * residual is the part of the change that whole clicks cannot reach.
  */
-export function inboardClicks(
-  currentInboardCm: number,
-  targetInboardCm: number,
-  clickCm: number = defaultClickCm,
-): InboardClicks {
+export function inboardClicks(currentInboardCm: number, targetInboardCm: number, clickCm: number = defaultClickCm): InboardClicks {
   assertPositiveCm("currentInboardCm", currentInboardCm);
   assertPositiveCm("targetInboardCm", targetInboardCm);
   assertPositiveCm("clickCm", clickCm);
   // Clicks come from the exact difference (noise stripped), so clicks finer than 1 mm still add up.
   const exactChangeCm = roundCm(targetInboardCm - currentInboardCm);
   const clicks = roundTo(Math.abs(exactChangeCm) / clickCm, 0);
-  const direction: CollarDirection =
-    clicks === 0 ? "none" : exactChangeCm > 0 ? "towards-blade" : "towards-handle";
+  const direction: CollarDirection = clicks === 0 ? "none" : exactChangeCm > 0 ? "towards-blade" : "towards-handle";
   const reachedCm = Math.sign(exactChangeCm) * clicks * clickCm;
   return {
     changeCm: roundTo(exactChangeCm, 1),

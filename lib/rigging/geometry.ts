@@ -1,9 +1,4 @@
-import {
-  assertFiniteCm,
-  assertInboardShorter,
-  assertNonNegativeCm,
-  assertPositiveCm,
-} from "@/lib/rigging/assert";
+import { assertFiniteCm, assertInboardShorter, assertNonNegativeCm, assertPositiveCm } from "@/lib/rigging/assert";
 import { roundCm } from "@/lib/rigging/round";
 import type { OarType } from "@/lib/rigging/types";
 
@@ -42,12 +37,7 @@ export function leverRatio(lengthCm: number, inboardCm: number): number {
  * Span gearing: sculling outboard / (span / 2), sweep outboard / spread (FISA 2006 protocol); unrounded.
  * `spanOrSpreadCm` is the span for sculling and the spread for sweep.
  */
-export function spanGearing(
-  oarType: OarType,
-  lengthCm: number,
-  inboardCm: number,
-  spanOrSpreadCm: number,
-): number {
+export function spanGearing(oarType: OarType, lengthCm: number, inboardCm: number, spanOrSpreadCm: number): number {
   assertPositiveCm(oarType === "sculling" ? "spanCm" : "spreadCm", spanOrSpreadCm);
   const leverArmCm = oarType === "sculling" ? spanOrSpreadCm / 2 : spanOrSpreadCm;
   return outboardCm(lengthCm, inboardCm) / leverArmCm;
@@ -57,12 +47,7 @@ export function spanGearing(
  * Overlap by the FISA 2006 protocol: sculling 2 × (inboard + half swivel) − span;
  * sweep inboard + half swivel − spread.
  */
-export function overlapCm(
-  oarType: OarType,
-  inboardCm: number,
-  spanOrSpreadCm: number,
-  halfSwivelCm: number = defaultHalfSwivelCm,
-): number {
+export function overlapCm(oarType: OarType, inboardCm: number, spanOrSpreadCm: number, halfSwivelCm: number = defaultHalfSwivelCm): number {
   assertPositiveCm("inboardCm", inboardCm);
   assertPositiveCm(oarType === "sculling" ? "spanCm" : "spreadCm", spanOrSpreadCm);
   assertNonNegativeCm("halfSwivelCm", halfSwivelCm);
@@ -88,11 +73,7 @@ export interface SuggestedInboardOptions {
  * overlap default 21 cm. Sweep: spread + 30 cm (common practice), or spread + overlap − half swivel when
  * an overlap is given.
  */
-export function suggestedInboardCm(
-  oarType: OarType,
-  spanOrSpreadCm: number,
-  options: SuggestedInboardOptions = {},
-): number {
+export function suggestedInboardCm(oarType: OarType, spanOrSpreadCm: number, options: SuggestedInboardOptions = {}): number {
   const halfSwivelCm = options.halfSwivelCm ?? defaultHalfSwivelCm;
   assertPositiveCm(oarType === "sculling" ? "spanCm" : "spreadCm", spanOrSpreadCm);
   assertNonNegativeCm("halfSwivelCm", halfSwivelCm);

@@ -43,13 +43,7 @@ function cm(value: number): string {
   return `${roundTo(value, 2)} cm`;
 }
 
-function rangeWarning(
-  what: string,
-  valueCm: number,
-  minCm: number,
-  maxCm: number,
-  oarType: OarType,
-): string | null {
+function rangeWarning(what: string, valueCm: number, minCm: number, maxCm: number, oarType: OarType): string | null {
   const range = `${roundTo(minCm, 2)}–${cm(maxCm)}`;
   if (valueCm < minCm) {
     return `The ${what} of ${cm(valueCm)} is below your club's range for ${oarNoun[oarType]} (${range}): ${askCoachSuffix}.`;
@@ -61,11 +55,7 @@ function rangeWarning(
 }
 
 /** Plain-language warnings for each setting outside the club's limits (ends allowed); empty when all is within. */
-export function checkLimits(
-  oarType: OarType,
-  settings: OarSettings,
-  limits: OarLimits | ClubOarLimits = defaultClubOarLimits,
-): string[] {
+export function checkLimits(oarType: OarType, settings: OarSettings, limits: OarLimits | ClubOarLimits = defaultClubOarLimits): string[] {
   const own = limitsFor(oarType, limits);
   return [
     rangeWarning("overall length", settings.lengthCm, own.minLengthCm, own.maxLengthCm, oarType),

@@ -1,19 +1,7 @@
-import {
-  defaultClickCm,
-  inboardAfterLengthChangeCm,
-  inboardClicks,
-  lengthChange,
-} from "@/lib/rigging/adjust";
+import { defaultClickCm, inboardAfterLengthChangeCm, inboardClicks, lengthChange } from "@/lib/rigging/adjust";
 import type { InboardClicks, LengthChange } from "@/lib/rigging/adjust";
 import { assertInboardShorter } from "@/lib/rigging/assert";
-import {
-  defaultHalfSwivelCm,
-  leverRatio,
-  outboardCm,
-  overlapCm,
-  simpleOverlapCm,
-  spanGearing,
-} from "@/lib/rigging/geometry";
+import { defaultHalfSwivelCm, leverRatio, outboardCm, overlapCm, simpleOverlapCm, spanGearing } from "@/lib/rigging/geometry";
 import { askCoachSuffix, checkLimits, checkOverlap, defaultClubOarLimits } from "@/lib/rigging/limits";
 import type { OarLimits } from "@/lib/rigging/limits";
 import { roundTo } from "@/lib/rigging/round";
@@ -92,14 +80,10 @@ export function planRigChange(input: RigPlanInput): RigPlan {
 
   const spanOrSpreadCm = oarType === "sculling" ? input.spanCm : input.spreadCm;
   if (oarType === "sweep" && input.spanCm !== undefined) {
-    warnings.push(
-      "A span was given for a sweep oar; sweep boats are set by spread, so the span was ignored.",
-    );
+    warnings.push("A span was given for a sweep oar; sweep boats are set by spread, so the span was ignored.");
   }
   if (oarType === "sculling" && input.spreadCm !== undefined) {
-    warnings.push(
-      "A spread was given for a scull; sculling boats are set by span, so the spread was ignored.",
-    );
+    warnings.push("A spread was given for a scull; sculling boats are set by span, so the spread was ignored.");
   }
   if (spanOrSpreadCm !== undefined) {
     plan.spanGearing = roundTo(spanGearing(oarType, target.lengthCm, target.inboardCm, spanOrSpreadCm), 3);

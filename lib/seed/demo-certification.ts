@@ -12,16 +12,7 @@ import { addDaysIso } from "@/lib/care/dates";
 import { isoDateOf } from "@/lib/clearance/dates";
 import { passExpiresOn } from "@/lib/clearance/rules";
 import { demoClub } from "@/lib/seed/demo-club";
-import {
-  Certificate,
-  ClearanceSuspension,
-  Club,
-  LessonRead,
-  PracticalAssessment,
-  QuizAttempt,
-  User,
-  initModels,
-} from "@/models";
+import { Certificate, ClearanceSuspension, Club, LessonRead, PracticalAssessment, QuizAttempt, User, initModels } from "@/models";
 
 type Plan = {
   email: string;
@@ -41,8 +32,7 @@ type Plan = {
 const tobias = "coach.tobias@lantern-reach.example";
 const ines = "coach.ines@lantern-reach.example";
 const all = ["overall-length", "setting-inboard", "changing-boats", "secure-and-check", "grip-cleaning"];
-const everyModule = (daysAgo: number, coach: string) =>
-  all.map((slug, index) => ({ slug, daysAgo: daysAgo - index, coach }));
+const everyModule = (daysAgo: number, coach: string) => all.map((slug, index) => ({ slug, daysAgo: daysAgo - index, coach }));
 
 /**
  * Athletes at every stage, all invented. ada@ and bilal@ stay untouched ("nothing done yet") because
@@ -129,10 +119,7 @@ async function seedAttempt(
   const questions = buildQuiz({ recipe: meta.quiz, seed, settings: quizSettings });
   // Right answers throughout for a pass; for a miss, the first half left wrong.
   const answers = Object.fromEntries(
-    questions.map((question, index) => [
-      question.id,
-      pass || index >= questions.length / 2 ? question.answer : "?",
-    ]),
+    questions.map((question, index) => [question.id, pass || index >= questions.length / 2 ? question.answer : "?"]),
   );
   const grade = gradeQuiz(questions, answers, passMark);
   if (grade.passed !== pass) throw new Error(`demo seed: ${seed} was meant to ${pass ? "pass" : "fail"}`);
@@ -170,11 +157,7 @@ interface SignOffEvent {
   when: Date;
 }
 
-async function seedSignOff(
-  context: ClubCertificationContext,
-  event: SignOffEvent,
-  transaction: Transaction,
-): Promise<void> {
+async function seedSignOff(context: ClubCertificationContext, event: SignOffEvent, transaction: Transaction): Promise<void> {
   const { user, meta, coach, day, when } = event;
   const assessment = await PracticalAssessment.create(
     {
@@ -211,10 +194,7 @@ async function seedSignOff(
     },
     transaction,
   );
-  await issueClearanceIfNewlyHeld(
-    { context, athlete: { id: user.id, name: user.name }, signedOffBy, today: day, now: when },
-    transaction,
-  );
+  await issueClearanceIfNewlyHeld({ context, athlete: { id: user.id, name: user.name }, signedOffBy, today: day, now: when }, transaction);
 }
 
 /**
@@ -222,10 +202,7 @@ async function seedSignOff(
  * revoked certificate, with dates relative to today. Idempotent: once any staged athlete has an
  * attempt or a sign-off, it changes nothing.
  */
-export async function seedDemoCertification(
-  sequelize: Sequelize,
-  now = new Date(),
-): Promise<{ staged: number }> {
+export async function seedDemoCertification(sequelize: Sequelize, now = new Date()): Promise<{ staged: number }> {
   initModels(sequelize);
   const modules = new Map(listModules().map((meta) => [meta.slug, meta]));
   return writeTransaction(async (transaction) => {
@@ -233,9 +210,7 @@ export async function seedDemoCertification(
     if (!club) return { staged: 0 };
     const users = await User.findAll({ where: { clubId: club.id }, transaction });
     const byEmail = new Map(users.map((user) => [user.email, user]));
-    const stagedIds = demoCertificationPlans
-      .map((plan) => byEmail.get(plan.email)?.id)
-      .filter((id): id is number => id !== undefined);
+    const stagedIds = demoCertificationPlans.map((plan) => byEmail.get(plan.email)?.id).filter((id): id is number => id !== undefined);
     const existing =
       (await QuizAttempt.count({ where: { userId: stagedIds }, transaction })) +
       (await PracticalAssessment.count({ where: { athleteId: stagedIds }, transaction })) +
@@ -254,17 +229,12 @@ export async function seedDemoCertification(
       staged += 1;
       const quizSlugs = new Set([...(plan.passedQuizzes ?? []), ...(plan.failedFirst ?? [])]);
       for (const slug of new Set([...(plan.reads ?? []), ...quizSlugs])) {
-        await LessonRead.create(
-          { userId: user.id, moduleSlug: slug, readAt: at(today, 120, 18) },
-          { transaction },
-        );
+        await LessonRead.create({ userId: user.id, moduleSlug: slug, readAt: at(today, 120, 18) }, { transaction });
       }
       // Quizzes a day before the earliest practical of the plan (or a fortnight ago).
       const firstPracticalDaysAgo = Math.max(
         14,
-        ...[...(plan.signedOff ?? []), ...(plan.notYet ?? []), ...(plan.waiting ?? [])].map(
-          (entry) => entry.daysAgo + 2,
-        ),
+        ...[...(plan.signedOff ?? []), ...(plan.notYet ?? []), ...(plan.waiting ?? [])].map((entry) => entry.daysAgo + 2),
       );
       for (const slug of quizSlugs) {
         const meta = modules.get(slug)!;
@@ -324,10 +294,7 @@ export async function seedDemoCertification(
             assessedAt: when,
             checklist: meta.checklist,
             verdicts: Object.fromEntries(
-              meta.checklist.map((item, index) => [
-                item.id,
-                index === 0 ? ("not-yet" as const) : ("met" as const),
-              ]),
+              meta.checklist.map((item, index) => [item.id, index === 0 ? ("not-yet" as const) : ("met" as const)]),
             ),
             note: entry.note,
           },

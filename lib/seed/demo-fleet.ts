@@ -106,7 +106,14 @@ export async function seedDemoFleet(sequelize: Sequelize, now: Date = new Date()
     for (const boat of demoBoats) {
       const [row, created] = await Boat.findOrCreate({
         where: { clubId: club.id, name: boat.name },
-        defaults: { clubId: club.id, name: boat.name, boatClass: boat.boatClass, spanCm: boat.spanCm ?? null, spreadCm: boat.spreadCm ?? null, notes: boat.notes },
+        defaults: {
+          clubId: club.id,
+          name: boat.name,
+          boatClass: boat.boatClass,
+          spanCm: boat.spanCm ?? null,
+          spreadCm: boat.spreadCm ?? null,
+          notes: boat.notes,
+        },
         transaction,
       });
       boatIds.set(boat.name, row.id);
@@ -128,7 +135,14 @@ export async function seedDemoFleet(sequelize: Sequelize, now: Date = new Date()
         const member = await User.findOne({ where: { email: cleanedBy }, transaction });
         if (member) {
           await CleaningRecord.create(
-            { clubId: club.id, oarSetId: row.id, cleanedById: member.id, recordedById: member.id, cleanedOn: addDaysIso(today, -cleanedDaysAgo), method },
+            {
+              clubId: club.id,
+              oarSetId: row.id,
+              cleanedById: member.id,
+              recordedById: member.id,
+              cleanedOn: addDaysIso(today, -cleanedDaysAgo),
+              method,
+            },
             { transaction },
           );
         }

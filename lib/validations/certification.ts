@@ -113,9 +113,7 @@ const isoDay = z.iso.date({ error: "must be a date written YYYY-MM-DD" });
 export function registerQuerySchemaFor(moduleSlugs: readonly string[]) {
   return z
     .strictObject({
-      module: kebabCaseSchema
-        .refine((slug) => moduleSlugs.includes(slug), { error: "no such module" })
-        .default(""),
+      module: kebabCaseSchema.refine((slug) => moduleSlugs.includes(slug), { error: "no such module" }).default(""),
       kind: z.enum(certificateKindFilters, { error: `must be one of ${certificateKindFilters.join(", ")}` }).default("all"),
       status: z.enum(registerStatuses, { error: `must be one of ${registerStatuses.join(", ")}` }).default("all"),
       from: isoDay.default(""),
@@ -154,9 +152,7 @@ export const signOffIdParamSchema = z.strictObject({ id: z.uuid({ error: "not a 
 export const evidenceIdParamSchema = z.strictObject({ id: z.uuid({ error: "not a photo id" }) });
 
 /** Plain-object query parameters for the lenient schemas above. */
-export function queryObject(
-  params: URLSearchParams | Record<string, string | string[] | undefined>,
-): Record<string, string> {
+export function queryObject(params: URLSearchParams | Record<string, string | string[] | undefined>): Record<string, string> {
   const entries = params instanceof URLSearchParams ? [...params.entries()] : Object.entries(params);
   const result: Record<string, string> = {};
   for (const [key, value] of entries) {

@@ -17,10 +17,7 @@ const isoDay = (what: string) => z.iso.date({ error: `Enter the ${what} as a dat
 export const cleaningRecordSchemaFor = (today: string) =>
   z
     .strictObject({
-      oarSetId: z
-        .number({ error: "Choose the oar set." })
-        .int({ error: "Choose the oar set." })
-        .positive({ error: "Choose the oar set." }),
+      oarSetId: z.number({ error: "Choose the oar set." }).int({ error: "Choose the oar set." }).positive({ error: "Choose the oar set." }),
       cleanedOn: isoDay("day of the cleaning"),
       cleanedById: z.number().int().positive().optional(),
       method: z.enum(cleaningMethods, { error: "Choose how the handles were cleaned." }),

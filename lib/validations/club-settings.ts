@@ -19,13 +19,11 @@ export const clubSettingsSchema = z.object({
     .array(z.string().max(60))
     .default(["overall-length", "setting-inboard", "changing-boats", "secure-and-check", "grip-cleaning"]),
   clearanceMonths: z.number().int().min(1).max(60).default(12),
-  limits: z
-    .strictObject({ sculling: limitsSchema, sweep: limitsSchema })
-    .default({
-      // Common practice, no source: a little either side of the usual settings in TRADE-FACTS.md.
-      sculling: { minLengthCm: 280, maxLengthCm: 292, minInboardCm: 85, maxInboardCm: 91 },
-      sweep: { minLengthCm: 366, maxLengthCm: 380, minInboardCm: 112, maxInboardCm: 120 },
-    }),
+  limits: z.strictObject({ sculling: limitsSchema, sweep: limitsSchema }).default({
+    // Common practice, no source: a little either side of the usual settings in TRADE-FACTS.md.
+    sculling: { minLengthCm: 280, maxLengthCm: 292, minInboardCm: 85, maxInboardCm: 91 },
+    sweep: { minLengthCm: 366, maxLengthCm: 380, minInboardCm: 112, maxInboardCm: 120 },
+  }),
   raceDays: z.array(z.iso.date()).default([]),
   humidSpell: z.boolean().default(false),
   /**
@@ -34,7 +32,10 @@ export const clubSettingsSchema = z.object({
    * chosen one, or whose stored name this machine does not know, keeps the server's zone (only this
    * field falls back).
    */
-  timeZone: z.string().refine(isTimeZone).catch(() => machineTimeZone()),
+  timeZone: z
+    .string()
+    .refine(isTimeZone)
+    .catch(() => machineTimeZone()),
 });
 
 export type ClubSettings = z.infer<typeof clubSettingsSchema>;

@@ -53,7 +53,8 @@ export const boatSchema = z
       if (boat.spreadCm !== undefined)
         ctx.addIssue({ code: "custom", path: ["spreadCm"], message: "A sculling boat is set by its span, not a spread." });
     } else {
-      if (boat.spreadCm === undefined) ctx.addIssue({ code: "custom", path: ["spreadCm"], message: "Enter the spread of this sweep boat." });
+      if (boat.spreadCm === undefined)
+        ctx.addIssue({ code: "custom", path: ["spreadCm"], message: "Enter the spread of this sweep boat." });
       if (boat.spanCm !== undefined)
         ctx.addIssue({ code: "custom", path: ["spanCm"], message: "A sweep boat is set by its spread, not a span." });
     }

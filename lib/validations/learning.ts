@@ -4,7 +4,10 @@ import { z } from "zod";
 export const maxModuleSlugLength = 60;
 
 export const moduleSlugParamSchema = z.strictObject({
-  slug: z.string().max(maxModuleSlugLength).regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, { error: "not a module name" }),
+  slug: z
+    .string()
+    .max(maxModuleSlugLength)
+    .regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, { error: "not a module name" }),
 });
 
 export const attemptIdParamSchema = z.strictObject({

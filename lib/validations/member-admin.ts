@@ -14,14 +14,12 @@ export const memberIdSchema = z.strictObject({ id: memberId });
  * PATCH /api/members/[id]: exactly one of a new role or a new status. Sending both, or neither, is
  * refused under both field names, so a client sees which two fields the rule is about.
  */
-export const memberUpdateSchema = z
-  .strictObject({ role: role.optional(), status: status.optional() })
-  .superRefine((update, context) => {
-    const given = [update.role, update.status].filter((value) => value !== undefined).length;
-    if (given === 1) return;
-    const message = given === 0 ? "Send a role or a status." : "Send either a role or a status, not both.";
-    for (const field of ["role", "status"]) context.addIssue({ code: "custom", message, path: [field] });
-  });
+export const memberUpdateSchema = z.strictObject({ role: role.optional(), status: status.optional() }).superRefine((update, context) => {
+  const given = [update.role, update.status].filter((value) => value !== undefined).length;
+  if (given === 1) return;
+  const message = given === 0 ? "Send a role or a status." : "Send either a role or a status, not both.";
+  for (const field of ["role", "status"]) context.addIssue({ code: "custom", message, path: [field] });
+});
 export type MemberUpdate = z.infer<typeof memberUpdateSchema>;
 
 /** The role form on the members page. */

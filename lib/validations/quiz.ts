@@ -10,10 +10,7 @@ export const maxAnswersPerSubmission = 20;
  */
 export const quizSubmissionSchema = z.strictObject({
   answers: z
-    .record(
-      z.string().max(20),
-      z.union([z.number(), z.string().max(200), z.array(z.string().max(50)).max(20)]),
-    )
+    .record(z.string().max(20), z.union([z.number(), z.string().max(200), z.array(z.string().max(50)).max(20)]))
     .refine((answers) => Object.keys(answers).length <= maxAnswersPerSubmission, {
       error: `At most ${maxAnswersPerSubmission} answers can be sent at once`,
     }),

@@ -32,9 +32,7 @@ export function oarLengthProblem(oarType: OarType, lengthCm: number): "other-typ
 }
 
 const cmField = (label: string) =>
-  z
-    .number({ error: `${label} must be a number in centimetres` })
-    .positive({ error: `${label} must be more than 0 cm` });
+  z.number({ error: `${label} must be a number in centimetres` }).positive({ error: `${label} must be more than 0 cm` });
 
 const oarSettingsSchema = z.strictObject({
   lengthCm: cmField("Overall length"),

@@ -45,9 +45,47 @@ const rowsPerInsert = 500;
 const dayMs = 24 * 60 * 60 * 1000;
 
 // Invented name parts; combined at random they name no real person.
-const givenStarts = ["Al", "Bren", "Cor", "Da", "El", "Fen", "Gar", "Hal", "Is", "Jor", "Kae", "Lu", "Mor", "Nel", "Or", "Pel", "Ri", "Sol", "Tam", "Vey"];
+const givenStarts = [
+  "Al",
+  "Bren",
+  "Cor",
+  "Da",
+  "El",
+  "Fen",
+  "Gar",
+  "Hal",
+  "Is",
+  "Jor",
+  "Kae",
+  "Lu",
+  "Mor",
+  "Nel",
+  "Or",
+  "Pel",
+  "Ri",
+  "Sol",
+  "Tam",
+  "Vey",
+];
 const givenEnds = ["ra", "ric", "lin", "mo", "na", "dan", "wyn", "sa", "thel", "lo"];
-const familyStarts = ["Ash", "Brack", "Cold", "Dun", "Fern", "Glim", "Holl", "Kest", "Lark", "Marl", "Nettle", "Quill", "Reed", "Skel", "Thorn", "Wend"];
+const familyStarts = [
+  "Ash",
+  "Brack",
+  "Cold",
+  "Dun",
+  "Fern",
+  "Glim",
+  "Holl",
+  "Kest",
+  "Lark",
+  "Marl",
+  "Nettle",
+  "Quill",
+  "Reed",
+  "Skel",
+  "Thorn",
+  "Wend",
+];
 const familyEnds = ["by", "combe", "ford", "ley", "mere", "ridge", "ton", "wick", "well", "hallow"];
 
 function pick<T>(rng: Rng, list: readonly T[]): T {
@@ -115,7 +153,11 @@ export async function generateDataset(options: DatasetOptions): Promise<Dataset>
   await writeTransaction(async (transaction) => {
     await insertInChunks(userRows, (chunk) => User.bulkCreate(chunk, { transaction }));
   });
-  const users = await User.findAll({ where: { email: userRows.map((row) => row.email) }, attributes: ["id", "email"], order: [["id", "ASC"]] });
+  const users = await User.findAll({
+    where: { email: userRows.map((row) => row.email) },
+    attributes: ["id", "email"],
+    order: [["id", "ASC"]],
+  });
   const idByEmail = new Map(users.map((user) => [user.email, user.id]));
 
   const readRows: { userId: number; moduleSlug: string; readAt: Date }[] = [];

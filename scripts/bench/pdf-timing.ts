@@ -65,7 +65,11 @@ async function timeRuns(render: () => Promise<Uint8Array>, warmUps: number, runs
 async function main(): Promise<void> {
   const fonts = await pdfFonts();
   let index = 0;
-  const certificate = await timeRuns(() => renderCertificatePdf(sampleCertificate(index++), fonts), pdfRuns.certificateWarmUps, pdfRuns.certificate);
+  const certificate = await timeRuns(
+    () => renderCertificatePdf(sampleCertificate(index++), fonts),
+    pdfRuns.certificateWarmUps,
+    pdfRuns.certificate,
+  );
   const register = await timeRuns(() => renderRegisterPdf(sampleRegister(500), fonts), pdfRuns.registerWarmUps, pdfRuns.register);
   process.stdout.write(`${JSON.stringify({ certificate, register })}\n`);
 }

@@ -27,34 +27,55 @@ function firstLink(from: string, prefix: string) {
  */
 const pages: { path: string; as: string | null; open?: (page: Page) => Promise<void>; ready?: (page: Page) => Promise<void> }[] = [
   { path: "/sign-in/link", as: null },
-  { path: "/sign-in, after a wrong password", as: null, open: async (page) => {
+  {
+    path: "/sign-in, after a wrong password",
+    as: null,
+    open: async (page) => {
       await page.goto("/sign-in");
       const form = page.getByTestId("password-sign-in");
       await form.getByLabel("E-mail").fill(demo.athlete);
       await form.getByLabel("Password").fill("not-the-password-at-all");
       await form.getByRole("button", { name: "Sign in" }).click();
-      await expect(page.getByRole("alert").or(page.locator("[aria-live]").filter({ hasText: /./ })).first()).toBeVisible();
-    } },
-  { path: "/verify/{code} of a certificate", as: null, open: async (page) => {
+      await expect(
+        page
+          .getByRole("alert")
+          .or(page.locator("[aria-live]").filter({ hasText: /./ }))
+          .first(),
+      ).toBeVisible();
+    },
+  },
+  {
+    path: "/verify/{code} of a certificate",
+    as: null,
+    open: async (page) => {
       // The public page, opened as a club's register links to it (the link is absolute: keep its path).
       await signIn(page, demo.admin);
       await firstLink("/club/register", "/club/register/")(page);
       const verifyUrl = await page.locator('main a[href*="/verify/"]').first().getAttribute("href");
       await page.context().clearCookies();
       await page.goto(new URL(verifyUrl!).pathname);
-    } },
+    },
+  },
   { path: "/verify/{code} unknown", as: null, open: (page) => page.goto("/verify/no-such-code-anywhere-0000").then(() => undefined) },
   { path: "/learn/setting-inboard", as: demo.athlete },
   { path: "/learn/secure-and-check", as: demo.athlete },
-  { path: "/learn/{slug}/quiz, handed in and graded", as: loadAthleteEmail(34), open: async (page) => {
+  {
+    path: "/learn/{slug}/quiz, handed in and graded",
+    as: loadAthleteEmail(34),
+    open: async (page) => {
       const { attemptId } = await openQuiz(page, "overall-length");
       await answerQuiz(page, await storedQuestions(attemptId), false);
       await page.getByRole("button", { name: "Hand in my answers" }).click();
       await expect(page.getByTestId("quiz-outcome")).toBeVisible();
-    } },
+    },
+  },
   // femi (lib/seed/demo-certification.ts) has passed every quiz: the page opens on the pass, not on questions.
-  { path: "/learn/{slug}/quiz, already passed", as: "femi@lantern-reach.example", open: (page) => page.goto("/learn/setting-inboard/quiz").then(() => undefined),
-    ready: (page) => page.getByTestId("quiz-passed").waitFor() },
+  {
+    path: "/learn/{slug}/quiz, already passed",
+    as: "femi@lantern-reach.example",
+    open: (page) => page.goto("/learn/setting-inboard/quiz").then(() => undefined),
+    ready: (page) => page.getByTestId("quiz-passed").waitFor(),
+  },
   { path: "/rig/boats/{id}", as: demo.athlete, open: firstLink("/rig", "/rig/boats/") },
   { path: "/roster/athletes/{id}", as: demo.coach, open: firstLink("/roster", "/roster/athletes/") },
   { path: "/roster/sign-offs/{id}", as: demo.coach, open: firstLink("/roster/sign-offs", "/roster/sign-offs/") },
@@ -104,7 +125,9 @@ for (const viewport of viewports) {
         // data (the quiz after grading): every page has one, so wait for it as for the heading.
         await expect(page).toHaveTitle(/Slipway/);
         const results = await new AxeBuilder({ page }).withTags(wcagTags).analyze();
-        const summary = results.violations.map((violation) => `${violation.id}: ${violation.nodes.map((node) => node.target.join(" ")).join(", ")}`);
+        const summary = results.violations.map(
+          (violation) => `${violation.id}: ${violation.nodes.map((node) => node.target.join(" ")).join(", ")}`,
+        );
         expect(summary).toEqual([]);
       });
     }

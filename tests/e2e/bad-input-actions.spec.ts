@@ -49,7 +49,12 @@ test.describe("server actions refuse malformed requests before Next decodes them
       headers: { "Next-Action": id, Origin: origin, "Content-Type": "text/plain;charset=UTF-8" },
       body,
     });
-    const multipartCase = (label: string, body: string, field: string, headers: Record<string, string> = { "Next-Action": id }): RefusalCase => ({
+    const multipartCase = (
+      label: string,
+      body: string,
+      field: string,
+      headers: Record<string, string> = { "Next-Action": id },
+    ): RefusalCase => ({
       label,
       field,
       status: 400,
@@ -57,7 +62,24 @@ test.describe("server actions refuse malformed requests before Next decodes them
       body,
     });
     // Each a tag React's decoder reads as something no action of ours takes; several made Next answer 500.
-    const refusedTags = ["$Q1", "$W1", "$@1", "$F1", "$h1", "$n12x", "$B1", "$R1", "$i1", "$S1", "$1", "$Z", "$T1", "$K1", "$", "$Dnot-a-date"];
+    const refusedTags = [
+      "$Q1",
+      "$W1",
+      "$@1",
+      "$F1",
+      "$h1",
+      "$n12x",
+      "$B1",
+      "$R1",
+      "$i1",
+      "$S1",
+      "$1",
+      "$Z",
+      "$T1",
+      "$K1",
+      "$",
+      "$Dnot-a-date",
+    ];
     const cases: RefusalCase[] = [
       textCase("not JSON", "{{{not json", "body"),
       textCase("empty body", "", "body"),
@@ -71,14 +93,32 @@ test.describe("server actions refuse malformed requests before Next decodes them
       textCase("a tag nested deep", JSON.stringify([{ a: { b: [{ c: "$Q1" }] } }]), "body.0.a.b.0.c"),
       textCase("a tag as an argument", JSON.stringify(["$W1"]), "body.0"),
       textCase("over 1 MB", JSON.stringify([{ email: "x".repeat(1_100_000) }]), "body", 413),
-      { ...textCase("sent as JSON", "[{}]", "content-type", 415), headers: { "Next-Action": id, Origin: origin, "Content-Type": "application/json" } },
-      { ...textCase("sent as a form", "email=x", "content-type", 415), headers: { "Next-Action": id, Origin: origin, "Content-Type": "application/x-www-form-urlencoded" } },
+      {
+        ...textCase("sent as JSON", "[{}]", "content-type", 415),
+        headers: { "Next-Action": id, Origin: origin, "Content-Type": "application/json" },
+      },
+      {
+        ...textCase("sent as a form", "email=x", "content-type", 415),
+        headers: { "Next-Action": id, Origin: origin, "Content-Type": "application/x-www-form-urlencoded" },
+      },
       { ...textCase("without a content type", "[{}]", "content-type", 415), headers: { "Next-Action": id, Origin: origin } },
-      { ...textCase("an action id that is not one", "[{}]", "next-action"), headers: { "Next-Action": "zz", Origin: origin, "Content-Type": "text/plain" } },
-      { ...textCase("an action id too long", "[{}]", "next-action"), headers: { "Next-Action": `${id}00`, Origin: origin, "Content-Type": "text/plain" } },
-      { ...textCase("an action id in capitals", "[{}]", "next-action"), headers: { "Next-Action": id.toUpperCase(), Origin: origin, "Content-Type": "text/plain" } },
+      {
+        ...textCase("an action id that is not one", "[{}]", "next-action"),
+        headers: { "Next-Action": "zz", Origin: origin, "Content-Type": "text/plain" },
+      },
+      {
+        ...textCase("an action id too long", "[{}]", "next-action"),
+        headers: { "Next-Action": `${id}00`, Origin: origin, "Content-Type": "text/plain" },
+      },
+      {
+        ...textCase("an action id in capitals", "[{}]", "next-action"),
+        headers: { "Next-Action": id.toUpperCase(), Origin: origin, "Content-Type": "text/plain" },
+      },
       multipartCase("a multipart body that is not one", "garbage", "body"),
-      { ...multipartCase("multipart without a boundary", multipartBody([["0", "[]"]]), "body"), headers: { "Next-Action": id, Origin: origin, "Content-Type": "multipart/form-data" } },
+      {
+        ...multipartCase("multipart without a boundary", multipartBody([["0", "[]"]]), "body"),
+        headers: { "Next-Action": id, Origin: origin, "Content-Type": "multipart/form-data" },
+      },
       multipartCase("multipart without the arguments", multipartBody([["1_email", "ada@lantern-reach.example"]]), "0"),
       multipartCase("multipart arguments that are not JSON", multipartBody([["0", "[{"]]), "0"),
       multipartCase("multipart arguments that are an object", multipartBody([["0", "{}"]]), "0"),

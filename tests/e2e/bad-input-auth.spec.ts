@@ -60,7 +60,13 @@ test.describe("bad input: next-auth's endpoints", () => {
     const notTakingPost = (path: string): RefusalCase => formCase(`POST ${path}`, "path", password, { url: path, status: 404 });
 
     const cases: RefusalCase[] = [
-      { label: "JSON body", field: "content-type", status: 415, headers: { "Content-Type": "application/json" }, body: JSON.stringify(Object.fromEntries(password)) },
+      {
+        label: "JSON body",
+        field: "content-type",
+        status: 415,
+        headers: { "Content-Type": "application/json" },
+        body: JSON.stringify(Object.fromEntries(password)),
+      },
       { label: "malformed JSON", field: "content-type", status: 415, headers: { "Content-Type": "application/json" }, body: "{not json" },
       { label: "plain text", field: "content-type", status: 415, headers: { "Content-Type": "text/plain" }, body: validBody },
       { label: "no content type", field: "content-type", status: 415, headers: { "Content-Type": "" }, body: validBody },
@@ -76,10 +82,14 @@ test.describe("bad input: next-auth's endpoints", () => {
       formCase("__proto__ field", "__proto__", [...password, ["__proto__", "x"]]),
       formCase("array-style field", "email[]", [...password, ["email[]", athlete]]),
       formCase("redirect neither true nor false", "redirect", [...password, ["redirect", "maybe"]]),
-      formCase("charset in the content type, csrfToken missing", "csrfToken", password.slice(0, 2), { headers: { "Content-Type": `${form}; charset=UTF-8` } }),
+      formCase("charset in the content type, csrfToken missing", "csrfToken", password.slice(0, 2), {
+        headers: { "Content-Type": `${form}; charset=UTF-8` },
+      }),
       ...actionCases("callback/password", password),
       ...actionCases("callback/link", link),
-      formCase("link token of the wrong length", "token", [["token", "A".repeat(42)], ...link.slice(1)], { url: "/api/auth/callback/link" }),
+      formCase("link token of the wrong length", "token", [["token", "A".repeat(42)], ...link.slice(1)], {
+        url: "/api/auth/callback/link",
+      }),
       formCase("link with a password field", "password", [...link, ["password", "x"]], { url: "/api/auth/callback/link" }),
       ...actionCases("signout", signout),
       formCase("signout with an e-mail field", "email", [...signout, ["email", athlete]], { url: "/api/auth/signout" }),

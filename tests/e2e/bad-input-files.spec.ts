@@ -12,7 +12,12 @@ import { tinyPngBase64 } from "../support/route-guard-table";
 const png = Buffer.from(tinyPngBase64, "base64");
 const gif = Buffer.from("R0lGODlhAQABAIAAAAAAAP///yH5BAEAAAAALAAAAAABAAEAAAIBRAA7", "base64");
 // A RIFF/WEBP header: an allowed evidence photo type, not an allowed logo type.
-const webp = Buffer.concat([Buffer.from("RIFF"), Buffer.from([0x1a, 0, 0, 0]), Buffer.from("WEBPVP8L"), Buffer.from([0x0d, 0, 0, 0, 0x2f, 0, 0, 0, 0x10, 0x07, 0x10, 0x11, 0x11, 0x88, 0x88, 0xfe, 0x07, 0])]);
+const webp = Buffer.concat([
+  Buffer.from("RIFF"),
+  Buffer.from([0x1a, 0, 0, 0]),
+  Buffer.from("WEBPVP8L"),
+  Buffer.from([0x0d, 0, 0, 0, 0x2f, 0, 0, 0, 0x10, 0x07, 0x10, 0x11, 0x11, 0x88, 0x88, 0xfe, 0x07, 0]),
+]);
 const pdf = Buffer.from("%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n");
 const svg = Buffer.from('<svg xmlns="http://www.w3.org/2000/svg" width="1" height="1"><script>alert(1)</script></svg>');
 const randomBytes = Buffer.from(Array.from({ length: 1024 }, (_, index) => (index * 73 + 41) % 256));
@@ -23,13 +28,21 @@ function filePart(buffer: Buffer, name = "photo.png", mimeType = "image/png"): M
 
 /** A hand-built multipart body, for boundaries and parts no client library would send. */
 function rawMultipart(label: string, body: string | Buffer, contentType: string, field = "file", status?: number): RefusalCase {
-  return { label, field, body: typeof body === "string" ? Buffer.from(body) : body, headers: { "Content-Type": contentType }, ...(status ? { status } : {}) };
+  return {
+    label,
+    field,
+    body: typeof body === "string" ? Buffer.from(body) : body,
+    headers: { "Content-Type": contentType },
+    ...(status ? { status } : {}),
+  };
 }
 
 const crlf = "\r\n";
 const pngPart = (boundary: string, name = "file") =>
   Buffer.concat([
-    Buffer.from(`--${boundary}${crlf}Content-Disposition: form-data; name="${name}"; filename="a.png"${crlf}Content-Type: image/png${crlf}${crlf}`),
+    Buffer.from(
+      `--${boundary}${crlf}Content-Disposition: form-data; name="${name}"; filename="a.png"${crlf}Content-Type: image/png${crlf}${crlf}`,
+    ),
     png,
     Buffer.from(`${crlf}--${boundary}--${crlf}`),
   ]);
@@ -39,9 +52,21 @@ function uploadCases(options: { maxBytes: number; notAllowed: Buffer[] }): Refus
   const cases: RefusalCase[] = [
     { label: "no body, no content type", field: "content-type", status: 415 },
     { label: "PNG bytes as the raw body", field: "content-type", status: 415, body: png, headers: { "Content-Type": "image/png" } },
-    { label: "JSON body", field: "content-type", status: 415, body: JSON.stringify({ file: tinyPngBase64 }), headers: { "Content-Type": "application/json" } },
+    {
+      label: "JSON body",
+      field: "content-type",
+      status: 415,
+      body: JSON.stringify({ file: tinyPngBase64 }),
+      headers: { "Content-Type": "application/json" },
+    },
     { label: "plain text body", field: "content-type", status: 415, body: "file=photo.png", headers: { "Content-Type": "text/plain" } },
-    { label: "form encoded", field: "content-type", status: 415, body: `file=${encodeURIComponent(tinyPngBase64)}`, headers: { "Content-Type": "application/x-www-form-urlencoded" } },
+    {
+      label: "form encoded",
+      field: "content-type",
+      status: 415,
+      body: `file=${encodeURIComponent(tinyPngBase64)}`,
+      headers: { "Content-Type": "application/x-www-form-urlencoded" },
+    },
     rawMultipart("multipart/mixed", pngPart("b0undary"), "multipart/mixed; boundary=b0undary", "content-type", 415),
     { label: "no file part (only a note)", field: "file", multipart: { note: "a photo of the collar" } },
     { label: "wrong field name (photo)", field: "file", multipart: { photo: filePart(png) } },
@@ -51,27 +76,78 @@ function uploadCases(options: { maxBytes: number; notAllowed: Buffer[] }): Refus
     { label: "empty file", field: "file", multipart: { file: filePart(Buffer.alloc(0)) } },
     { label: "empty file of no type", field: "file", multipart: { file: filePart(Buffer.alloc(0), "empty", "application/octet-stream") } },
     { label: "text named .png", field: "file", status: 415, multipart: { file: filePart(Buffer.from("not an image at all")) } },
-    { label: "PNG signature, then not a PNG", field: "file", status: 415, multipart: { file: filePart(Buffer.concat([png.subarray(0, 8), Buffer.from("the rest is not an image")])) } },
+    {
+      label: "PNG signature, then not a PNG",
+      field: "file",
+      status: 415,
+      multipart: { file: filePart(Buffer.concat([png.subarray(0, 8), Buffer.from("the rest is not an image")])) },
+    },
     { label: "PDF named .png", field: "file", status: 415, multipart: { file: filePart(pdf) } },
     { label: "SVG with a script", field: "file", status: 415, multipart: { file: filePart(svg, "logo.svg", "image/svg+xml") } },
     { label: "random bytes", field: "file", status: 415, multipart: { file: filePart(randomBytes, "photo.jpg", "image/jpeg") } },
     { label: "NUL bytes", field: "file", status: 415, multipart: { file: filePart(Buffer.alloc(64)) } },
-    { label: "HTML named .jpg", field: "file", status: 415, multipart: { file: filePart(Buffer.from("<html><body>hi</body></html>"), "a.jpg", "image/jpeg") } },
-    { label: "path in the file name, text inside", field: "file", status: 415, multipart: { file: filePart(Buffer.from("root:x:0:0"), "../../etc/passwd", "image/png") } },
-    ...options.notAllowed.map((bytes, index): RefusalCase => ({ label: `image of a type not allowed (${index + 1})`, field: "file", status: 415, multipart: { file: filePart(bytes) } })),
-    { label: "file over the limit", field: "file", status: 413, multipart: { file: filePart(Buffer.concat([png, Buffer.alloc(options.maxBytes + 1024)])) } },
+    {
+      label: "HTML named .jpg",
+      field: "file",
+      status: 415,
+      multipart: { file: filePart(Buffer.from("<html><body>hi</body></html>"), "a.jpg", "image/jpeg") },
+    },
+    {
+      label: "path in the file name, text inside",
+      field: "file",
+      status: 415,
+      multipart: { file: filePart(Buffer.from("root:x:0:0"), "../../etc/passwd", "image/png") },
+    },
+    ...options.notAllowed.map((bytes, index): RefusalCase => ({
+      label: `image of a type not allowed (${index + 1})`,
+      field: "file",
+      status: 415,
+      multipart: { file: filePart(bytes) },
+    })),
+    {
+      label: "file over the limit",
+      field: "file",
+      status: 413,
+      multipart: { file: filePart(Buffer.concat([png, Buffer.alloc(options.maxBytes + 1024)])) },
+    },
     { label: "huge text field, no file", field: "file", multipart: { note: "n".repeat(200_000) } },
-    { label: "a thousand parts, no file", field: "file", multipart: Object.fromEntries(Array.from({ length: 1000 }, (_, index) => [`part${index}`, "x"])) },
+    {
+      label: "a thousand parts, no file",
+      field: "file",
+      multipart: Object.fromEntries(Array.from({ length: 1000 }, (_, index) => [`part${index}`, "x"])),
+    },
     rawMultipart("no boundary parameter", pngPart("b0undary"), "multipart/form-data"),
     rawMultipart("empty boundary parameter", pngPart("b0undary"), "multipart/form-data; boundary="),
     rawMultipart("boundary that is not in the body", pngPart("b0undary"), "multipart/form-data; boundary=another-boundary"),
-    rawMultipart("body cut off before the closing boundary", pngPart("b0undary").subarray(0, 120), "multipart/form-data; boundary=b0undary"),
+    rawMultipart(
+      "body cut off before the closing boundary",
+      pngPart("b0undary").subarray(0, 120),
+      "multipart/form-data; boundary=b0undary",
+    ),
     rawMultipart("only the closing boundary", `--b0undary--${crlf}`, "multipart/form-data; boundary=b0undary"),
     rawMultipart("garbage body", randomBytes, "multipart/form-data; boundary=b0undary"),
     rawMultipart("empty body", "", "multipart/form-data; boundary=b0undary"),
-    rawMultipart("part without a Content-Disposition", `--b0undary${crlf}Content-Type: image/png${crlf}${crlf}abc${crlf}--b0undary--${crlf}`, "multipart/form-data; boundary=b0undary"),
-    rawMultipart("boundary of 200 characters, text inside", `--${"b".repeat(200)}${crlf}Content-Disposition: form-data; name="file"; filename="a.png"${crlf}${crlf}text${crlf}--${"b".repeat(200)}--${crlf}`, `multipart/form-data; boundary=${"b".repeat(200)}`, "file", 415),
-    rawMultipart("huge part header", Buffer.concat([Buffer.from(`--b0undary${crlf}Content-Disposition: form-data; name="file"; filename="${"a".repeat(20_000)}.png"${crlf}${crlf}`), Buffer.from("text"), Buffer.from(`${crlf}--b0undary--${crlf}`)]), "multipart/form-data; boundary=b0undary"),
+    rawMultipart(
+      "part without a Content-Disposition",
+      `--b0undary${crlf}Content-Type: image/png${crlf}${crlf}abc${crlf}--b0undary--${crlf}`,
+      "multipart/form-data; boundary=b0undary",
+    ),
+    rawMultipart(
+      "boundary of 200 characters, text inside",
+      `--${"b".repeat(200)}${crlf}Content-Disposition: form-data; name="file"; filename="a.png"${crlf}${crlf}text${crlf}--${"b".repeat(200)}--${crlf}`,
+      `multipart/form-data; boundary=${"b".repeat(200)}`,
+      "file",
+      415,
+    ),
+    rawMultipart(
+      "huge part header",
+      Buffer.concat([
+        Buffer.from(`--b0undary${crlf}Content-Disposition: form-data; name="file"; filename="${"a".repeat(20_000)}.png"${crlf}${crlf}`),
+        Buffer.from("text"),
+        Buffer.from(`${crlf}--b0undary--${crlf}`),
+      ]),
+      "multipart/form-data; boundary=b0undary",
+    ),
   ];
   return cases;
 }
@@ -80,16 +156,30 @@ test.describe("uploads and imports refuse bad input with 4xx JSON naming the fie
   test("POST /api/sign-offs/{id}/evidence", async ({ baseURL }) => {
     test.setTimeout(120_000);
     const session = await apiSession(baseURL!, demo.coach);
-    const queue = (await (await session.get("/api/sign-offs")).json()) as { signOffs: { id: string; athleteName: string; moduleSlug: string }[] };
+    const queue = (await (await session.get("/api/sign-offs")).json()) as {
+      signOffs: { id: string; athleteName: string; moduleSlug: string }[];
+    };
     // Jonah Treloar's waiting sign-off (lib/seed/demo-certification.ts): none of these may add a photo to it.
     const signOffId = queue.signOffs.find((entry) => entry.athleteName === "Jonah Treloar" && entry.moduleSlug === "grip-cleaning")!.id;
     const url = `/api/sign-offs/${signOffId}/evidence`;
     const withPng = { file: filePart(png) };
     const cases: RefusalCase[] = [
       ...uploadCases({ maxBytes: 8 * 1024 * 1024, notAllowed: [gif] }),
-      { label: "unknown sign-off id", field: "sign-off", status: 404, url: "/api/sign-offs/00000000-0000-4000-8000-000000000000/evidence", multipart: withPng },
+      {
+        label: "unknown sign-off id",
+        field: "sign-off",
+        status: 404,
+        url: "/api/sign-offs/00000000-0000-4000-8000-000000000000/evidence",
+        multipart: withPng,
+      },
       { label: "sign-off id not a UUID", field: "id", status: 400, url: "/api/sign-offs/not-a-uuid/evidence", multipart: withPng },
-      { label: "sign-off id SQL-looking", field: "id", status: 400, url: `/api/sign-offs/${encodeURIComponent("' OR '1'='1")}/evidence`, multipart: withPng },
+      {
+        label: "sign-off id SQL-looking",
+        field: "id",
+        status: 400,
+        url: `/api/sign-offs/${encodeURIComponent("' OR '1'='1")}/evidence`,
+        multipart: withPng,
+      },
       { label: "sign-off id huge", field: "id", status: 400, url: `/api/sign-offs/${"9".repeat(2000)}/evidence`, multipart: withPng },
       { label: "sign-off id a number", field: "id", status: 400, url: "/api/sign-offs/-1/evidence", multipart: withPng },
       { label: "sign-off id with a NUL", field: "id", status: 400, url: `/api/sign-offs/${signOffId}%00/evidence`, multipart: withPng },
@@ -103,7 +193,17 @@ test.describe("uploads and imports refuse bad input with 4xx JSON naming the fie
     const session = await apiSession(baseURL!, demo.admin);
     const cases: RefusalCase[] = [
       ...uploadCases({ maxBytes: 2 * 1024 * 1024, notAllowed: [gif, webp] }),
-      { label: "two files, neither an image", field: "file", status: 415, body: Buffer.concat([Buffer.from(`--b0undary${crlf}Content-Disposition: form-data; name="file"; filename="a.png"${crlf}${crlf}text${crlf}--b0undary${crlf}Content-Disposition: form-data; name="file"; filename="b.png"${crlf}${crlf}more${crlf}--b0undary--${crlf}`)]), headers: { "Content-Type": "multipart/form-data; boundary=b0undary" } },
+      {
+        label: "two files, neither an image",
+        field: "file",
+        status: 415,
+        body: Buffer.concat([
+          Buffer.from(
+            `--b0undary${crlf}Content-Disposition: form-data; name="file"; filename="a.png"${crlf}${crlf}text${crlf}--b0undary${crlf}Content-Disposition: form-data; name="file"; filename="b.png"${crlf}${crlf}more${crlf}--b0undary--${crlf}`,
+          ),
+        ]),
+        headers: { "Content-Type": "multipart/form-data; boundary=b0undary" },
+      },
     ];
     await expectAllRefusedNaming(session, { url: "/api/club/logo", method: "POST" }, cases);
     // Nothing was stored: the club still has no logo.

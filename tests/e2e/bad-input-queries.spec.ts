@@ -28,10 +28,14 @@ interface QueryParam {
 /** The malformed queries every parameter of a route must refuse, plus unknown and repeated parameters. */
 function queryCases(path: string, params: QueryParam[]): RefusalCase[] {
   const cases: RefusalCase[] = [];
-  const add = (label: string, field: string, pairs: [string, string][]) => cases.push({ label, field, status: 400, url: withQuery(path, pairs) });
+  const add = (label: string, field: string, pairs: [string, string][]) =>
+    cases.push({ label, field, status: 400, url: withQuery(path, pairs) });
   for (const param of params) {
     const { name, valid } = param;
-    add(`${name} repeated`, name, [[name, valid], [name, valid]]);
+    add(`${name} repeated`, name, [
+      [name, valid],
+      [name, valid],
+    ]);
     add(`${name} huge`, name, [[name, "x".repeat(5000)]]);
     add(`${name} with a control character`, name, [[name, `${valid}\u0000`]]);
     if (!param.freeText) {
@@ -47,7 +51,10 @@ function queryCases(path: string, params: QueryParam[]): RefusalCase[] {
     for (const [label, value] of param.bad ?? []) add(`${name} ${label}`, name, [[name, value]]);
   }
   add("unknown parameter", "sort", [["sort", "name"]]);
-  add("unknown parameter beside valid ones", "debug", [...params.map((param): [string, string] => [param.name, param.valid]), ["debug", "1"]]);
+  add("unknown parameter beside valid ones", "debug", [
+    ...params.map((param): [string, string] => [param.name, param.valid]),
+    ["debug", "1"],
+  ]);
   add("array-style parameter", `${params[0]?.name ?? "filter"}[]`, [[`${params[0]?.name ?? "filter"}[]`, params[0]?.valid ?? "all"]]);
   // (A "__proto__" parameter never reaches the handler: Next drops it while it reads the query.)
   add("constructor parameter", "constructor", [["constructor", "x"]]);
@@ -82,7 +89,13 @@ function malformedIds(): [label: string, segment: string][] {
 function uuidIdCases(url: (id: string) => string, method: string): RefusalCase[] {
   const real = "3f2b8c1e-7d4a-4e9b-a6c5-1b2d3e4f5a6b";
   return [
-    ...malformedIds().map(([label, segment]): RefusalCase => ({ label: `id ${label}`, field: "id", status: 400, url: url(segment), method })),
+    ...malformedIds().map(([label, segment]): RefusalCase => ({
+      label: `id ${label}`,
+      field: "id",
+      status: 400,
+      url: url(segment),
+      method,
+    })),
     { label: "id a UUID without dashes", field: "id", status: 400, url: url(real.replace(/-/g, "")), method },
     { label: "id a UUID in braces", field: "id", status: 400, url: url(encodeURIComponent(`{${real}}`)), method },
     { label: "id a UUID with a character more", field: "id", status: 400, url: url(`${real}0`), method },
@@ -102,8 +115,29 @@ test.describe("query strings and path ids are checked: 4xx JSON naming the param
   test("GET /api/roster", async ({ baseURL }) => {
     const session = await apiSession(baseURL!, demo.coach);
     const cases = queryCases("/api/roster", [
-      { name: "limit", valid: "10", bad: [["zero", "0"], ["over 500", "501"], ["fraction", "1.5"], ["exponent", "1e2"], ["hex", "0x10"], ["plus sign", "+10"], ["twenty digits", "9".repeat(20)], ["words", "ten"]] },
-      { name: "offset", valid: "0", bad: [["fraction", "0.5"], ["over a billion", "1000000001"], ["exponent", "1e9"]] },
+      {
+        name: "limit",
+        valid: "10",
+        bad: [
+          ["zero", "0"],
+          ["over 500", "501"],
+          ["fraction", "1.5"],
+          ["exponent", "1e2"],
+          ["hex", "0x10"],
+          ["plus sign", "+10"],
+          ["twenty digits", "9".repeat(20)],
+          ["words", "ten"],
+        ],
+      },
+      {
+        name: "offset",
+        valid: "0",
+        bad: [
+          ["fraction", "0.5"],
+          ["over a billion", "1000000001"],
+          ["exponent", "1e9"],
+        ],
+      },
     ]);
     await expectAllRefusedNaming(session, { url: "/api/roster" }, cases);
     await session.dispose();
@@ -113,7 +147,12 @@ test.describe("query strings and path ids are checked: 4xx JSON naming the param
     const session = await apiSession(baseURL!, demo.coach);
     const heronId = String(await demoClubRecordId("boats", "Heron"));
     const path = "/api/rig/plans";
-    const unknownBoat = (label: string, value: string): RefusalCase => ({ label, field: "boat", status: 404, url: withQuery(path, [["boat", value]]) });
+    const unknownBoat = (label: string, value: string): RefusalCase => ({
+      label,
+      field: "boat",
+      status: 404,
+      url: withQuery(path, [["boat", value]]),
+    });
     const cases: RefusalCase[] = [
       ...queryCases(path, [
         {
@@ -163,14 +202,26 @@ test.describe("query strings and path ids are checked: 4xx JSON naming the param
   for (const [path, account] of noParameterRoutes) {
     test(`GET ${path} (takes no parameters${account ? "" : ", public"})`, async ({ baseURL }) => {
       const session = account ? await apiSession(baseURL!, account()) : await request.newContext({ baseURL });
-      const unknown = (label: string, pairs: [string, string][], field: string): RefusalCase => ({ label, field, status: 400, url: withQuery(path, pairs) });
+      const unknown = (label: string, pairs: [string, string][], field: string): RefusalCase => ({
+        label,
+        field,
+        status: 400,
+        url: withQuery(path, pairs),
+      });
       const cases: RefusalCase[] = [
         ...["filter", "q", "limit", "offset", "sort", "module", "athlete", "page", "format", "debug"].flatMap((name) => [
           unknown(`${name}=NaN`, [[name, "NaN"]], name),
           unknown(`${name} huge`, [[name, "x".repeat(5000)]], name),
           unknown(`${name} SQL-looking`, [[name, "' OR 1=1 --"]], name),
         ]),
-        unknown("repeated parameter", [["limit", "1"], ["limit", "2"]], "limit"),
+        unknown(
+          "repeated parameter",
+          [
+            ["limit", "1"],
+            ["limit", "2"],
+          ],
+          "limit",
+        ),
         unknown("negative limit", [["limit", "-1"]], "limit"),
         unknown("array-style parameter", [["filter[]", "all"]], "filter[]"),
         unknown("constructor parameter", [["constructor", "x"]], "constructor"),
@@ -184,12 +235,43 @@ test.describe("query strings and path ids are checked: 4xx JSON naming the param
   test("GET /api/roster/matrix/export", async ({ baseURL }) => {
     const session = await apiSession(baseURL!, demo.coach);
     const cases = queryCases("/api/roster/matrix/export", [
-      { name: "filter", valid: "cleared", bad: [["unknown", "everyone"], ["a near miss", "waiting_for_me"], ["a number", "1"], ["a list", "cleared,not-cleared"], ["true", "true"], ["with a plus", "not+cleared"], ["accented", "cléared"]] },
-      { name: "q", valid: "ada", freeText: true, bad: [["of 101 characters", "a".repeat(101)], ["with a line break", "ada\nbilal"], ["with a tab", "ada\tbilal"], ["with an escape character", "\u001b[31mada"]] },
+      {
+        name: "filter",
+        valid: "cleared",
+        bad: [
+          ["unknown", "everyone"],
+          ["a near miss", "waiting_for_me"],
+          ["a number", "1"],
+          ["a list", "cleared,not-cleared"],
+          ["true", "true"],
+          ["with a plus", "not+cleared"],
+          ["accented", "cléared"],
+        ],
+      },
+      {
+        name: "q",
+        valid: "ada",
+        freeText: true,
+        bad: [
+          ["of 101 characters", "a".repeat(101)],
+          ["with a line break", "ada\nbilal"],
+          ["with a tab", "ada\tbilal"],
+          ["with an escape character", "\u001b[31mada"],
+        ],
+      },
     ]);
     await expectAllRefusedNaming(session, { url: "/api/roster/matrix/export" }, cases);
     // What the roster page links to still works, an empty search included.
-    expect((await session.get(withQuery("/api/roster/matrix/export", [["filter", "all"], ["q", ""]]))).status()).toBe(200);
+    expect(
+      (
+        await session.get(
+          withQuery("/api/roster/matrix/export", [
+            ["filter", "all"],
+            ["q", ""],
+          ]),
+        )
+      ).status(),
+    ).toBe(200);
     await session.dispose();
   });
 
@@ -198,20 +280,57 @@ test.describe("query strings and path ids are checked: 4xx JSON naming the param
       test.setTimeout(120_000);
       const session = await apiSession(baseURL!, demo.admin);
       const path = `/api/register/${format}`;
-      const dateBad: [string, string][] = [["not a date", "yesterday"], ["30 February", "2026-02-30"], ["month 13", "2026-13-01"], ["without zeros", "2026-1-1"], ["with a time", "2026-01-01T00:00:00Z"], ["a five-digit year", "20260-01-01"]];
+      const dateBad: [string, string][] = [
+        ["not a date", "yesterday"],
+        ["30 February", "2026-02-30"],
+        ["month 13", "2026-13-01"],
+        ["without zeros", "2026-1-1"],
+        ["with a time", "2026-01-01T00:00:00Z"],
+        ["a five-digit year", "20260-01-01"],
+      ];
       const cases: RefusalCase[] = [
         ...queryCases(path, [
-          { name: "module", valid: "overall-length", bad: [["unknown", "no-such-module"], ["path-like", "../overall-length"]] },
+          {
+            name: "module",
+            valid: "overall-length",
+            bad: [
+              ["unknown", "no-such-module"],
+              ["path-like", "../overall-length"],
+            ],
+          },
           { name: "kind", valid: "module", bad: [["unknown", "badge"]] },
-          { name: "status", valid: "valid", bad: [["unknown", "lapsed"], ["a list", "valid,expired"]] },
+          {
+            name: "status",
+            valid: "valid",
+            bad: [
+              ["unknown", "lapsed"],
+              ["a list", "valid,expired"],
+            ],
+          },
           { name: "from", valid: "2026-01-01", bad: dateBad },
           { name: "to", valid: "2026-12-31", bad: dateBad },
         ]),
-        { label: "from after to", field: "to", status: 400, url: withQuery(path, [["from", "2026-06-01"], ["to", "2026-05-01"]]) },
+        {
+          label: "from after to",
+          field: "to",
+          status: 400,
+          url: withQuery(path, [
+            ["from", "2026-06-01"],
+            ["to", "2026-05-01"],
+          ]),
+        },
       ];
       await expectAllRefusedNaming(session, { url: path }, cases);
       // The page's own links still work.
-      const linked = await session.get(withQuery(path, [["module", "overall-length"], ["kind", "module"], ["status", "valid"], ["from", "2020-01-01"], ["to", "2099-12-31"]]));
+      const linked = await session.get(
+        withQuery(path, [
+          ["module", "overall-length"],
+          ["kind", "module"],
+          ["status", "valid"],
+          ["from", "2020-01-01"],
+          ["to", "2099-12-31"],
+        ]),
+      );
       expect(linked.status()).toBe(200);
       await session.dispose();
     });
@@ -234,7 +353,12 @@ test.describe("query strings and path ids are checked: 4xx JSON naming the param
       { label: "code with a file extension", field: "code", status: 400, url: url(`${code!}.json`) },
       { label: "code in standard base64", field: "code", status: 400, url: url(encodeURIComponent(`${code!.slice(0, -1)}+`)) },
       { label: "code null", field: "code", status: 400, url: url("null") },
-      { label: "code with a slash inside", field: "code", status: 400, url: url(encodeURIComponent(`${code!.slice(0, 12)}/${code!.slice(13)}`)) },
+      {
+        label: "code with a slash inside",
+        field: "code",
+        status: 400,
+        url: url(encodeURIComponent(`${code!.slice(0, 12)}/${code!.slice(13)}`)),
+      },
       { label: "code with a space inside", field: "code", status: 400, url: url(`${code!.slice(0, 12)}%20${code!.slice(13)}`) },
       { label: "unknown code", field: "code", status: 404, url: url("A".repeat(24)) },
       { label: "unknown code of dashes", field: "code", status: 404, url: url("-".repeat(24)) },
@@ -249,20 +373,32 @@ test.describe("query strings and path ids are checked: 4xx JSON naming the param
 
   test("GET /api/certificates/{id}/pdf", async ({ baseURL }) => {
     const session = await apiSession(baseURL!, demo.admin);
-    await expectAllRefusedNaming(session, { url: "/api/certificates" }, uuidIdCases((id) => `/api/certificates/${id}/pdf`, "GET"));
+    await expectAllRefusedNaming(
+      session,
+      { url: "/api/certificates" },
+      uuidIdCases((id) => `/api/certificates/${id}/pdf`, "GET"),
+    );
     await session.dispose();
   });
 
   test("GET /api/evidence/{id}", async ({ baseURL }) => {
     const session = await apiSession(baseURL!, demo.coach);
-    await expectAllRefusedNaming(session, { url: "/api/evidence" }, uuidIdCases((id) => `/api/evidence/${id}`, "GET"));
+    await expectAllRefusedNaming(
+      session,
+      { url: "/api/evidence" },
+      uuidIdCases((id) => `/api/evidence/${id}`, "GET"),
+    );
     await session.dispose();
   });
 
   test("DELETE /api/evidence/{id}", async ({ baseURL }) => {
     // Only malformed and unknown ids: no case may remove a real photo.
     const session = await apiSession(baseURL!, demo.coach);
-    await expectAllRefusedNaming(session, { url: "/api/evidence" }, uuidIdCases((id) => `/api/evidence/${id}`, "DELETE"));
+    await expectAllRefusedNaming(
+      session,
+      { url: "/api/evidence" },
+      uuidIdCases((id) => `/api/evidence/${id}`, "DELETE"),
+    );
     await session.dispose();
   });
 
@@ -288,7 +424,14 @@ test.describe("query strings and path ids are checked: 4xx JSON naming the param
       { label: "unknown module: 1e308", field: "slug", status: 404, url: url("1e308") },
       { label: "unknown module: null", field: "slug", status: 404, url: url("null") },
       { label: "unknown module: a longer name", field: "slug", status: 404, url: url("overall-length-advanced") },
-      { label: "unknown module with a JSON body", field: "slug", status: 404, url: url("no-such-module"), body: "{not json", headers: { "Content-Type": "application/json" } },
+      {
+        label: "unknown module with a JSON body",
+        field: "slug",
+        status: 404,
+        url: url("no-such-module"),
+        body: "{not json",
+        headers: { "Content-Type": "application/json" },
+      },
     ];
     await expectAllRefusedNaming(session, { url: url("overall-length"), method: "POST" }, cases);
     await session.dispose();

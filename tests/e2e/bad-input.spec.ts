@@ -23,7 +23,10 @@ test.describe("bad input is refused with 4xx JSON naming the field", () => {
       jsonCase({ label: "answer object", body: answers({ value: 1 }) }, "answers.q1"),
       jsonCase({ label: "answer huge number", body: { answers: { q1: 1e400 } } }, "answers.q1"),
       jsonCase({ label: "answer too long", body: answers("9".repeat(300)) }, "answers.q1"),
-      jsonCase({ label: "too many answers", body: { answers: Object.fromEntries(Array.from({ length: 25 }, (_, i) => [`q${i}`, "1"])) } }, "answers"),
+      jsonCase(
+        { label: "too many answers", body: { answers: Object.fromEntries(Array.from({ length: 25 }, (_, i) => [`q${i}`, "1"])) } },
+        "answers",
+      ),
       jsonCase({ label: "long question id", body: { answers: { ["q".repeat(40)]: "1" } } }, "answers"),
       jsonCase({ label: "answer list too long", body: answers(Array(30).fill("a")) }, "answers.q1"),
       jsonCase({ label: "answer null", body: answers(null) }, "answers.q1"),
@@ -75,8 +78,23 @@ test.describe("bad input is refused with 4xx JSON naming the field", () => {
       jsonCase({ label: "length huge", body: withMeasured({ lengthCm: 1e308 }) }, "measured.lengthCm"),
       jsonCase({ label: "length as text", body: withMeasured({ lengthCm: "287" }) }, "measured.lengthCm"),
       jsonCase({ label: "inboard longer than the oar", body: withMeasured({ inboardCm: 300 }) }, "measured.inboardCm"),
-      jsonCase({ label: "a 3 m scull", body: { ...valid, measured: { lengthCm: 300, inboardCm: 88 }, target: { lengthCm: 300, inboardCm: 88 } } }, "measured.lengthCm"),
-      jsonCase({ label: "a 2 m sweep oar", body: { ...valid, oarType: "sweep", spreadCm: 85, measured: { lengthCm: 200, inboardCm: 80 }, target: { lengthCm: 200, inboardCm: 80 } } }, "measured.lengthCm"),
+      jsonCase(
+        { label: "a 3 m scull", body: { ...valid, measured: { lengthCm: 300, inboardCm: 88 }, target: { lengthCm: 300, inboardCm: 88 } } },
+        "measured.lengthCm",
+      ),
+      jsonCase(
+        {
+          label: "a 2 m sweep oar",
+          body: {
+            ...valid,
+            oarType: "sweep",
+            spreadCm: 85,
+            measured: { lengthCm: 200, inboardCm: 80 },
+            target: { lengthCm: 200, inboardCm: 80 },
+          },
+        },
+        "measured.lengthCm",
+      ),
       jsonCase({ label: "click size zero", body: { ...valid, clickCm: 0 } }, "clickCm"),
       jsonCase({ label: "half swivel negative", body: { ...valid, halfSwivelCm: -2 } }, "halfSwivelCm"),
       jsonCase({ label: "target missing inboard", body: { ...valid, target: { lengthCm: 288 } } }, "target.inboardCm"),
@@ -93,7 +111,13 @@ test.describe("bad input is refused with 4xx JSON naming the field", () => {
     const oarSetId = await demoClubRecordId("oar_sets", "Short-loom sculls");
     const sweepSetId = await demoClubRecordId("oar_sets", "Eight sweeps");
     const scullChange = { oarType: "sculling", measured: { lengthCm: 287, inboardCm: 86.5 }, target: { lengthCm: 288, inboardCm: 88 } };
-    const valid = { clientId: "5f0c2a7e-1d3b-4c8a-9e6f-2b7d4a1c9e30", boatId, oarSetId, request: scullChange, plannedAt: new Date().toISOString() };
+    const valid = {
+      clientId: "5f0c2a7e-1d3b-4c8a-9e6f-2b7d4a1c9e30",
+      boatId,
+      oarSetId,
+      request: scullChange,
+      plannedAt: new Date().toISOString(),
+    };
     const daysFromNow = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString();
     const withRequest = (request: Record<string, unknown>) => ({ ...valid, request: { ...scullChange, ...request } });
     const cases: RefusalCase[] = [
@@ -107,19 +131,40 @@ test.describe("bad input is refused with 4xx JSON naming the field", () => {
       { ...jsonCase({ label: "unknown boat", body: { ...valid, boatId: 999_999 } }, "boatId"), status: 404 },
       { ...jsonCase({ label: "unknown oar set", body: { ...valid, oarSetId: 999_999 } }, "oarSetId"), status: 404 },
       jsonCase({ label: "sweep oars for a single scull", body: { ...valid, oarSetId: sweepSetId } }, "oarSetId"),
-      jsonCase({ label: "plan for sweep oars with sculls", body: { ...valid, request: { oarType: "sweep", measured: { lengthCm: 372, inboardCm: 114 }, target: { lengthCm: 373, inboardCm: 115 } } } }, "oarSetId"),
+      jsonCase(
+        {
+          label: "plan for sweep oars with sculls",
+          body: {
+            ...valid,
+            request: { oarType: "sweep", measured: { lengthCm: 372, inboardCm: 114 }, target: { lengthCm: 373, inboardCm: 115 } },
+          },
+        },
+        "oarSetId",
+      ),
       jsonCase({ label: "plannedAt tomorrow", body: { ...valid, plannedAt: daysFromNow(1) } }, "plannedAt"),
       jsonCase({ label: "plannedAt 40 days ago", body: { ...valid, plannedAt: daysFromNow(-40) } }, "plannedAt"),
       jsonCase({ label: "plannedAt a date only", body: { ...valid, plannedAt: "2026-01-01" } }, "plannedAt"),
       jsonCase({ label: "plannedAt month 13", body: { ...valid, plannedAt: "2026-13-01T10:00:00Z" } }, "plannedAt"),
       jsonCase({ label: "plannedAt as a number", body: { ...valid, plannedAt: Date.now() } }, "plannedAt"),
       jsonCase({ label: "request as text", body: { ...valid, request: "287 to 288" } }, "request"),
-      jsonCase({ label: "request length negative", body: withRequest({ measured: { lengthCm: -287, inboardCm: 86.5 } }) }, "request.measured.lengthCm"),
-      jsonCase({ label: "request length NaN text", body: withRequest({ target: { lengthCm: "NaN", inboardCm: 88 } }) }, "request.target.lengthCm"),
+      jsonCase(
+        { label: "request length negative", body: withRequest({ measured: { lengthCm: -287, inboardCm: 86.5 } }) },
+        "request.measured.lengthCm",
+      ),
+      jsonCase(
+        { label: "request length NaN text", body: withRequest({ target: { lengthCm: "NaN", inboardCm: 88 } }) },
+        "request.target.lengthCm",
+      ),
       jsonCase({ label: "request click zero", body: withRequest({ clickCm: 0 }) }, "request.clickCm"),
       jsonCase({ label: "request unknown oar type", body: withRequest({ oarType: "canoe" }) }, "request.oarType"),
       jsonCase({ label: "request extra field", body: withRequest({ limits: { maxLengthCm: 999 } }) }, "request.limits"),
-      jsonCase({ label: "request handle move past the inboard", body: withRequest({ measured: { lengthCm: 299, inboardCm: 1 }, target: { lengthCm: 250, inboardCm: 88 } }) }, "request.measured.inboardCm"),
+      jsonCase(
+        {
+          label: "request handle move past the inboard",
+          body: withRequest({ measured: { lengthCm: 299, inboardCm: 1 }, target: { lengthCm: 250, inboardCm: 88 } }),
+        },
+        "request.measured.inboardCm",
+      ),
     ];
     await expectAllRefusedNaming(session, { url: "/api/rig/plans", method: "POST" }, cases);
     // None of them was recorded: the coach's first real save is new.

@@ -7,10 +7,7 @@ import { demo, openNewestMailTo, signIn } from "./support/auth";
 
 /** Seeded by lib/seed/demo-certification.ts: every quiz passed, no sign-off yet. */
 const carys = "carys@lantern-reach.example";
-const tinyPng = Buffer.from(
-  "iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==",
-  "base64",
-);
+const tinyPng = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==", "base64");
 const modules = [
   { slug: "overall-length", title: "Measuring and setting the overall length" },
   { slug: "setting-inboard", title: "Setting the inboard with the collar" },
@@ -41,17 +38,13 @@ async function signOffFromQueue(coach: Page, title: string, photo = false): Prom
   }
   let photoUrl: string | null = null;
   if (photo) {
-    await coach
-      .getByLabel("Photo evidence (optional)")
-      .setInputFiles({ name: "at-the-rack.png", mimeType: "image/png", buffer: tinyPng });
+    await coach.getByLabel("Photo evidence (optional)").setInputFiles({ name: "at-the-rack.png", mimeType: "image/png", buffer: tinyPng });
     await expect(coach.getByTestId("photo-status")).toContainText("Photo 1 added");
     photoUrl = await coach.getByRole("img", { name: "Evidence photo 1" }).getAttribute("src");
   }
   await expect(coach.getByTestId("assessment-outcome")).toContainText("Every item met");
   await coach.getByRole("button", { name: "Record the sign-off" }).click();
-  await expect(coach.getByTestId("assessment-status")).toContainText(
-    /Signed off\. Certificate [A-Z]+-\d{4}-\d{4}/,
-  );
+  await expect(coach.getByTestId("assessment-status")).toContainText(/Signed off\. Certificate [A-Z]+-\d{4}-\d{4}/);
   return photoUrl;
 }
 
@@ -62,9 +55,7 @@ test.describe("certification", () => {
   let pdfPath = "";
   let serial = "";
 
-  test("an athlete asks, a coach signs off with a photo, the certificate downloads and verifies as valid", async ({
-    browser,
-  }) => {
+  test("an athlete asks, a coach signs off with a photo, the certificate downloads and verifies as valid", async ({ browser }) => {
     const athlete = await pageAs(browser, carys);
     // Every quiz passed: her summary says only the coach's sign-offs are left, not "quiz and practical".
     await athlete.goto("/learn");
@@ -113,9 +104,7 @@ test.describe("certification", () => {
     expect((await other.request.get(photoUrl!)).status()).toBe(404);
   });
 
-  test("the roster shows the athlete as cleared once every required module is signed off", async ({
-    browser,
-  }) => {
+  test("the roster shows the athlete as cleared once every required module is signed off", async ({ browser }) => {
     const athlete = await pageAs(browser, carys);
     const coach = await pageAs(browser, demo.coach);
     for (const entry of modules.slice(1)) {

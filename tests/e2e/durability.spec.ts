@@ -53,9 +53,9 @@ test("200 concurrent submissions, then all 200 replayed: 200 stored results, no 
   const submitAll = () => Promise.all(attempts.map(({ session, attemptId }) => submit(session, attemptId)));
   const first = await submitAll();
   expect(first.filter((response) => response.status() >= 500)).toHaveLength(0);
-  expect(first.map((response, index) => (response.status() === 409 && resent.has(attempts[index]!.attemptId) ? 200 : response.status()))).toEqual(
-    Array(200).fill(200),
-  );
+  expect(
+    first.map((response, index) => (response.status() === 409 && resent.has(attempts[index]!.attemptId) ? 200 : response.status())),
+  ).toEqual(Array(200).fill(200));
   expect(resent.size).toBeLessThan(10);
   const replayed = await submitAll();
   expect(replayed.filter((response) => response.status() >= 500)).toHaveLength(0);

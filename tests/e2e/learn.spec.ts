@@ -67,7 +67,10 @@ test("an athlete reads a lesson, fails the quiz, retakes it, passes, and the cou
   await page.getByRole("button", { name: "Hand in my answers" }).click();
   await expect(page.getByTestId("quiz-outcome")).toContainText("Passed: 100%");
   // The result says "ask a coach to watch you"; the way to ask is one tap away.
-  await expect(page.getByRole("link", { name: "Ask a coach for the practical" })).toHaveAttribute("href", "/learn/setting-inboard/practical");
+  await expect(page.getByRole("link", { name: "Ask a coach for the practical" })).toHaveAttribute(
+    "href",
+    "/learn/setting-inboard/practical",
+  );
   await refreshed;
 
   const attemptsOpened = attemptRequests(page);
@@ -81,7 +84,10 @@ test("an athlete reads a lesson, fails the quiz, retakes it, passes, and the cou
   await page.goBack();
   await expect(page).toHaveURL(/\/learn\/setting-inboard\/quiz$/);
   await expect(page.getByTestId("quiz-passed-summary")).toContainText(`with 100%`);
-  await expect(page.getByRole("link", { name: "Ask a coach for the practical" })).toHaveAttribute("href", "/learn/setting-inboard/practical");
+  await expect(page.getByRole("link", { name: "Ask a coach for the practical" })).toHaveAttribute(
+    "href",
+    "/learn/setting-inboard/practical",
+  );
   await page.goForward();
   await card.getByRole("link", { name: "Practise the quiz" }).click();
   await expect(page.getByTestId("quiz-passed-summary")).toContainText(`with 100%`);
@@ -113,7 +119,9 @@ test("a submitted attempt cannot be submitted again, and another athlete's attem
   await other.close();
 });
 
-test("an order question counts as answered once a step is moved, through a reload; an unmoved order can still be handed in", async ({ page }) => {
+test("an order question counts as answered once a step is moved, through a reload; an unmoved order can still be handed in", async ({
+  page,
+}) => {
   await signIn(page, demo.secondAthlete);
   const { attemptId } = await openQuiz(page, "grip-cleaning");
   const questions = await storedQuestions(attemptId);
@@ -122,7 +130,11 @@ test("an order question counts as answered once a step is moved, through a reloa
   const count = page.getByText(/^\d+ of \d+ answered$/);
   // Its shuffled starting order is not an answer yet.
   await expect(count).toHaveText(`0 of ${total} answered`);
-  await answerQuiz(page, questions.filter((question) => question.kind !== "order"), false);
+  await answerQuiz(
+    page,
+    questions.filter((question) => question.kind !== "order"),
+    false,
+  );
   await expect(count).toHaveText(`${total - 1} of ${total} answered`);
   await page.reload();
   await expect(page.getByTestId("quiz-form")).toBeVisible();
@@ -166,7 +178,9 @@ test("an order question counts as answered once a step is moved, through a reloa
 /** Seeded by lib/seed/demo-certification.ts; no other spec changes her quizzes or sign-offs. */
 const elin = "elin@lantern-reach.example";
 
-test("a passed quiz opens on the pass and the way on; only the practise button starts an attempt, which then resumes directly", async ({ page }) => {
+test("a passed quiz opens on the pass and the way on; only the practise button starts an attempt, which then resumes directly", async ({
+  page,
+}) => {
   await signIn(page, elin);
   const opened = attemptRequests(page);
 
@@ -175,9 +189,7 @@ test("a passed quiz opens on the pass and the way on; only the practise button s
   // The demo club sets no time zone: its day is the server's, on this machine.
   const passedOn = formatLongDate(isoDateOf(pass.submittedAt, machineTimeZone()));
   await page.goto("/learn/overall-length/quiz");
-  await expect(page.getByTestId("quiz-passed-summary")).toContainText(
-    `Passed on ${passedOn} with ${Math.round(pass.score * 100)}%.`,
-  );
+  await expect(page.getByTestId("quiz-passed-summary")).toContainText(`Passed on ${passedOn} with ${Math.round(pass.score * 100)}%.`);
   await expect(page.getByRole("link", { name: "See your certificates" })).toHaveAttribute("href", "/learn/certificates");
   // Asked a coach two days ago: on to the practical page.
   await page.goto("/learn/changing-boats/quiz");
@@ -219,7 +231,10 @@ test("a passed quiz opens on the pass and the way on; only the practise button s
   await expect(page.getByTestId("quiz-passed")).toHaveCount(0);
 });
 
-test("a lesson finished without a connection says so beside the lesson, and the button works once back online", async ({ page, context }) => {
+test("a lesson finished without a connection says so beside the lesson, and the button works once back online", async ({
+  page,
+  context,
+}) => {
   await signIn(page, loadAthleteEmail(33));
   await page.goto("/learn/grip-cleaning");
   const finished = page.getByRole("button", { name: "I've read it: start the quiz" });
@@ -243,7 +258,9 @@ test("a lesson finished while the server gives no answer shows the error page, a
   await page.goto("/learn/grip-cleaning");
   const finished = page.getByRole("button", { name: "I've read it: start the quiz" });
   await expect(finished).toBeVisible();
-  await page.route("**/learn/grip-cleaning", (route) => (route.request().method() === "POST" ? route.abort("connectionreset") : route.continue()));
+  await page.route("**/learn/grip-cleaning", (route) =>
+    route.request().method() === "POST" ? route.abort("connectionreset") : route.continue(),
+  );
   await finished.click();
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("Something went wrong");
   await expect(page.getByRole("main").getByRole("alert")).toContainText("the last change you made may not have been");

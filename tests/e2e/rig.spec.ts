@@ -23,7 +23,11 @@ async function showSteps(page: Page, boatLabel: string, measured: { lengthCm: nu
 }
 
 /** What the engine says for a scull change; the page must show the same numbers. */
-function expectedScullPlan(measured: { lengthCm: number; inboardCm: number }, target: { lengthCm: number; inboardCm: number }, spanCm: number) {
+function expectedScullPlan(
+  measured: { lengthCm: number; inboardCm: number },
+  target: { lengthCm: number; inboardCm: number },
+  spanCm: number,
+) {
   return planRigChange({ oarType: "sculling", measured, target, clickCm: 0.5, spanCm, halfSwivelCm: 2, limits: clubLimits });
 }
 
@@ -203,10 +207,15 @@ test("a boat's settings read in plain words, with the overlap convention named",
   await expect(set).toContainText("Span gearing 2.516.");
 
   await page.goto("/rig");
-  await page.getByTestId("rig-boats").getByRole("link", { name: /^Grebe/ }).click();
+  await page
+    .getByTestId("rig-boats")
+    .getByRole("link", { name: /^Grebe/ })
+    .click();
   await expect(page.getByTestId("boat-settings")).toContainText("Spread: 84 cm, from the boat's centre line to the centre of the pin.");
   // Sweep, I 116, spread 84: 116 + 2 − 84 = 34 cm past the centre line (FISA 2006 protocol), 32 cm simple.
-  await expect(page.getByTestId("boat-oar-set")).toContainText("The handle reaches 34 cm past the centre line by the measurement-protocol convention");
+  await expect(page.getByTestId("boat-oar-set")).toContainText(
+    "The handle reaches 34 cm past the centre line by the measurement-protocol convention",
+  );
   await expect(page.getByTestId("boat-oar-set")).toContainText("32 cm without the swivel term");
 });
 
@@ -266,7 +275,12 @@ test("the plan API is public, answers the engine's numbers, and refuses bad valu
   // L 374, I 116, spread 85: O 258, lever ratio 2.224, span gearing 3.035, overlap 33 (FISA 2006 protocol).
   expect(await response.json()).toEqual({
     length: expected.length,
-    inboard: { changeCm: expected.inboard.changeCm, clicks: expected.inboard.clicks, direction: expected.inboard.direction, residualCm: expected.inboard.residualCm },
+    inboard: {
+      changeCm: expected.inboard.changeCm,
+      clicks: expected.inboard.clicks,
+      direction: expected.inboard.direction,
+      residualCm: expected.inboard.residualCm,
+    },
     outboardCm: 258,
     leverRatio: 2.224,
     spanGearing: 3.035,

@@ -1,6 +1,13 @@
 import { expect, test, type APIRequestContext, type BrowserContext, type Locator, type Page } from "@playwright/test";
 import { demo, otherClub, signedInContext } from "./support/auth";
-import { guardRoles, routeGuardRows, tinyPngBase64, type GuardFixtures, type GuardRequest, type GuardRole } from "../support/route-guard-table";
+import {
+  guardRoles,
+  routeGuardRows,
+  tinyPngBase64,
+  type GuardFixtures,
+  type GuardRequest,
+  type GuardRole,
+} from "../support/route-guard-table";
 
 /**
  * The route rows of tests/support/route-guard-table.ts through the real server, each role a real
@@ -58,10 +65,16 @@ test("every route handler answers each role as the guard table says", async ({ b
   const homeAthleteId = athleteId("lena");
   // The demo fleet's Heron and Short-loom sculls, read from the edit links of the coach's fleet page.
   await coachPage!.goto("/roster/fleet");
-  const homeBoatId = await recordIdFrom(coachPage!.locator('[data-testid="fleet-boat"][data-name="Heron"] a[href^="/roster/fleet/boats/"]'));
-  const homeOarSetId = await recordIdFrom(coachPage!.locator('[data-testid="fleet-oar-set"][data-name="Short-loom sculls"] a[href^="/roster/fleet/oar-sets/"]'));
+  const homeBoatId = await recordIdFrom(
+    coachPage!.locator('[data-testid="fleet-boat"][data-name="Heron"] a[href^="/roster/fleet/boats/"]'),
+  );
+  const homeOarSetId = await recordIdFrom(
+    coachPage!.locator('[data-testid="fleet-oar-set"][data-name="Short-loom sculls"] a[href^="/roster/fleet/oar-sets/"]'),
+  );
   // The seeded certification records (lib/seed/demo-certification.ts), from what a coach and an admin can read.
-  const queue = (await (await requests.coach.get("/api/sign-offs")).json()) as { signOffs: { id: string; athleteName: string; moduleSlug: string }[] };
+  const queue = (await (await requests.coach.get("/api/sign-offs")).json()) as {
+    signOffs: { id: string; athleteName: string; moduleSlug: string }[];
+  };
   const waiting = (athleteName: string, moduleSlug: string) => {
     const entry = queue.signOffs.find((signOff) => signOff.athleteName === athleteName && signOff.moduleSlug === moduleSlug);
     expect(entry, `${athleteName}'s waiting ${moduleSlug} sign-off`).toBeTruthy();
@@ -71,7 +84,9 @@ test("every route handler answers each role as the guard table says", async ({ b
   const homeCertificateId = await uuidFrom(adminPage!.getByTestId("athlete-certificates").locator('a[href^="/api/certificates/"]'));
   const homeDecidedSignOffId = await uuidFrom(adminPage!.getByRole("link", { name: "Setting the inboard with the collar" }));
   const register = await (await requests.admin.get("/api/register/csv")).text();
-  const homeVerificationCode = /\/verify\/([A-Za-z0-9_-]{24})/.exec(register.split("\n").find((line) => line.includes("Iris Delacourt")) ?? "")?.[1];
+  const homeVerificationCode = /\/verify\/([A-Za-z0-9_-]{24})/.exec(
+    register.split("\n").find((line) => line.includes("Iris Delacourt")) ?? "",
+  )?.[1];
   expect(homeVerificationCode, "Iris Delacourt's verification code in the register").toBeTruthy();
   // The seed has no evidence photos: the coach adds three to Elin's waiting sign-off, as the form does.
   const elinSignOff = waiting("Elin Marchetti", "changing-boats");
@@ -111,7 +126,9 @@ test("every route handler answers each role as the guard table says", async ({ b
       });
       const body = await response.text();
       if (response.status() !== row.expect[role]) {
-        mismatches.push(`${row.method} ${request.path} (${row.file}) as ${role}: expected ${row.expect[role]}, got ${response.status()} ${body.slice(0, 120)}`);
+        mismatches.push(
+          `${row.method} ${request.path} (${row.file}) as ${role}: expected ${row.expect[role]}, got ${response.status()} ${body.slice(0, 120)}`,
+        );
       }
       if (row.hiddenFromOtherClub && role.startsWith("other") && body.includes(row.hiddenFromOtherClub)) {
         mismatches.push(`${row.method} ${request.path} as ${role} shows ${row.hiddenFromOtherClub}`);

@@ -57,9 +57,7 @@ test.describe("coach and admin edges", () => {
     await page.unrouteAll({ behavior: "wait" });
   });
 
-  test("a coach whose page is stale when another coach suspends sees the suspension after the refusal", async ({
-    browser,
-  }) => {
+  test("a coach whose page is stale when another coach suspends sees the suspension after the refusal", async ({ browser }) => {
     const first = await signedInContext(browser, demo.coach);
     const second = await signedInContext(browser, "coach.ines@lantern-reach.example");
     await first.page.goto("/roster");
@@ -91,7 +89,10 @@ test.describe("coach and admin edges", () => {
     const { context, page: first } = await signedInContext(browser, demo.admin);
     await first.goto("/club/register");
     // Lena's (lib/seed/demo-certification.ts) long-expired grip-cleaning pass: no other spec reads it.
-    await first.getByRole("row", { name: /Lena Fairbrother.*Cleaning the grips/ }).getByRole("link").click();
+    await first
+      .getByRole("row", { name: /Lena Fairbrother.*Cleaning the grips/ })
+      .getByRole("link")
+      .click();
     await expect(first.getByTestId("certificate-status")).toContainText("Expired");
     const second = await context.newPage();
     await second.goto(first.url());
@@ -129,9 +130,7 @@ test.describe("coach and admin edges", () => {
     await filters.getByLabel("Issued from").fill("2026-12-01");
     await filters.getByLabel("Issued to").fill("2026-11-01");
     await filters.getByRole("button", { name: "Show" }).click();
-    await expect(page.getByTestId("register-filter-problem")).toContainText(
-      "“Issued to” is before “Issued from”",
-    );
+    await expect(page.getByTestId("register-filter-problem")).toContainText("“Issued to” is before “Issued from”");
     await expect(page.getByRole("link", { name: "Print-ready PDF" })).toHaveCount(0);
     await expect(page.getByRole("link", { name: "Download CSV" })).toHaveCount(0);
 
@@ -184,9 +183,7 @@ test.describe("coach and admin edges", () => {
     await expect(page).toHaveURL(/\/roster$/);
   });
 
-  test("a coach reads the last day a clearance holds, never 'until' the day it has already run out", async ({
-    page,
-  }) => {
+  test("a coach reads the last day a clearance holds, never 'until' the day it has already run out", async ({ page }) => {
     // Femi (lib/seed/demo-certification.ts) is cleared. Not Greta, whom members.spec.ts makes a coach.
     await signIn(page, demo.coach);
     await page.goto("/roster");
@@ -205,9 +202,7 @@ test.describe("coach and admin edges", () => {
     await expect(certificates).not.toContainText(/\d{4} to \d/);
   });
 
-  test("on a phone the athlete's modules keep their names readable, and an expired pass says it has expired", async ({
-    browser,
-  }) => {
+  test("on a phone the athlete's modules keep their names readable, and an expired pass says it has expired", async ({ browser }) => {
     // Lena (lib/seed/demo-certification.ts) passed every module long enough ago for the passes to lapse.
     const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
     const page = await context.newPage();
@@ -258,7 +253,12 @@ test.describe("coach and admin edges", () => {
     await expect(status).toHaveText("✓ Race day added.");
     await add(day);
     await expect(status).toHaveText("✓ That day is already a race day.");
-    await expect(page.getByTestId("race-days").getByRole("listitem").filter({ hasText: formatIsoDate(day) })).toHaveCount(1);
+    await expect(
+      page
+        .getByTestId("race-days")
+        .getByRole("listitem")
+        .filter({ hasText: formatIsoDate(day) }),
+    ).toHaveCount(1);
 
     // A day the form itself refuses (blank) leaves no earlier answer standing beside its error.
     await add("");
@@ -319,7 +319,9 @@ test.describe("coach and admin edges", () => {
     const day = addDaysIso(localIsoDate(), 402);
     await form.getByLabel("Add a race day").fill(day);
     await form.getByRole("button", { name: "Add race day" }).click();
-    await expect(page.getByTestId("race-day-status")).toContainText("Slipway was updated after this page was opened, so nothing was saved.");
+    await expect(page.getByTestId("race-day-status")).toContainText(
+      "Slipway was updated after this page was opened, so nothing was saved.",
+    );
     expect(refused).toBe(1);
     await expect(form.getByLabel("Add a race day")).toHaveValue(day);
     await page.unroute("**/roster/fleet/care");
@@ -335,7 +337,9 @@ test.describe("coach and admin edges", () => {
     await expect(page.getByText("Failed to fetch")).toHaveCount(0);
   });
 
-  test("the club's time zone sets the day of the cleaning log, on the athletes' page too, and the clock of times shown", async ({ page }) => {
+  test("the club's time zone sets the day of the cleaning log, on the athletes' page too, and the clock of times shown", async ({
+    page,
+  }) => {
     // A zone whose date differs from UTC's right now: UTC+14 from 10:00 UTC, UTC-11 before 11:00 UTC
     // (IANA Time Zone Database, IANA, 2025).
     const zone = new Date().getUTCHours() >= 10 ? "Pacific/Kiritimati" : "Pacific/Pago_Pago";
@@ -361,7 +365,11 @@ test.describe("coach and admin edges", () => {
       // Times are on the club's clock and say so: the administrator signed in minutes ago.
       await page.goto("/club/members");
       const offset = zone === "Pacific/Kiritimati" ? "GMT+14" : "GMT-11";
-      await expect(page.getByRole("cell", { name: new RegExp(`^${formatIsoDate(clubDay).slice(4)}, \\d{2}:\\d{2} ${offset.replace("+", "\\+")}$`) }).first()).toBeVisible();
+      await expect(
+        page
+          .getByRole("cell", { name: new RegExp(`^${formatIsoDate(clubDay).slice(4)}, \\d{2}:\\d{2} ${offset.replace("+", "\\+")}$`) })
+          .first(),
+      ).toBeVisible();
     } finally {
       // Leave the club in the zone the other specs expect (the server's, where they compute "today").
       await save(original);

@@ -4,7 +4,12 @@ import { loadAthleteEmail } from "@/lib/seed/load-athletes";
 
 /** The first family of the body's computed font-family, without quotes. */
 async function bodyFontFamily(page: Page): Promise<string> {
-  return page.evaluate(() => getComputedStyle(document.body).fontFamily.split(",")[0]!.trim().replace(/^["']|["']$/g, ""));
+  return page.evaluate(() =>
+    getComputedStyle(document.body)
+      .fontFamily.split(",")[0]!
+      .trim()
+      .replace(/^["']|["']$/g, ""),
+  );
 }
 
 /** The font files the page has requested so far (resource timing). */
@@ -45,6 +50,8 @@ test.describe("Inter waits for the page to hydrate; text paints in the metric-ma
     expect(await bodyFontFamily(page)).toMatch(/slipwaySans/);
     await page.evaluate(() => document.fonts.ready);
     await expect.poll(() => fontRequests(page)).not.toEqual([]);
-    expect(await page.evaluate(() => [...document.fonts].some((face) => face.status === "loaded" && /slipwaySans/.test(face.family)))).toBe(true);
+    expect(await page.evaluate(() => [...document.fonts].some((face) => face.status === "loaded" && /slipwaySans/.test(face.family)))).toBe(
+      true,
+    );
   });
 });

@@ -96,10 +96,19 @@ beforeAll(async () => {
   cookies.admin = await sessionCookieFor("admin@lantern-reach.example", demoPassword);
   await sessionCookieFor("admin@brackwater.example", secondClubPassword);
 
-  const [admin, lena, hamish, kit, dev, jonah, femi] = await Promise.all(["admin", "lena", "hamish", "kit", "dev", "jonah", "femi"].map(homeUser));
+  const [admin, lena, hamish, kit, dev, jonah, femi] = await Promise.all(
+    ["admin", "lena", "hamish", "kit", "dev", "jonah", "femi"].map(homeUser),
+  );
   const otherAthlete = (await User.findOne({ where: { email: "athlete@brackwater.example" } }))!;
   // The second club has no fleet: one boat and one oar set of its own, for "a record of another club".
-  const otherBoat = await Boat.create({ clubId: otherAthlete.clubId, name: "Far-shore single", boatClass: "1x", spanCm: 160, spreadCm: null, notes: "" });
+  const otherBoat = await Boat.create({
+    clubId: otherAthlete.clubId,
+    name: "Far-shore single",
+    boatClass: "1x",
+    spanCm: 160,
+    spreadCm: null,
+    notes: "",
+  });
   const otherSet = await OarSet.create({
     clubId: otherAthlete.clubId,
     name: "Far-shore sculls",
@@ -137,8 +146,12 @@ beforeAll(async () => {
     kitId: kit!.id,
     devId: dev!.id,
     adaEmail: "ada@lantern-reach.example",
-    jonahWaitingSignOffId: (await PracticalAssessment.findOne({ where: { athleteId: jonah!.id, moduleSlug: "grip-cleaning", status: "waiting" } }))!.id,
-    femiCertificateId: (await Certificate.findOne({ where: { athleteId: femi!.id, kind: "module", moduleSlug: "grip-cleaning", revokedAt: null } }))!.id,
+    jonahWaitingSignOffId: (await PracticalAssessment.findOne({
+      where: { athleteId: jonah!.id, moduleSlug: "grip-cleaning", status: "waiting" },
+    }))!.id,
+    femiCertificateId: (await Certificate.findOne({
+      where: { athleteId: femi!.id, kind: "module", moduleSlug: "grip-cleaning", revokedAt: null },
+    }))!.id,
     invitationToken,
     settingsAsStored: settingsToForm(readClubSettings((await Club.findByPk(admin!.clubId))!.settings)),
   };
@@ -156,9 +169,12 @@ afterAll(async () => {
 let tables: { name: string; updatedAt: boolean }[] = [];
 
 async function tablesOfTheDatabase() {
-  const names = await getSequelize().query<{ name: string }>("SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%'", {
-    type: QueryTypes.SELECT,
-  });
+  const names = await getSequelize().query<{ name: string }>(
+    "SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%'",
+    {
+      type: QueryTypes.SELECT,
+    },
+  );
   const result: { name: string; updatedAt: boolean }[] = [];
   for (const { name } of names) {
     const columns = await getSequelize().query<{ name: string }>(`PRAGMA table_info("${name}")`, { type: QueryTypes.SELECT });
@@ -169,7 +185,10 @@ async function tablesOfTheDatabase() {
 
 async function fingerprint(): Promise<string> {
   const select = tables
-    .map(({ name, updatedAt }) => `(SELECT count(*)${updatedAt ? ` || ' ' || coalesce(max(updated_at), '')` : ""} FROM "${name}") AS "${name}"`)
+    .map(
+      ({ name, updatedAt }) =>
+        `(SELECT count(*)${updatedAt ? ` || ' ' || coalesce(max(updated_at), '')` : ""} FROM "${name}") AS "${name}"`,
+    )
     .join(", ");
   const [counts] = await getSequelize().query(`SELECT ${select}`, { type: QueryTypes.SELECT });
   const outbox = path.join(dataDir, "outbox");
@@ -231,7 +250,12 @@ function outcomeProblems(bad: BadCase, answer: unknown, thrown?: unknown): strin
 }
 
 /** Runs every case and collects what went wrong, so one failure lists them all. */
-async function refusalProblems(action: AnyAction, caller: Caller, cases: BadCase[], check: OutcomeCheck = outcomeProblems): Promise<string[]> {
+async function refusalProblems(
+  action: AnyAction,
+  caller: Caller,
+  cases: BadCase[],
+  check: OutcomeCheck = outcomeProblems,
+): Promise<string[]> {
   const problems: string[] = [];
   const logged = vi.spyOn(console, "error");
   try {
@@ -327,7 +351,8 @@ function strayKeys(valid: Input, emptyObject: string): Variant[] {
   ].filter((variant) => !Object.hasOwn(valid, variant.field));
 }
 
-type FieldKind = "text" | "name" | "choice" | "date" | "email" | "token" | "password" | "number" | "integer" | "id" | "boolean" | "list" | "object";
+type FieldKind =
+  "text" | "name" | "choice" | "date" | "email" | "token" | "password" | "number" | "integer" | "id" | "boolean" | "list" | "object";
 
 interface FieldSpec {
   kind: FieldKind;
@@ -341,7 +366,8 @@ interface FieldSpec {
 function fieldVariants(valid: Input, specs: Record<string, FieldSpec>): Variant[] {
   const variants: Variant[] = [];
   for (const [key, spec] of Object.entries(specs)) {
-    const add = (label: string, value: unknown) => variants.push({ label: `${key} ${label}`, input: { ...valid, [key]: value }, field: key });
+    const add = (label: string, value: unknown) =>
+      variants.push({ label: `${key} ${label}`, input: { ...valid, [key]: value }, field: key });
     if (!spec.optional) {
       const rest = { ...valid };
       delete rest[key];
@@ -519,7 +545,9 @@ const validOarSet = (fixtures: Fixtures) => ({
 });
 /** The seeded short-loom sculls (lib/seed/demo-fleet.ts) as the edit form sends them, still linked to Heron only. */
 const shortLoomAsSeeded = (fixtures: Fixtures) => {
-  const { name, oarType, oarCount, targetLengthCm, targetInboardCm, clickCm, handleMechanism } = demoOarSets.find((set) => set.name === "Short-loom sculls")!;
+  const { name, oarType, oarCount, targetLengthCm, targetInboardCm, clickCm, handleMechanism } = demoOarSets.find(
+    (set) => set.name === "Short-loom sculls",
+  )!;
   return { name, oarType, oarCount, targetLengthCm, targetInboardCm, clickCm, handleMechanism, boatIds: [fixtures.heronId] };
 };
 const oarSetSpecs: Record<string, FieldSpec> = {
@@ -656,14 +684,27 @@ describe("the fleet's actions (as a coach)", () => {
   table("removeRaceDayAction", {
     action: fleetActions.removeRaceDayAction,
     as: "coach",
-    cases: () => single(objectVariants({ raceDay: "2001-01-01" }, "raceDay", { raceDay: { kind: "date" } }, dateVariants("raceDay", { raceDay: "2001-01-01" }))),
+    cases: () =>
+      single(
+        objectVariants(
+          { raceDay: "2001-01-01" },
+          "raceDay",
+          { raceDay: { kind: "date" } },
+          dateVariants("raceDay", { raceDay: "2001-01-01" }),
+        ),
+      ),
     valid: () => [{ raceDay: "2001-01-01" }],
   });
 
   table("setHumidSpellAction", {
     action: fleetActions.setHumidSpellAction,
     as: "coach",
-    cases: () => single(objectVariants({ humidSpell: false }, "humidSpell", { humidSpell: { kind: "boolean" } }, [v("humidSpell \"on\"", { humidSpell: "on" }, "humidSpell")])),
+    cases: () =>
+      single(
+        objectVariants({ humidSpell: false }, "humidSpell", { humidSpell: { kind: "boolean" } }, [
+          v('humidSpell "on"', { humidSpell: "on" }, "humidSpell"),
+        ]),
+      ),
     valid: () => [{ humidSpell: false }],
   });
 
@@ -784,10 +825,22 @@ describe("clearance and sign-offs (as a coach)", () => {
           "items",
           { items: { kind: "object" }, note: { kind: "text", blankAllowed: true }, evidenceIds: { kind: "list", optional: true } },
           [
-            v("items missing one verdict", { ...validAssessment(), items: { ...gripItems, "reports-torn-grip": undefined } }, "items.reports-torn-grip"),
-            v("items with another module's item", { ...validAssessment(), items: { ...gripItems, "plans-clicks": "met" } }, "items.plans-clicks"),
+            v(
+              "items missing one verdict",
+              { ...validAssessment(), items: { ...gripItems, "reports-torn-grip": undefined } },
+              "items.reports-torn-grip",
+            ),
+            v(
+              "items with another module's item",
+              { ...validAssessment(), items: { ...gripItems, "plans-clicks": "met" } },
+              "items.plans-clicks",
+            ),
             v("items with a __proto__ key", { ...validAssessment(), items: withProtoKey(gripItems, "met") }, "items.__proto__"),
-            v("a verdict that is no verdict", { ...validAssessment(), items: { ...gripItems, "wears-protection": "passed" } }, "items.wears-protection"),
+            v(
+              "a verdict that is no verdict",
+              { ...validAssessment(), items: { ...gripItems, "wears-protection": "passed" } },
+              "items.wears-protection",
+            ),
             v("a verdict true", { ...validAssessment(), items: { ...gripItems, "wears-protection": true } }, "items.wears-protection"),
             v("a verdict null", { ...validAssessment(), items: { ...gripItems, "wears-protection": null } }, "items.wears-protection"),
             v("a verdict huge", { ...validAssessment(), items: { ...gripItems, "wears-protection": huge } }, "items.wears-protection"),
@@ -797,7 +850,11 @@ describe("clearance and sign-offs (as a coach)", () => {
             v("note too long", { ...validAssessment(), note: "n".repeat(2001) }, "note"),
             v("evidenceIds holding no UUID", { ...validAssessment(), evidenceIds: ["photo-1"] }, "evidenceIds"),
             v("evidenceIds holding a number", { ...validAssessment(), evidenceIds: [7] }, "evidenceIds"),
-            v("evidenceIds over three", { ...validAssessment(), evidenceIds: [randomUUID(), randomUUID(), randomUUID(), randomUUID()] }, "evidenceIds"),
+            v(
+              "evidenceIds over three",
+              { ...validAssessment(), evidenceIds: [randomUUID(), randomUUID(), randomUUID(), randomUUID()] },
+              "evidenceIds",
+            ),
             v("evidenceIds an unknown photo", { ...validAssessment(), evidenceIds: [randomUUID()] }, "evidenceIds"),
           ],
         ),
@@ -883,10 +940,18 @@ describe("the club's administration (as an admin)", () => {
             v("clearanceModules empty", { ...settings(), clearanceModules: [] }, "clearanceModules"),
             v("clearanceModules an unknown module", { ...settings(), clearanceModules: ["sculling-backwards"] }, "clearanceModules"),
             v("clearanceModules a title, not a slug", { ...settings(), clearanceModules: ["Overall length"] }, "clearanceModules"),
-            v("clearanceModules over 30", { ...settings(), clearanceModules: Array.from({ length: 31 }, () => "overall-length") }, "clearanceModules"),
+            v(
+              "clearanceModules over 30",
+              { ...settings(), clearanceModules: Array.from({ length: 31 }, () => "overall-length") },
+              "clearanceModules",
+            ),
             v("clearanceModules holding a huge slug", { ...settings(), clearanceModules: ["a".repeat(5000)] }, "clearanceModules"),
             v("limits without sweep", { ...settings(), limits: { sculling: settings().limits.sculling } }, "limits.sweep"),
-            v("limits with another oar type", { ...settings(), limits: { ...settings().limits, coastal: settings().limits.sculling } }, "limits.coastal"),
+            v(
+              "limits with another oar type",
+              { ...settings(), limits: { ...settings().limits, coastal: settings().limits.sculling } },
+              "limits.coastal",
+            ),
             v("limits an array", { ...settings(), limits: [settings().limits.sculling] }, "limits"),
             v("a minimum above its maximum", withSculling({ minLengthCm: 300, maxLengthCm: 290 }), "limits.sculling.maxLengthCm"),
             v("a limit as text", withSculling({ minLengthCm: "280" }), "limits.sculling.minLengthCm"),
@@ -910,7 +975,11 @@ describe("the club's administration (as an admin)", () => {
       v("memberId with spaces", { ...valid, memberId: ` ${String(valid.memberId)} ` }, "memberId"),
       v(`${second} unknown`, { ...valid, [second]: "captain" }, second),
       v(`${second} in capitals`, { ...valid, [second]: String(valid[second]).toUpperCase() }, second),
-      v("both a role and a status", { ...valid, [second === "role" ? "status" : "role"]: second === "role" ? "active" : "coach" }, second === "role" ? "status" : "role"),
+      v(
+        "both a role and a status",
+        { ...valid, [second === "role" ? "status" : "role"]: second === "role" ? "active" : "coach" },
+        second === "role" ? "status" : "role",
+      ),
     ]);
 
   table("changeMemberRoleAction", {
@@ -976,7 +1045,14 @@ describe("the roster import (as an admin)", () => {
         v("JSON", rosterForm(["roster", csvFile(JSON.stringify({ name: "Rowan" }), "application/json", "roster.json")]), "roster"),
         v("an empty file", rosterForm(["roster", csvFile("")]), "roster"),
         v("over 200 KB", rosterForm(["roster", csvFile(`name,email\n${"a,b@c.example\n".repeat(16_000)}`)]), "roster"),
-        v("over 500 rows", rosterForm(["roster", csvFile(`name,email\n${Array.from({ length: 501 }, (_, i) => `Rower ${i},rower.${i}@roster-action.example`).join("\n")}`)]), "roster"),
+        v(
+          "over 500 rows",
+          rosterForm([
+            "roster",
+            csvFile(`name,email\n${Array.from({ length: 501 }, (_, i) => `Rower ${i},rower.${i}@roster-action.example`).join("\n")}`),
+          ]),
+          "roster",
+        ),
         v("NUL bytes", rosterForm(["roster", csvFile("name,email\nA\u0000B,ab@roster-action.example\n")]), "roster"),
         v("not UTF-8", rosterForm(["roster", csvFile(new Uint8Array([0x6e, 0x61, 0x6d, 0x65, 0x0a, 0xff, 0xfe, 0xfd]))]), "roster"),
         v("UTF-16 text", rosterForm(["roster", csvFile(new Uint8Array(Buffer.from(`\ufeff${goodCsv}`, "utf16le")))]), "roster"),
@@ -986,9 +1062,21 @@ describe("the roster import (as an admin)", () => {
         v("every row without an e-mail", rosterForm(["roster", row("Rowan Tidewell,,athlete")]), "rows.2.email"),
         v("every row with a bad e-mail", rosterForm(["roster", row("Rowan Tidewell,rowan@,athlete")]), "rows.2.email"),
         v("every row without a name", rosterForm(["roster", row(",rowan.tidewell@roster-action.example,athlete")]), "rows.2.name"),
-        v("every row with a huge name", rosterForm(["roster", row(`${"n".repeat(5000)},rowan.tidewell@roster-action.example,athlete`)]), "rows.2.name"),
-        v("every row with a control character in the name", rosterForm(["roster", row("Rowan\u0007Tidewell,rowan.tidewell@roster-action.example,athlete")]), "rows.2.name"),
-        v("every row with an unknown role", rosterForm(["roster", row("Rowan Tidewell,rowan.tidewell@roster-action.example,captain")]), "rows.2.role"),
+        v(
+          "every row with a huge name",
+          rosterForm(["roster", row(`${"n".repeat(5000)},rowan.tidewell@roster-action.example,athlete`)]),
+          "rows.2.name",
+        ),
+        v(
+          "every row with a control character in the name",
+          rosterForm(["roster", row("Rowan\u0007Tidewell,rowan.tidewell@roster-action.example,athlete")]),
+          "rows.2.name",
+        ),
+        v(
+          "every row with an unknown role",
+          rosterForm(["roster", row("Rowan Tidewell,rowan.tidewell@roster-action.example,captain")]),
+          "rows.2.role",
+        ),
         v("every row already a member", rosterForm(["roster", row(`Ada Again,${fx.adaEmail},athlete`)]), "rows.2.email"),
         v("an unclosed quote", rosterForm(["roster", row('"Rowan Tidewell,rowan.tidewell@roster-action.example,athlete')]), "rows.2"),
       ]),
@@ -1104,7 +1192,9 @@ describe("finishing a lesson (as an athlete)", () => {
       () => null,
       (error: unknown) => error,
     );
-    expect(redirectProblems({ label: "the lesson's own form", args: [], field: "/learn/overall-length/quiz" }, undefined, thrown)).toEqual([]);
+    expect(redirectProblems({ label: "the lesson's own form", args: [], field: "/learn/overall-length/quiz" }, undefined, thrown)).toEqual(
+      [],
+    );
     expect(await fingerprint(), "the read is recorded").not.toBe(before);
   });
 });

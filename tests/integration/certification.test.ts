@@ -49,10 +49,7 @@ const matrixExportRoute = await import("@/app/api/roster/matrix/export/route");
 const registerCsvRoute = await import("@/app/api/register/csv/route");
 const registerPdfRoute = await import("@/app/api/register/pdf/route");
 
-const tinyPng = Buffer.from(
-  "iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==",
-  "base64",
-);
+const tinyPng = Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==", "base64");
 // The demo club sets no time zone: its day is the machine's (the e2e server's too).
 const today = isoDateOf(new Date(), machineTimeZone());
 const year = Number(today.slice(0, 4));
@@ -77,10 +74,7 @@ function allMet(slug: string): Record<string, "met"> {
 }
 
 function pdfText(bytes: Uint8Array): string {
-  const file = path.join(
-    os.tmpdir(),
-    `slipway-test-${Date.now()}-${Math.random().toString(36).slice(2)}.pdf`,
-  );
+  const file = path.join(os.tmpdir(), `slipway-test-${Date.now()}-${Math.random().toString(36).slice(2)}.pdf`);
   fs.writeFileSync(file, bytes);
   return execFileSync("pdftotext", ["-layout", file, "-"], { encoding: "utf8" });
 }
@@ -90,18 +84,7 @@ function inkedShareOfFirstPage(bytes: Uint8Array): number {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), "slipway-png-"));
   const file = path.join(dir, "in.pdf");
   fs.writeFileSync(file, bytes);
-  execFileSync("pdftoppm", [
-    "-r",
-    "30",
-    "-gray",
-    "-f",
-    "1",
-    "-l",
-    "1",
-    "-singlefile",
-    file,
-    path.join(dir, "page"),
-  ]);
+  execFileSync("pdftoppm", ["-r", "30", "-gray", "-f", "1", "-l", "1", "-singlefile", file, path.join(dir, "page")]);
   const pgm = fs.readFileSync(path.join(dir, "page.pgm"));
   const header = /^P5\s+(\d+)\s+(\d+)\s+255\s/.exec(pgm.subarray(0, 40).toString("latin1"));
   expect(header).not.toBeNull();
@@ -109,28 +92,14 @@ function inkedShareOfFirstPage(bytes: Uint8Array): number {
   let inked = 0;
   for (const value of pixels) if (value < 200) inked += 1;
   // Also render a PNG, as the README promises, so a broken font shows to whoever opens it.
-  execFileSync("pdftoppm", [
-    "-r",
-    "30",
-    "-png",
-    "-f",
-    "1",
-    "-l",
-    "1",
-    "-singlefile",
-    file,
-    path.join(dir, "page"),
-  ]);
+  execFileSync("pdftoppm", ["-r", "30", "-png", "-f", "1", "-l", "1", "-singlefile", file, path.join(dir, "page")]);
   expect(fs.statSync(path.join(dir, "page.png")).size).toBeGreaterThan(1000);
   return inked / pixels.length;
 }
 
 function multipart(bytes: Buffer | string, fileName: string, type: string): { body: FormData } {
   const form = new FormData();
-  form.append(
-    "file",
-    new File([typeof bytes === "string" ? bytes : new Uint8Array(bytes)], fileName, { type }),
-  );
+  form.append("file", new File([typeof bytes === "string" ? bytes : new Uint8Array(bytes)], fileName, { type }));
   return { body: form };
 }
 
@@ -161,14 +130,8 @@ beforeAll(async () => {
   carys = await actorFor("carys@lantern-reach.example");
   dev = await actorFor("dev@lantern-reach.example");
   const other = await writeTransaction(async (transaction) => {
-    const club = await Club.create(
-      { name: "Heron Bend Sculling Club", slug: "heron-bend", settings: {} },
-      { transaction },
-    );
-    return User.create(
-      { clubId: club.id, email: "coach@heron-bend.example", name: "Other Coach", role: "coach" },
-      { transaction },
-    );
+    const club = await Club.create({ name: "Heron Bend Sculling Club", slug: "heron-bend", settings: {} }, { transaction });
+    return User.create({ clubId: club.id, email: "coach@heron-bend.example", name: "Other Coach", role: "coach" }, { transaction });
   });
   foreignCoach = { id: other.id, clubId: other.clubId, role: "coach", name: other.name, email: other.email };
 });
@@ -184,30 +147,22 @@ describe("practical sign-off", () => {
     const early = signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: null });
     await expect(early).rejects.toBeInstanceOf(ConflictError);
     await expect(early).rejects.toMatchObject({ fieldErrors: { moduleSlug: [expect.stringMatching(/quiz first/)] } });
-    await expect(
-      signOffs.requestSignOff(carys, { moduleSlug: "no-such-module", coachId: null }),
-    ).rejects.toBeInstanceOf(NotFoundError);
+    await expect(signOffs.requestSignOff(carys, { moduleSlug: "no-such-module", coachId: null })).rejects.toBeInstanceOf(NotFoundError);
   });
 
   it("is asked for after the quiz, mails the chosen coach and appears in the queue", async () => {
     await passQuiz(carys, "overall-length");
-    await expect(
-      signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: dev.id }),
-    ).rejects.toBeInstanceOf(ValidationError);
+    await expect(signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: dev.id })).rejects.toBeInstanceOf(ValidationError);
     ({ assessmentId } = await signOffs.requestSignOff(carys, {
       moduleSlug: "overall-length",
       coachId: coach.id,
     }));
-    await expect(
-      signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: null }),
-    ).rejects.toThrow(/already asked/);
+    await expect(signOffs.requestSignOff(carys, { moduleSlug: "overall-length", coachId: null })).rejects.toThrow(/already asked/);
     const [mail] = await listOutbox();
     expect(mail?.to).toBe(coach.email);
     expect(mail?.text).toContain(`/roster/sign-offs/${assessmentId}`);
     const queue = await signOffs.signOffQueue(coach);
-    expect(queue).toEqual([
-      expect.objectContaining({ id: assessmentId, athleteName: "Carys Penhallow", forMe: true }),
-    ]);
+    expect(queue).toEqual([expect.objectContaining({ id: assessmentId, athleteName: "Carys Penhallow", forMe: true })]);
     const ines = await actorFor("coach.ines@lantern-reach.example");
     expect((await signOffs.signOffQueue(ines))[0]?.forMe).toBe(false);
     expect((await signOffs.practicalViewFor(carys, "overall-length")).status).toBe("waiting-for-sign-off");
@@ -215,16 +170,10 @@ describe("practical sign-off", () => {
 
   it("can only be assessed by a coach of the athlete's club", async () => {
     const input = { items: allMet("overall-length"), note: "" };
-    await expect(signOffs.recordAssessment(carys, assessmentId, input)).rejects.toBeInstanceOf(
-      ForbiddenError,
-    );
+    await expect(signOffs.recordAssessment(carys, assessmentId, input)).rejects.toBeInstanceOf(ForbiddenError);
     await expect(signOffs.recordAssessment(dev, assessmentId, input)).rejects.toBeInstanceOf(NotFoundError);
-    await expect(signOffs.recordAssessment(foreignCoach, assessmentId, input)).rejects.toBeInstanceOf(
-      NotFoundError,
-    );
-    await expect(signOffs.assessmentForCoach(foreignCoach, assessmentId)).rejects.toBeInstanceOf(
-      NotFoundError,
-    );
+    await expect(signOffs.recordAssessment(foreignCoach, assessmentId, input)).rejects.toBeInstanceOf(NotFoundError);
+    await expect(signOffs.assessmentForCoach(foreignCoach, assessmentId)).rejects.toBeInstanceOf(NotFoundError);
     await expect(signOffs.signOffQueue(carys)).rejects.toBeInstanceOf(ForbiddenError);
   });
 
@@ -233,9 +182,7 @@ describe("practical sign-off", () => {
       signOffs.recordAssessment(coach, assessmentId, { items: { "measures-tip-to-end": "met" }, note: "" }),
     ).rejects.toBeInstanceOf(ValidationError);
     const items = { ...allMet("overall-length"), "moves-handle": "not-yet" };
-    await expect(signOffs.recordAssessment(coach, assessmentId, { items, note: "" })).rejects.toThrow(
-      /practise/,
-    );
+    await expect(signOffs.recordAssessment(coach, assessmentId, { items, note: "" })).rejects.toThrow(/practise/);
     await expect(
       signOffs.recordAssessment(coach, assessmentId, {
         items: allMet("overall-length"),
@@ -252,9 +199,9 @@ describe("practical sign-off", () => {
       note: "Loosen the handle clamp fully before sliding it.",
     });
     expect(recorded).toMatchObject({ outcome: "not-yet", certificates: [], mailed: true });
-    await expect(
-      signOffs.recordAssessment(coach, assessmentId, { items: allMet("overall-length"), note: "" }),
-    ).rejects.toBeInstanceOf(ConflictError);
+    await expect(signOffs.recordAssessment(coach, assessmentId, { items: allMet("overall-length"), note: "" })).rejects.toBeInstanceOf(
+      ConflictError,
+    );
     const view = await signOffs.practicalViewFor(carys, "overall-length");
     expect(view).toMatchObject({
       status: "not-yet",
@@ -280,9 +227,7 @@ describe("practical sign-off", () => {
       note: "Careful and quick.",
     });
     expect(recorded.outcome).toBe("passed");
-    expect(recorded.certificates).toEqual([
-      expect.objectContaining({ kind: "module", serial: `LR-${year}-0001` }),
-    ]);
+    expect(recorded.certificates).toEqual([expect.objectContaining({ kind: "module", serial: `LR-${year}-0001` })]);
     const view = await signOffs.practicalViewFor(carys, "overall-length");
     expect(view.status).toBe("passed");
     expect(view.currentPass).toEqual({ signedOffOn: today, expiresOn: passExpiresOn(today, 12) });
@@ -296,9 +241,7 @@ describe("practical sign-off", () => {
     await passQuiz(carys, "setting-inboard");
     const { recorded } = await signOffAll(carys, coach, "setting-inboard");
     expect(recorded.certificates.map((entry) => entry.serial)).toEqual([`LR-${year}-0002`]);
-    const serials = (await Certificate.findAll({ where: { clubId: carys.clubId } })).map(
-      (entry) => entry.serialNumber,
-    );
+    const serials = (await Certificate.findAll({ where: { clubId: carys.clubId } })).map((entry) => entry.serialNumber);
     expect(new Set(serials).size).toBe(serials.length);
   });
 });
@@ -336,17 +279,12 @@ describe("clearance, suspension, revocation and verification", () => {
     const row = matrix.athletes.find((entry) => entry.id === carys.id)!;
     expect(row.clearance.state).toBe("cleared");
     expect(rosterRowMatches(row, "cleared", "car", matrix.today)).toBe(true);
-    expect(
-      matrix.athletes
-        .filter((entry) => rosterRowMatches(entry, "cleared", "", matrix.today))
-        .map((entry) => entry.name),
-    ).toEqual(["Carys Penhallow"]);
+    expect(matrix.athletes.filter((entry) => rosterRowMatches(entry, "cleared", "", matrix.today)).map((entry) => entry.name)).toEqual([
+      "Carys Penhallow",
+    ]);
     await expect(clearance.rosterMatrix(carys)).rejects.toBeInstanceOf(ForbiddenError);
     session.actor = coach;
-    const response = await matrixExportRoute.GET(
-      new Request("http://test/api/roster/matrix/export?filter=cleared"),
-      undefined,
-    );
+    const response = await matrixExportRoute.GET(new Request("http://test/api/roster/matrix/export?filter=cleared"), undefined);
     expect(response.status).toBe(200);
     const csv = await response.text();
     expect(csv.split("\r\n")).toHaveLength(2);
@@ -355,15 +293,9 @@ describe("clearance, suspension, revocation and verification", () => {
   });
 
   it("is suspended and lifted by a coach with a reason, audited", async () => {
-    await expect(clearance.suspendClearance(carys, carys.id, "Not allowed")).rejects.toBeInstanceOf(
-      ForbiddenError,
-    );
-    await expect(clearance.suspendClearance(dev, carys.id, "Not allowed")).rejects.toBeInstanceOf(
-      NotFoundError,
-    );
-    await expect(clearance.suspendClearance(foreignCoach, carys.id, "Not allowed")).rejects.toBeInstanceOf(
-      NotFoundError,
-    );
+    await expect(clearance.suspendClearance(carys, carys.id, "Not allowed")).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(clearance.suspendClearance(dev, carys.id, "Not allowed")).rejects.toBeInstanceOf(NotFoundError);
+    await expect(clearance.suspendClearance(foreignCoach, carys.id, "Not allowed")).rejects.toBeInstanceOf(NotFoundError);
     await clearance.suspendClearance(coach, carys.id, "Collar found loose at launch");
     await expect(clearance.suspendClearance(coach, carys.id, "again")).rejects.toBeInstanceOf(ConflictError);
     expect((await clearance.clearanceOf(coach, carys.id)).standing.clearance.state).toBe("suspended");
@@ -371,9 +303,7 @@ describe("clearance, suspension, revocation and verification", () => {
     await clearance.liftSuspension(coach, carys.id, "Re-checked with her at the rack");
     expect((await clearance.clearanceOf(coach, carys.id)).standing.clearance.state).toBe("cleared");
     expect((await certificates.verifyCode(clearanceCode))?.status).toBe("valid");
-    expect(await AuditEvent.count({ where: { action: ["clearance.suspended", "clearance.lifted"] } })).toBe(
-      2,
-    );
+    expect(await AuditEvent.count({ where: { action: ["clearance.suspended", "clearance.lifted"] } })).toBe(2);
   });
 
   it("verifies a code publicly with only name, module and dates; unknown codes are just not found", async () => {
@@ -384,9 +314,7 @@ describe("clearance, suspension, revocation and verification", () => {
       title: "Measuring and setting the overall length",
       issuedOn: today,
     });
-    expect(
-      await certificates.verifyCode(`${moduleCode.slice(0, -1)}${moduleCode.endsWith("A") ? "B" : "A"}`),
-    ).toBeNull();
+    expect(await certificates.verifyCode(`${moduleCode.slice(0, -1)}${moduleCode.endsWith("A") ? "B" : "A"}`)).toBeNull();
     expect(await certificates.verifyCode("../../etc/passwd")).toBeNull();
     const response = await verifyRoute.GET(new Request(`http://test/api/verify/${moduleCode}`), {
       params: Promise.resolve({ code: moduleCode }),
@@ -405,25 +333,15 @@ describe("clearance, suspension, revocation and verification", () => {
   });
 
   it("lets only admins revoke, and a revoked module certificate takes the clearance certificate with it", async () => {
-    await expect(
-      certificates.revokeCertificate(coach, moduleCertificateId, "Issued in error"),
-    ).rejects.toBeInstanceOf(ForbiddenError);
-    const result = await certificates.revokeCertificate(
-      admin,
-      moduleCertificateId,
-      "Signed off on the wrong athlete",
-    );
+    await expect(certificates.revokeCertificate(coach, moduleCertificateId, "Issued in error")).rejects.toBeInstanceOf(ForbiddenError);
+    const result = await certificates.revokeCertificate(admin, moduleCertificateId, "Signed off on the wrong athlete");
     expect(result.revoked).toHaveLength(2);
     expect((await certificates.verifyCode(moduleCode))?.status).toBe("revoked");
     expect((await certificates.verifyCode(clearanceCode))?.status).toBe("revoked");
-    await expect(certificates.revokeCertificate(admin, moduleCertificateId, "again")).rejects.toBeInstanceOf(
-      ConflictError,
-    );
+    await expect(certificates.revokeCertificate(admin, moduleCertificateId, "again")).rejects.toBeInstanceOf(ConflictError);
     const standing = (await clearance.clearanceOf(carys)).standing;
     expect(standing.clearance.state).toBe("not-cleared");
-    expect(standing.modules.find((entry) => entry.slug === "overall-length")?.status).toBe(
-      "ready-for-sign-off",
-    );
+    expect(standing.modules.find((entry) => entry.slug === "overall-length")?.status).toBe("ready-for-sign-off");
   });
 });
 
@@ -468,9 +386,9 @@ describe("certificate and register PDFs", () => {
   });
 
   it("lists the register for admins only, filtered by module and status", async () => {
-    await expect(
-      register.registerFor(coach, { module: "", kind: "all", status: "all", from: "", to: "" }),
-    ).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(register.registerFor(coach, { module: "", kind: "all", status: "all", from: "", to: "" })).rejects.toBeInstanceOf(
+      ForbiddenError,
+    );
     const all = await register.registerFor(admin, {
       module: "",
       kind: "all",
@@ -478,9 +396,7 @@ describe("certificate and register PDFs", () => {
       from: "",
       to: "",
     });
-    expect(all.entries.map((entry) => entry.serial)).toEqual(
-      Array.from({ length: 6 }, (_, index) => `LR-${year}-000${index + 1}`),
-    );
+    expect(all.entries.map((entry) => entry.serial)).toEqual(Array.from({ length: 6 }, (_, index) => `LR-${year}-000${index + 1}`));
     const revoked = await register.registerFor(admin, {
       module: "",
       kind: "all",
@@ -699,17 +615,11 @@ describe("upload route handlers", () => {
     expect(own.headers.get("content-disposition")).toMatch(/^inline; filename="evidence-[0-9a-f-]+\.png"$/);
     expect(Buffer.from(await own.arrayBuffer()).equals(tinyPng)).toBe(true);
     session.actor = admin;
-    expect(
-      (await evidenceFileRoute.GET(new Request("http://test"), { params: Promise.resolve({ id }) })).status,
-    ).toBe(200);
+    expect((await evidenceFileRoute.GET(new Request("http://test"), { params: Promise.resolve({ id }) })).status).toBe(200);
     session.actor = carys;
-    expect(
-      (await evidenceFileRoute.GET(new Request("http://test"), { params: Promise.resolve({ id }) })).status,
-    ).toBe(404);
+    expect((await evidenceFileRoute.GET(new Request("http://test"), { params: Promise.resolve({ id }) })).status).toBe(404);
     session.actor = foreignCoach;
-    expect(
-      (await evidenceFileRoute.GET(new Request("http://test"), { params: Promise.resolve({ id }) })).status,
-    ).toBe(404);
+    expect((await evidenceFileRoute.GET(new Request("http://test"), { params: Promise.resolve({ id }) })).status).toBe(404);
 
     const recorded = await signOffs.recordAssessment(coach, assessmentId, {
       items: allMet("overall-length"),
@@ -717,30 +627,20 @@ describe("upload route handlers", () => {
       evidenceIds: [id],
     });
     expect(recorded.outcome).toBe("passed");
-    expect((await signOffs.assessmentForCoach(coach, assessmentId)).photos.map((photo) => photo.id)).toEqual([
-      id,
-    ]);
+    expect((await signOffs.assessmentForCoach(coach, assessmentId)).photos.map((photo) => photo.id)).toEqual([id]);
   });
 
   it("accepts a PNG or JPEG club logo up to 2 MB from admins only, and puts it on certificates", async () => {
     session.actor = coach;
     expect(
-      (
-        await logoRoute.POST(
-          new Request("http://test/logo", { method: "POST", ...multipart(tinyPng, "logo.png", "image/png") }),
-          undefined,
-        )
-      ).status,
+      (await logoRoute.POST(new Request("http://test/logo", { method: "POST", ...multipart(tinyPng, "logo.png", "image/png") }), undefined))
+        .status,
     ).toBe(403);
     session.actor = admin;
     const webp = Buffer.from("UklGRhoAAABXRUJQVlA4TA0AAAAvAAAAEAcQERGIiP4HAA==", "base64");
     expect(
-      (
-        await logoRoute.POST(
-          new Request("http://test/logo", { method: "POST", ...multipart(webp, "logo.png", "image/png") }),
-          undefined,
-        )
-      ).status,
+      (await logoRoute.POST(new Request("http://test/logo", { method: "POST", ...multipart(webp, "logo.png", "image/png") }), undefined))
+        .status,
     ).toBe(415);
     const huge = new Request("http://test/logo", {
       method: "POST",
@@ -752,12 +652,8 @@ describe("upload route handlers", () => {
     });
     expect((await logoRoute.POST(huge, undefined)).status).toBe(413);
     expect(
-      (
-        await logoRoute.POST(
-          new Request("http://test/logo", { method: "POST", ...multipart(tinyPng, "logo.png", "image/png") }),
-          undefined,
-        )
-      ).status,
+      (await logoRoute.POST(new Request("http://test/logo", { method: "POST", ...multipart(tinyPng, "logo.png", "image/png") }), undefined))
+        .status,
     ).toBe(201);
     const club = await Club.findByPk(admin.clubId);
     expect(club?.logoFile).toMatch(/^logo-[0-9a-f-]{36}\.png$/);
@@ -817,10 +713,7 @@ describe("club settings", () => {
     const { clubSettingsForAdmin, updateClubSettings } = await import("@/lib/data/club-admin-settings");
     await writeTransaction(async (transaction) => {
       const club = await Club.findByPk(admin.clubId, { transaction });
-      await club!.update(
-        { settings: { ...club!.settings, raceDays: ["2027-05-01"], fleetNote: "kept" } },
-        { transaction },
-      );
+      await club!.update({ settings: { ...club!.settings, raceDays: ["2027-05-01"], fleetNote: "kept" } }, { transaction });
     });
     const before = await Certificate.findAll({
       where: { clubId: admin.clubId },
@@ -828,9 +721,7 @@ describe("club settings", () => {
     });
     const { form } = await clubSettingsForAdmin(admin);
     await expect(updateClubSettings(coach, form)).rejects.toBeInstanceOf(ForbiddenError);
-    await expect(
-      updateClubSettings(admin, { ...form, clearanceModules: ["no-such-module"] }),
-    ).rejects.toBeInstanceOf(ValidationError);
+    await expect(updateClubSettings(admin, { ...form, clearanceModules: ["no-such-module"] })).rejects.toBeInstanceOf(ValidationError);
     const { changed } = await updateClubSettings(admin, {
       ...form,
       clearanceMonths: 6,
@@ -857,10 +748,7 @@ describe("club settings", () => {
 
 describe("the club's time zone", () => {
   /** Puts the demo club in `settings` for the length of `run`, then restores what was stored. */
-  async function withClubSettings(
-    settings: Record<string, unknown>,
-    run: () => Promise<void>,
-  ): Promise<void> {
+  async function withClubSettings(settings: Record<string, unknown>, run: () => Promise<void>): Promise<void> {
     const stored = await writeTransaction(async (transaction) => {
       const club = (await Club.findByPk(admin.clubId, { transaction }))!;
       const before = club.settings;
@@ -871,9 +759,7 @@ describe("the club's time zone", () => {
       await run();
     } finally {
       vi.useRealTimers();
-      await writeTransaction((transaction) =>
-        Club.update({ settings: stored }, { where: { id: admin.clubId }, transaction }),
-      );
+      await writeTransaction((transaction) => Club.update({ settings: stored }, { where: { id: admin.clubId }, transaction }));
     }
   }
 
@@ -885,94 +771,89 @@ describe("the club's time zone", () => {
 
   it("dates a sign-off on the club's day, expires it from that day, and counts 'today' there", async () => {
     const elin = await actorFor("elin@lantern-reach.example");
-    await withClubSettings(
-      { timeZone: "Pacific/Auckland", clearanceMonths: 12, clearanceModules: ["overall-length"] },
-      async () => {
-        // New Zealand keeps daylight time (UTC+13) from late September to early April (IANA Time Zone
-        // Database (tzdata), IANA, 2025): 17:30 UTC on 1 March 2027 is 06:30 on 2 March at the club.
-        clockAt("2027-03-01T17:30:00Z");
-        await passQuiz(elin, "overall-length");
-        const { assessmentId, recorded } = await signOffAll(elin, coach, "overall-length");
-        expect(recorded.certificates.map((entry) => entry.kind)).toEqual(["module", "clearance"]);
-        const issued = await Certificate.findAll({
-          where: { athleteId: elin.id },
-          order: [["serialNumber", "ASC"]],
-        });
-        expect(issued.map((entry) => [entry.kind, entry.issuedOn, entry.expiresOn])).toEqual([
-          ["module", "2027-03-02", "2028-03-02"],
-          ["clearance", "2027-03-02", "2028-03-02"],
-        ]);
-        expect(issued.map((entry) => entry.serialYear)).toEqual([2027, 2027]);
-        const view = await signOffs.practicalViewFor(elin, "overall-length");
-        expect(view.currentPass).toEqual({ signedOffOn: "2027-03-02", expiresOn: "2028-03-02" });
-        expect(view.latestDecision?.assessedOn).toBe("2027-03-02");
-        const detail = await signOffs.assessmentForCoach(coach, assessmentId);
-        expect([detail.requestedOn, detail.assessedOn]).toEqual(["2027-03-02", "2027-03-02"]);
-        expect((await quizStandingFor(elin, "overall-length")).pass?.passedOn).toBe("2027-03-02");
+    await withClubSettings({ timeZone: "Pacific/Auckland", clearanceMonths: 12, clearanceModules: ["overall-length"] }, async () => {
+      // New Zealand keeps daylight time (UTC+13) from late September to early April (IANA Time Zone
+      // Database (tzdata), IANA, 2025): 17:30 UTC on 1 March 2027 is 06:30 on 2 March at the club.
+      clockAt("2027-03-01T17:30:00Z");
+      await passQuiz(elin, "overall-length");
+      const { assessmentId, recorded } = await signOffAll(elin, coach, "overall-length");
+      expect(recorded.certificates.map((entry) => entry.kind)).toEqual(["module", "clearance"]);
+      const issued = await Certificate.findAll({
+        where: { athleteId: elin.id },
+        order: [["serialNumber", "ASC"]],
+      });
+      expect(issued.map((entry) => [entry.kind, entry.issuedOn, entry.expiresOn])).toEqual([
+        ["module", "2027-03-02", "2028-03-02"],
+        ["clearance", "2027-03-02", "2028-03-02"],
+      ]);
+      expect(issued.map((entry) => entry.serialYear)).toEqual([2027, 2027]);
+      const view = await signOffs.practicalViewFor(elin, "overall-length");
+      expect(view.currentPass).toEqual({ signedOffOn: "2027-03-02", expiresOn: "2028-03-02" });
+      expect(view.latestDecision?.assessedOn).toBe("2027-03-02");
+      const detail = await signOffs.assessmentForCoach(coach, assessmentId);
+      expect([detail.requestedOn, detail.assessedOn]).toEqual(["2027-03-02", "2027-03-02"]);
+      expect((await quizStandingFor(elin, "overall-length")).pass?.passedOn).toBe("2027-03-02");
 
-        const moduleCertificate = issued[0]!;
-        const statusesAt = async (instant: string) => {
-          clockAt(instant);
-          const mine = await certificates.certificatesOfAthlete(elin, elin.id);
-          const { standing, today: clubToday } = await clearance.clearanceOf(elin);
-          return {
-            today: clubToday,
-            certificates: mine.map((entry) => entry.status),
-            module: standing.modules.find((entry) => entry.slug === "overall-length")!.status,
-            clearance: standing.clearance.state,
-            verified: (await certificates.verifyCode(moduleCertificate.verificationCode))!.status,
-          };
+      const moduleCertificate = issued[0]!;
+      const statusesAt = async (instant: string) => {
+        clockAt(instant);
+        const mine = await certificates.certificatesOfAthlete(elin, elin.id);
+        const { standing, today: clubToday } = await clearance.clearanceOf(elin);
+        return {
+          today: clubToday,
+          certificates: mine.map((entry) => entry.status),
+          module: standing.modules.find((entry) => entry.slug === "overall-length")!.status,
+          clearance: standing.clearance.state,
+          verified: (await certificates.verifyCode(moduleCertificate.verificationCode))!.status,
         };
-        // 23:59 on 1 March 2028 at the club: the last day the pass counts.
-        expect(await statusesAt("2028-03-01T10:59:00Z")).toEqual({
-          today: "2028-03-01",
-          certificates: ["valid", "valid"],
-          module: "passed",
-          clearance: "cleared",
-          verified: "valid",
-        });
-        // Midnight at the club, still 1 March in UTC: the pass has expired there.
-        expect(await statusesAt("2028-03-01T11:00:00Z")).toEqual({
-          today: "2028-03-02",
-          certificates: ["expired", "expired"],
-          module: "expired",
-          clearance: "expired",
-          verified: "expired",
-        });
+      };
+      // 23:59 on 1 March 2028 at the club: the last day the pass counts.
+      expect(await statusesAt("2028-03-01T10:59:00Z")).toEqual({
+        today: "2028-03-01",
+        certificates: ["valid", "valid"],
+        module: "passed",
+        clearance: "cleared",
+        verified: "valid",
+      });
+      // Midnight at the club, still 1 March in UTC: the pass has expired there.
+      expect(await statusesAt("2028-03-01T11:00:00Z")).toEqual({
+        today: "2028-03-02",
+        certificates: ["expired", "expired"],
+        module: "expired",
+        clearance: "expired",
+        verified: "expired",
+      });
 
-        // The roster, the public credential, the certificate PDF and the register go by the same day.
-        const matrix = await clearance.rosterMatrix(coach);
-        expect(matrix.today).toBe("2028-03-02");
-        expect(matrix.athletes.find((row) => row.id === elin.id)?.clearance.state).toBe("expired");
-        const badge = (await (
-          await verifyRoute.GET(new Request("http://test"), {
-            params: Promise.resolve({ code: moduleCertificate.verificationCode }),
-          })
-        ).json()) as { description: string };
-        expect(badge.description).toMatch(/: expired\.$/);
-        session.actor = elin;
-        const pdf = await pdfRoute.GET(new Request("http://test"), {
-          params: Promise.resolve({ id: moduleCertificate.id }),
-        });
-        expect(pdfText(new Uint8Array(await pdf.arrayBuffer()))).toContain(
-          "Expired on 2 March 2028: no longer valid.",
-        );
-        const listed = await register.registerFor(admin, {
-          module: "",
-          kind: "all",
-          status: "expired",
-          from: "2027-03-02",
-          to: "2027-03-02",
-        });
-        expect(listed.generatedOn).toBe("2028-03-02");
-        expect(listed.entries.map((entry) => entry.serial)).toEqual(issued.map((entry) => entry.serial));
-        session.actor = admin;
-        const csv = await registerCsvRoute.GET(new Request("http://test/api/register/csv"), undefined);
-        expect(csv.headers.get("content-disposition")).toContain("induction-register-2028-03-02.csv");
-        const printed = await registerPdfRoute.GET(new Request("http://test/api/register/pdf"), undefined);
-        expect(printed.headers.get("content-disposition")).toContain("induction-register-2028-03-02.pdf");
-        expect(pdfText(new Uint8Array(await printed.arrayBuffer()))).toContain("Printed 2028-03-02");
-      },
-    );
+      // The roster, the public credential, the certificate PDF and the register go by the same day.
+      const matrix = await clearance.rosterMatrix(coach);
+      expect(matrix.today).toBe("2028-03-02");
+      expect(matrix.athletes.find((row) => row.id === elin.id)?.clearance.state).toBe("expired");
+      const badge = (await (
+        await verifyRoute.GET(new Request("http://test"), {
+          params: Promise.resolve({ code: moduleCertificate.verificationCode }),
+        })
+      ).json()) as { description: string };
+      expect(badge.description).toMatch(/: expired\.$/);
+      session.actor = elin;
+      const pdf = await pdfRoute.GET(new Request("http://test"), {
+        params: Promise.resolve({ id: moduleCertificate.id }),
+      });
+      expect(pdfText(new Uint8Array(await pdf.arrayBuffer()))).toContain("Expired on 2 March 2028: no longer valid.");
+      const listed = await register.registerFor(admin, {
+        module: "",
+        kind: "all",
+        status: "expired",
+        from: "2027-03-02",
+        to: "2027-03-02",
+      });
+      expect(listed.generatedOn).toBe("2028-03-02");
+      expect(listed.entries.map((entry) => entry.serial)).toEqual(issued.map((entry) => entry.serial));
+      session.actor = admin;
+      const csv = await registerCsvRoute.GET(new Request("http://test/api/register/csv"), undefined);
+      expect(csv.headers.get("content-disposition")).toContain("induction-register-2028-03-02.csv");
+      const printed = await registerPdfRoute.GET(new Request("http://test/api/register/pdf"), undefined);
+      expect(printed.headers.get("content-disposition")).toContain("induction-register-2028-03-02.pdf");
+      expect(pdfText(new Uint8Array(await printed.arrayBuffer()))).toContain("Printed 2028-03-02");
+    });
   });
 });

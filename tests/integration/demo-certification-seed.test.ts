@@ -40,26 +40,19 @@ describe("demo certification seed", () => {
       const row = byEmail.get(`${untouched}@lantern-reach.example`)!;
       expect(Object.values(row.modules).every((cell) => cell.status === "not-started")).toBe(true);
     }
-    expect(
-      Object.values(byEmail.get("carys@lantern-reach.example")!.modules).map((cell) => cell.status),
-    ).toEqual(Array(5).fill("ready-for-sign-off"));
+    expect(Object.values(byEmail.get("carys@lantern-reach.example")!.modules).map((cell) => cell.status)).toEqual(
+      Array(5).fill("ready-for-sign-off"),
+    );
     expect(state("femi")).toBe("cleared");
     expect(state("greta")).toBe("cleared");
     expect(state("hamish")).toBe("suspended");
     expect(state("lena")).toBe("expired");
-    const expiring = matrix.athletes
-      .filter((row) => rosterRowMatches(row, "expiring-soon", "", matrix.today))
-      .map((row) => row.name);
+    const expiring = matrix.athletes.filter((row) => rosterRowMatches(row, "expiring-soon", "", matrix.today)).map((row) => row.name);
     expect(expiring).toEqual(["Greta Quennell"]);
-    expect(byEmail.get("iris@lantern-reach.example")!.modules["overall-length"]?.status).toBe(
-      "ready-for-sign-off",
-    );
+    expect(byEmail.get("iris@lantern-reach.example")!.modules["overall-length"]?.status).toBe("ready-for-sign-off");
     expect(byEmail.get("iris@lantern-reach.example")!.modules["setting-inboard"]?.status).toBe("not-yet");
     expect(byEmail.get("elin@lantern-reach.example")!.waitingForMe).toBe(1);
-    expect((await signOffQueue(coach)).map((entry) => entry.athleteName).sort()).toEqual([
-      "Elin Marchetti",
-      "Jonah Treloar",
-    ]);
+    expect((await signOffQueue(coach)).map((entry) => entry.athleteName).sort()).toEqual(["Elin Marchetti", "Jonah Treloar"]);
     const admin = await actorFor("admin@lantern-reach.example");
     const revoked = await registerFor(admin, {
       module: "",

@@ -205,7 +205,12 @@ describe("saved rig plans", () => {
     await expect(listRigPlans(athlete)).rejects.toBeInstanceOf(ForbiddenError);
     const plans = await listRigPlans(coach, { boatId: osprey!.id });
     expect(plans).toHaveLength(1);
-    expect(plans[0]).toMatchObject({ athleteName: "Ada Whitcombe", boatName: "Osprey", oarSetName: "Test sculls", measured: { lengthCm: 287, inboardCm: 87 } });
+    expect(plans[0]).toMatchObject({
+      athleteName: "Ada Whitcombe",
+      boatName: "Osprey",
+      oarSetName: "Test sculls",
+      measured: { lengthCm: 287, inboardCm: 87 },
+    });
     const grebe = await Boat.findOne({ where: { name: "Grebe" } });
     expect(await listRigPlans(coach, { boatId: grebe!.id })).toEqual([]);
     expect(await listRigPlans(otherClubCoach)).toEqual([]);
@@ -237,7 +242,10 @@ describe("grip-cleaning log", () => {
     const sweeps = await OarSet.findOne({ where: { name: "Eight sweeps" } });
     const before = await cleaningOverview(athlete);
     expect(before.oarSets.find((set) => set.oarSetId === sweeps!.id)?.status).toMatchObject({ due: true, label: "Overdue" });
-    await recordCleaning(athlete, cleaningRecordSchemaFor(today).parse({ oarSetId: sweeps!.id, cleanedOn: today, method: "detergent-brush" }));
+    await recordCleaning(
+      athlete,
+      cleaningRecordSchemaFor(today).parse({ oarSetId: sweeps!.id, cleanedOn: today, method: "detergent-brush" }),
+    );
     const after = await cleaningOverview(athlete);
     const row = after.oarSets.find((set) => set.oarSetId === sweeps!.id);
     expect(row).toMatchObject({ lastCleanedOn: today, lastCleanedBy: "Ada Whitcombe", status: { due: false, icon: "✓" } });
@@ -247,7 +255,9 @@ describe("grip-cleaning log", () => {
   it("refuses future dates, other clubs' sets and members, and 'other' without a note", async () => {
     const today = localIsoDate();
     const sweeps = await OarSet.findOne({ where: { name: "Eight sweeps" } });
-    expect(cleaningRecordSchemaFor(today).safeParse({ oarSetId: sweeps!.id, cleanedOn: addDaysIso(today, 1), method: "wipe-down" }).success).toBe(false);
+    expect(
+      cleaningRecordSchemaFor(today).safeParse({ oarSetId: sweeps!.id, cleanedOn: addDaysIso(today, 1), method: "wipe-down" }).success,
+    ).toBe(false);
     expect(cleaningRecordSchemaFor(today).safeParse({ oarSetId: sweeps!.id, cleanedOn: today, method: "other" }).success).toBe(false);
     const input = cleaningRecordSchemaFor(today).parse({ oarSetId: sweeps!.id, cleanedOn: today, method: "wipe-down" });
     await expect(recordCleaning(otherClubAthlete, input)).rejects.toBeInstanceOf(NotFoundError);
@@ -263,7 +273,8 @@ describe("grip-cleaning log", () => {
     expect(await addRaceDay(coach, race)).toMatchObject({ changed: false, raceDays: expect.arrayContaining([race]) });
     expect(await removeRaceDay(coach, race)).toMatchObject({ changed: true });
     // A day that is not there, and the humid spell as it already is: answered, but nothing written or audited.
-    const calendarAudits = () => AuditEvent.count({ where: { subjectType: "club", action: ["club.race-day-removed", "club.humid-spell"] } });
+    const calendarAudits = () =>
+      AuditEvent.count({ where: { subjectType: "club", action: ["club.race-day-removed", "club.humid-spell"] } });
     const calendarAuditsBefore = await calendarAudits();
     expect(await removeRaceDay(coach, race)).toMatchObject({ changed: false });
     expect(await setHumidSpell(coach, false)).toMatchObject({ changed: false, humidSpell: false });
@@ -289,7 +300,12 @@ describe("weekly cleaning digest", () => {
     const digests = mails.filter((mail) => mail.subject.includes("2030-W02"));
     const recipients = digests.map((mail) => mail.to).sort();
     expect(recipients).toEqual(
-      ["admin@lantern-reach.example", "coach.ines@lantern-reach.example", "coach.tobias@lantern-reach.example", "coach@saltmarsh.example"].sort(),
+      [
+        "admin@lantern-reach.example",
+        "coach.ines@lantern-reach.example",
+        "coach.tobias@lantern-reach.example",
+        "coach@saltmarsh.example",
+      ].sort(),
     );
     const lantern = digests.find((mail) => mail.to === "coach.tobias@lantern-reach.example");
     expect(lantern?.text).toContain("Pair sweeps: due now. No cleaning on record.");
@@ -381,7 +397,12 @@ describe("POST /api/rig/plan", () => {
     const expected = planRigChange({ ...goodPlan, oarType: "sculling", clickCm: 0.5, halfSwivelCm: 2 });
     expect(body).toEqual({
       length: expected.length,
-      inboard: { changeCm: expected.inboard.changeCm, clicks: expected.inboard.clicks, direction: expected.inboard.direction, residualCm: expected.inboard.residualCm },
+      inboard: {
+        changeCm: expected.inboard.changeCm,
+        clicks: expected.inboard.clicks,
+        direction: expected.inboard.direction,
+        residualCm: expected.inboard.residualCm,
+      },
       outboardCm: expected.outboardCm,
       leverRatio: expected.leverRatio,
       spanGearing: expected.spanGearing,
@@ -403,7 +424,17 @@ describe("POST /api/rig/plan", () => {
     ["a negative inboard", { ...goodPlan, measured: { lengthCm: 287, inboardCm: -87 } }, "measured.inboardCm"],
     ["an inboard longer than the oar", { ...goodPlan, target: { lengthCm: 288, inboardCm: 290 } }, "target.inboardCm"],
     ["a 3 m scull", { ...goodPlan, target: { lengthCm: 300, inboardCm: 88 } }, "target.lengthCm"],
-    ["a 2 m sweep oar", { ...goodPlan, oarType: "sweep", spanCm: undefined, measured: { lengthCm: 200, inboardCm: 80 }, target: { lengthCm: 374, inboardCm: 116 } }, "measured.lengthCm"],
+    [
+      "a 2 m sweep oar",
+      {
+        ...goodPlan,
+        oarType: "sweep",
+        spanCm: undefined,
+        measured: { lengthCm: 200, inboardCm: 80 },
+        target: { lengthCm: 374, inboardCm: 116 },
+      },
+      "measured.lengthCm",
+    ],
     ["an unknown oar type", { ...goodPlan, oarType: "paddle" }, "oarType"],
     ["a missing target", { oarType: "sculling", measured: goodPlan.measured }, "target"],
     ["a zero click", { ...goodPlan, clickCm: 0 }, "clickCm"],
@@ -412,7 +443,11 @@ describe("POST /api/rig/plan", () => {
     ["a negative half swivel", { ...goodPlan, halfSwivelCm: -1 }, "halfSwivelCm"],
     ["a null length", { ...goodPlan, measured: { lengthCm: null, inboardCm: 87 } }, "measured.lengthCm"],
     ["an unknown field", { ...goodPlan, limits: { maxLengthCm: 999 } }, "limits"],
-    ["a handle move longer than the inboard", { ...goodPlan, measured: { lengthCm: 299, inboardCm: 1 }, target: { lengthCm: 250, inboardCm: 88 } }, "measured.inboardCm"],
+    [
+      "a handle move longer than the inboard",
+      { ...goodPlan, measured: { lengthCm: 299, inboardCm: 1 }, target: { lengthCm: 250, inboardCm: 88 } },
+      "measured.inboardCm",
+    ],
     ["not JSON", "{lengthCm: 287", "body"],
     ["an array", [goodPlan], "body"],
   ];

@@ -66,7 +66,14 @@ describe("database", () => {
         writeTransaction(async (transaction) => {
           const count = await AuditEvent.count({ transaction });
           await AuditEvent.create(
-            { clubId: club!.id, actorId: null, action: "test.write", subjectType: "test", subjectId: String(index), details: { seen: count } },
+            {
+              clubId: club!.id,
+              actorId: null,
+              action: "test.write",
+              subjectType: "test",
+              subjectId: String(index),
+              details: { seen: count },
+            },
             { transaction },
           );
         }),
@@ -120,7 +127,11 @@ describe("the write connection", () => {
         ),
       );
     const mark = (index: number) =>
-      writeStatement("UPDATE audit_events SET subject_type = ? WHERE action = ? AND subject_id = ?", ["marked", "test.lone", String(index)]);
+      writeStatement("UPDATE audit_events SET subject_type = ? WHERE action = ? AND subject_id = ?", [
+        "marked",
+        "test.lone",
+        String(index),
+      ]);
     // Interleaved: each statement is queued after the transaction creating its row, so it finds that row.
     const outcomes = await Promise.all(Array.from({ length: 20 }, (_, index) => [create(index), mark(index)]).flat());
     expect(outcomes.filter((outcome) => outcome === 1)).toHaveLength(20);
@@ -133,16 +144,30 @@ describe("the write connection", () => {
     const club = await Club.findOne();
     await writeTransaction((transaction) =>
       AuditEvent.bulkCreate(
-        Array.from({ length: 40 }, (_, index) => ({ clubId: club!.id, actorId: null, action: "test.group", subjectType: "test", subjectId: String(index), details: {} })),
+        Array.from({ length: 40 }, (_, index) => ({
+          clubId: club!.id,
+          actorId: null,
+          action: "test.group",
+          subjectType: "test",
+          subjectId: String(index),
+          details: {},
+        })),
         { transaction },
       ),
     );
     const commitsBefore = committedWrites();
-    const mark = (index: number) => writeStatement("UPDATE audit_events SET subject_type = ? WHERE action = ? AND subject_id = ?", ["grouped", "test.group", String(index)]);
+    const mark = (index: number) =>
+      writeStatement("UPDATE audit_events SET subject_type = ? WHERE action = ? AND subject_id = ?", [
+        "grouped",
+        "test.group",
+        String(index),
+      ]);
     // One statement breaks a NOT NULL constraint: it alone is refused, the rest of its group is stored.
     const broken = writeStatement("UPDATE audit_events SET action = NULL WHERE action = ? AND subject_id = ?", ["test.group", "0"]);
     const outcomes = await Promise.allSettled([...Array.from({ length: 40 }, (_, index) => mark(index)), broken]);
-    expect(outcomes.slice(0, 40).map((outcome) => (outcome.status === "fulfilled" ? outcome.value : outcome.reason))).toEqual(Array(40).fill(1));
+    expect(outcomes.slice(0, 40).map((outcome) => (outcome.status === "fulfilled" ? outcome.value : outcome.reason))).toEqual(
+      Array(40).fill(1),
+    );
     expect(outcomes[40]).toMatchObject({ status: "rejected", reason: { code: "SQLITE_CONSTRAINT" } });
     expect(await AuditEvent.count({ where: { action: "test.group", subjectType: "grouped" } })).toBe(40);
     // The first statement commits alone (nothing was queued yet); the other 40 wait for it and go together.
@@ -151,13 +176,25 @@ describe("the write connection", () => {
 
   describe("keyed updates", () => {
     // Sets an event's subject only while it is still "open", as a quiz submission stores a grade once.
-    const markEvent: KeyedUpdate = { table: "audit_events", key: "id", columns: ["subject_type", "subject_id"], condition: "target.subject_type = 'open'" };
+    const markEvent: KeyedUpdate = {
+      table: "audit_events",
+      key: "id",
+      columns: ["subject_type", "subject_id"],
+      condition: "target.subject_type = 'open'",
+    };
 
     async function openEvents(action: string, count: number): Promise<number[]> {
       const club = await Club.findOne();
       const created = await writeTransaction((transaction) =>
         AuditEvent.bulkCreate(
-          Array.from({ length: count }, (_, index) => ({ clubId: club!.id, actorId: null, action, subjectType: "open", subjectId: String(index), details: {} })),
+          Array.from({ length: count }, (_, index) => ({
+            clubId: club!.id,
+            actorId: null,
+            action,
+            subjectType: "open",
+            subjectId: String(index),
+            details: {},
+          })),
           { transaction },
         ),
       );
@@ -192,7 +229,11 @@ describe("the write connection", () => {
       // One group commit, or two if the first update got its turn before the others queued up.
       expect(committedWrites() - commitsBefore).toBeLessThanOrEqual(2);
       // The condition holds the row now: a second update of the same rows changes nothing.
-      expect(await Promise.all(ids.slice(0, 3).map((id) => writeKeyedUpdate(markEvent, id, ["again", "x"])))).toEqual([false, false, false]);
+      expect(await Promise.all(ids.slice(0, 3).map((id) => writeKeyedUpdate(markEvent, id, ["again", "x"])))).toEqual([
+        false,
+        false,
+        false,
+      ]);
       expect(await writeKeyedUpdate(markEvent, -1, ["missing", "x"])).toBe(false);
     });
 
@@ -200,7 +241,11 @@ describe("the write connection", () => {
       const [id] = await openEvents("test.keyed-twice", 1);
       // A slow transaction first, so that both updates queue up in one group behind it.
       const blocker = writeTransaction(() => new Promise((resolve) => setTimeout(resolve, 50)));
-      const [first, second] = await Promise.all([writeKeyedUpdate(markEvent, id!, ["first", "1"]), writeKeyedUpdate(markEvent, id!, ["second", "2"]), blocker]);
+      const [first, second] = await Promise.all([
+        writeKeyedUpdate(markEvent, id!, ["first", "1"]),
+        writeKeyedUpdate(markEvent, id!, ["second", "2"]),
+        blocker,
+      ]);
       expect([first, second]).toEqual([true, false]);
       expect(await subjects("test.keyed-twice")).toEqual([{ subjectType: "first", subjectId: "1" }]);
     });
@@ -209,11 +254,15 @@ describe("the write connection", () => {
       const ids = await openEvents("test.keyed-broken", maxKeyedRows);
       const blocker = writeTransaction(() => new Promise((resolve) => setTimeout(resolve, 50)));
       // subject_type is NOT NULL: the third row's update is refused, the statement it was merged into is retried row by row.
-      const outcomes = await Promise.allSettled(ids.map((id, index) => writeKeyedUpdate(markEvent, id, [index === 2 ? null : "kept", String(index)])));
+      const outcomes = await Promise.allSettled(
+        ids.map((id, index) => writeKeyedUpdate(markEvent, id, [index === 2 ? null : "kept", String(index)])),
+      );
       await blocker;
       expect(outcomes[2]).toMatchObject({ status: "rejected", reason: { code: "SQLITE_CONSTRAINT" } });
       expect(outcomes.filter((outcome) => outcome.status === "fulfilled" && outcome.value === true)).toHaveLength(maxKeyedRows - 1);
-      expect((await subjects("test.keyed-broken")).map((row) => row.subjectType)).toEqual(ids.map((_, index) => (index === 2 ? "open" : "kept")));
+      expect((await subjects("test.keyed-broken")).map((row) => row.subjectType)).toEqual(
+        ids.map((_, index) => (index === 2 ? "open" : "kept")),
+      );
     });
 
     it("keeps the order of plain statements and keyed updates queued between them", async () => {
@@ -242,7 +291,10 @@ describe("the write connection", () => {
     expect(await readStatement(select, ["test.read"])).toEqual([]);
     const club = await Club.findOne();
     await writeTransaction((transaction) =>
-      AuditEvent.create({ clubId: club!.id, actorId: null, action: "test.read", subjectType: "test", subjectId: "r1", details: {} }, { transaction }),
+      AuditEvent.create(
+        { clubId: club!.id, actorId: null, action: "test.read", subjectType: "test", subjectId: "r1", details: {} },
+        { transaction },
+      ),
     );
     await writeStatement("UPDATE audit_events SET subject_id = ? WHERE action = ?", ["r2", "test.read"]);
     expect(await readStatement(select, ["test.read"])).toEqual([{ subjectId: "r2" }]);
@@ -304,7 +356,9 @@ describe("accounts and invitations", () => {
   it("lets only admins invite, mails the link, and accepts it once", async () => {
     const admin = await actorFor("admin@lantern-reach.example");
     const coach = await actorFor("coach.tobias@lantern-reach.example");
-    await expect(inviteMember(coach, { email: "x@lantern-reach.example", name: "X", role: "athlete" })).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(inviteMember(coach, { email: "x@lantern-reach.example", name: "X", role: "athlete" })).rejects.toBeInstanceOf(
+      ForbiddenError,
+    );
     const taken = inviteMember(admin, { email: "ada@lantern-reach.example", name: "Ada", role: "athlete" });
     await expect(taken).rejects.toBeInstanceOf(ConflictError);
     // The refusal names the field, so the invitation form marks the e-mail input.
@@ -322,7 +376,9 @@ describe("accounts and invitations", () => {
 
     await expect(acceptInvitation(token!, "Rowan New", "password123")).rejects.toBeInstanceOf(ValidationError);
     await acceptInvitation(token!, "Rowan New", "oarlock heron tidewater");
-    expect(await authenticateWithPassword("rowan.new@lantern-reach.example", "oarlock heron tidewater")).toMatchObject({ name: "Rowan New" });
+    expect(await authenticateWithPassword("rowan.new@lantern-reach.example", "oarlock heron tidewater")).toMatchObject({
+      name: "Rowan New",
+    });
     await expect(acceptInvitation(token!, "Rowan New", "oarlock heron tidewater")).rejects.toBeInstanceOf(NotFoundError);
     expect(await findPendingInvitation(token!)).toBeNull();
     expect(await AuditEvent.count({ where: { action: "member.invited" } })).toBe(1);

@@ -75,7 +75,9 @@ describe("changing a member's role", () => {
   it("refuses coaches (403), the admin's own account (403) and members of another club (404)", async () => {
     const jonah = await userFor("jonah@lantern-reach.example");
     const adminActor = await actorFor(admin);
-    await expect(changeMemberRole(await actorFor("coach.tobias@lantern-reach.example"), jonah.id, "coach")).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(changeMemberRole(await actorFor("coach.tobias@lantern-reach.example"), jonah.id, "coach")).rejects.toBeInstanceOf(
+      ForbiddenError,
+    );
     await expect(changeMemberRole(adminActor, adminActor.id, "athlete")).rejects.toBeInstanceOf(ForbiddenError);
     await expect(setMemberStatus(adminActor, adminActor.id, "deactivated")).rejects.toBeInstanceOf(ForbiddenError);
     await expect(changeMemberRole(await actorFor("admin@brackwater.example"), jonah.id, "coach")).rejects.toBeInstanceOf(NotFoundError);
@@ -136,7 +138,9 @@ describe("importing a roster", () => {
     ]);
     expect(report.problems[0]?.message).toContain("Already a member");
 
-    const invitations = await Invitation.findAll({ where: { email: ["wren.halloway@lantern-reach.example", "otto.fairlie@lantern-reach.example"] } });
+    const invitations = await Invitation.findAll({
+      where: { email: ["wren.halloway@lantern-reach.example", "otto.fairlie@lantern-reach.example"] },
+    });
     expect(invitations.map((invitation) => invitation.role).sort()).toEqual(["athlete", "coach"]);
     const mail = await listOutbox();
     expect(mail.filter((message) => message.to === "wren.halloway@lantern-reach.example")).toHaveLength(1);
@@ -176,10 +180,22 @@ describe("member route handlers", () => {
 
     const both = await callRoute(memberRoute.PATCH, { method: "PATCH", path, params, cookie, json: { role: "coach", status: "active" } });
     expect(both.status).toBe(400);
-    const badId = await callRoute(memberRoute.PATCH, { method: "PATCH", path: "/api/members/abc", params: { id: "abc" }, cookie, json: { role: "coach" } });
+    const badId = await callRoute(memberRoute.PATCH, {
+      method: "PATCH",
+      path: "/api/members/abc",
+      params: { id: "abc" },
+      cookie,
+      json: { role: "coach" },
+    });
     expect(badId.status).toBe(400);
     const self = await userFor(admin);
-    const own = await callRoute(memberRoute.PATCH, { method: "PATCH", path: `/api/members/${self.id}`, params: { id: String(self.id) }, cookie, json: { status: "deactivated" } });
+    const own = await callRoute(memberRoute.PATCH, {
+      method: "PATCH",
+      path: `/api/members/${self.id}`,
+      params: { id: String(self.id) },
+      cookie,
+      json: { status: "deactivated" },
+    });
     expect(own.status).toBe(403);
   });
 
@@ -199,9 +215,18 @@ describe("member route handlers", () => {
     expect((await callRoute(importRoute.POST, { method: "POST", path, cookie, body: big, contentType: "text/csv" })).status).toBe(413);
     const binary = new Uint8Array([0x6e, 0x61, 0x6d, 0x65, 0x00, 0xff]);
     expect((await callRoute(importRoute.POST, { method: "POST", path, cookie, body: binary, contentType: "text/plain" })).status).toBe(415);
-    const noHeader = await callRoute(importRoute.POST, { method: "POST", path, cookie, body: "just,some\ntext,here\n", contentType: "text/plain" });
+    const noHeader = await callRoute(importRoute.POST, {
+      method: "POST",
+      path,
+      cookie,
+      body: "just,some\ntext,here\n",
+      contentType: "text/plain",
+    });
     expect(noHeader.status).toBe(400);
-    expect(await noHeader.json()).toMatchObject({ error: "invalid_input", fields: { file: [expect.stringContaining("Missing: name, email")] } });
+    expect(await noHeader.json()).toMatchObject({
+      error: "invalid_input",
+      fields: { file: [expect.stringContaining("Missing: name, email")] },
+    });
   });
 });
 
@@ -226,7 +251,9 @@ describe("members page actions", () => {
 
   it("importRosterAction invites the good rows and returns the report", async () => {
     const cookie = await sessionCookieFor(admin, demoPassword);
-    const result = await asCookie(cookie, () => importRosterAction(upload("name,email\nRue Castellan,rue.castellan@lantern-reach.example\n,x@y.example\n", "text/csv")));
+    const result = await asCookie(cookie, () =>
+      importRosterAction(upload("name,email\nRue Castellan,rue.castellan@lantern-reach.example\n,x@y.example\n", "text/csv")),
+    );
     expect(result.ok).toBe(true);
     expect(result.message).toBe("1 invitation sent. Some rows were not imported.");
     expect(result.ok && result.data?.problems).toEqual([{ row: 3, field: "name", message: "Missing name." }]);
@@ -263,7 +290,10 @@ describe("the roster API's pages", () => {
       offset = page.nextOffset;
     }
     expect(seen).toEqual(everyone);
-    const first = (await (await callRoute(GET, { method: "GET", path: "/api/roster", cookie })).json()) as { limit: number; offset: number };
+    const first = (await (await callRoute(GET, { method: "GET", path: "/api/roster", cookie })).json()) as {
+      limit: number;
+      offset: number;
+    };
     expect(first).toMatchObject({ limit: 100, offset: 0 });
   });
 

@@ -22,7 +22,10 @@ afterAll(async () => {
 async function writeAuditEvent(label: string): Promise<void> {
   const club = await Club.findOne();
   await writeTransaction((transaction) =>
-    AuditEvent.create({ clubId: club!.id, actorId: null, action: "test.cache", subjectType: "test", subjectId: label, details: {} }, { transaction }),
+    AuditEvent.create(
+      { clubId: club!.id, actorId: null, action: "test.cache", subjectType: "test", subjectId: label, details: {} },
+      { transaction },
+    ),
   );
 }
 

@@ -5,7 +5,15 @@ import { installNextHeadersStandIn, withRequest } from "@/tests/support/request-
 import { callRoute, sessionCookieFor } from "@/tests/support/call-route";
 import { testOrigin } from "@/tests/support/auth-handler";
 import { actionFiles, missingGuardRows, paramsFor, projectRoot, routeFiles } from "@/tests/support/route-files";
-import { actionGuardRows, guardRoles, routeGuardRows, tinyPngBase64, type GuardFixtures, type GuardRequest, type GuardRole } from "@/tests/support/route-guard-table";
+import {
+  actionGuardRows,
+  guardRoles,
+  routeGuardRows,
+  tinyPngBase64,
+  type GuardFixtures,
+  type GuardRequest,
+  type GuardRole,
+} from "@/tests/support/route-guard-table";
 
 vi.mock("next/headers", async () => (await import("@/tests/support/request-scope")).nextHeadersStandIn);
 vi.mock("next/cache", () => ({ revalidatePath: () => undefined, revalidateTag: () => undefined }));
@@ -35,7 +43,8 @@ const { seedDemoCertification } = await import("@/lib/seed/demo-certification");
 const { AppError } = await import("@/lib/http/errors");
 const { readClubSettings } = await import("@/lib/validations/club-settings");
 const { settingsToForm } = await import("@/lib/validations/club-settings-form");
-const { Boat, BoatOarSet, Certificate, ClearanceSuspension, Club, EvidencePhoto, OarSet, PracticalAssessment, User } = await import("@/models");
+const { Boat, BoatOarSet, Certificate, ClearanceSuspension, Club, EvidencePhoto, OarSet, PracticalAssessment, User } =
+  await import("@/models");
 const evidenceUpload = await import("@/app/api/sign-offs/[id]/evidence/route");
 
 const accounts: Record<Exclude<GuardRole, "anonymous">, [string, string]> = {
@@ -105,7 +114,9 @@ beforeAll(async () => {
     homeCertificateId: certificate.id,
     homeVerificationCode: certificate.verificationCode,
     homeWaitingSignOffId: await waitingSignOff(jonah!.id, "grip-cleaning"),
-    homeDecidedSignOffId: (await PracticalAssessment.findOne({ where: { athleteId: iris!.id, moduleSlug: "setting-inboard", status: "not-yet" } }))!.id,
+    homeDecidedSignOffId: (await PracticalAssessment.findOne({
+      where: { athleteId: iris!.id, moduleSlug: "setting-inboard", status: "not-yet" },
+    }))!.id,
     homeEvidenceId: await uploadEvidence(elinSignOff),
     spareEvidenceIds: [await uploadEvidence(elinSignOff), await uploadEvidence(elinSignOff)],
   };
@@ -134,8 +145,12 @@ describe("the route-guard table", () => {
   });
 
   it("finds the route files and action modules of the app", () => {
-    expect(routeFiles().map((route) => route.file)).toEqual(expect.arrayContaining(["app/api/roster/route.ts", "app/api/members/[id]/route.ts"]));
-    expect(actionFiles().map((entry) => entry.file)).toEqual(expect.arrayContaining(["app/(club)/club/actions.ts", "app/(auth)/sign-in/actions.ts"]));
+    expect(routeFiles().map((route) => route.file)).toEqual(
+      expect.arrayContaining(["app/api/roster/route.ts", "app/api/members/[id]/route.ts"]),
+    );
+    expect(actionFiles().map((entry) => entry.file)).toEqual(
+      expect.arrayContaining(["app/(club)/club/actions.ts", "app/(auth)/sign-in/actions.ts"]),
+    );
   });
 });
 
@@ -197,7 +212,10 @@ function actionArgument(input: unknown): unknown {
 
 describe.each(actionGuardRows.map((row) => [`${row.action} in ${row.file}`, row] as const))("%s", (_label, row) => {
   it.each(guardRoles.map((role) => [role, row.expect[role]] as const))("as %s answers %i", async (role, status) => {
-    const actions = (await import(/* @vite-ignore */ path.join(projectRoot, row.file))) as Record<string, (...args: unknown[]) => Promise<{ ok: boolean; message?: string }>>;
+    const actions = (await import(/* @vite-ignore */ path.join(projectRoot, row.file))) as Record<
+      string,
+      (...args: unknown[]) => Promise<{ ok: boolean; message?: string }>
+    >;
     lastActionError.current = null;
     const given = fixtures();
     const args = row.args ? row.args(given) : [actionArgument(row.input(given))];
@@ -226,11 +244,16 @@ describe.each(actionGuardRows.map((row) => [`${row.action} in ${row.file}`, row]
  * anything about) what the form would have accepted.
  */
 const refusedActionCases = actionGuardRows.flatMap((row) =>
-  guardRoles.filter((role) => row.expect[role] === 401 || row.expect[role] === 403).map((role) => [`${row.action} as ${role}`, row, role, row.expect[role]] as const),
+  guardRoles
+    .filter((role) => row.expect[role] === 401 || row.expect[role] === 403)
+    .map((role) => [`${row.action} as ${role}`, row, role, row.expect[role]] as const),
 );
 describe.each(refusedActionCases)("%s, with malformed input", (_label, row, role, status) => {
   it(`answers ${status} before looking at the input`, async () => {
-    const actions = (await import(/* @vite-ignore */ path.join(projectRoot, row.file))) as Record<string, (...args: unknown[]) => Promise<{ ok: boolean; message?: string }>>;
+    const actions = (await import(/* @vite-ignore */ path.join(projectRoot, row.file))) as Record<
+      string,
+      (...args: unknown[]) => Promise<{ ok: boolean; message?: string }>
+    >;
     lastActionError.current = null;
     const given = fixtures();
     // The input malformed; an action addressed by an id argument (updateBoatAction's boatId, say) keeps
@@ -255,7 +278,11 @@ describe("after every row", () => {
       archivedAt: null,
     });
     const set = (await OarSet.findByPk(home.homeOarSetId))!;
-    expect({ name: set.name, targetLengthCm: set.targetLengthCm, archivedAt: set.archivedAt }).toEqual({ name: "Short-loom sculls", targetLengthCm: 286, archivedAt: null });
+    expect({ name: set.name, targetLengthCm: set.targetLengthCm, archivedAt: set.archivedAt }).toEqual({
+      name: "Short-loom sculls",
+      targetLengthCm: 286,
+      archivedAt: null,
+    });
     const links = await BoatOarSet.findAll({ where: { oarSetId: home.homeOarSetId } });
     expect(links.map((link) => link.boatId)).toEqual([home.homeBoatId]);
     const club = (await Club.findByPk(boat.clubId))!;

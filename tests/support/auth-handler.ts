@@ -13,7 +13,10 @@ async function authRoute(): Promise<AuthRoute> {
 /** `name=value` pairs from a response's Set-Cookie headers, merged over the ones sent. */
 export function mergeCookies(sent: string, response: Response): string {
   const jar = new Map<string, string>();
-  for (const pair of sent.split(";").map((part) => part.trim()).filter(Boolean)) {
+  for (const pair of sent
+    .split(";")
+    .map((part) => part.trim())
+    .filter(Boolean)) {
     const at = pair.indexOf("=");
     jar.set(pair.slice(0, at), pair.slice(at + 1));
   }
@@ -73,5 +76,8 @@ export async function passwordSignIn(email: string, password: string, headers?: 
 export async function signOutThroughHandler(cookie: string): Promise<AuthCall> {
   const { response } = await callAuth("GET", ["csrf"], { cookie });
   const { csrfToken } = (await response.json()) as { csrfToken: string };
-  return callAuth("POST", ["signout"], { cookie: mergeCookies(cookie, response), form: { csrfToken, callbackUrl: `${testOrigin}/`, json: "true" } });
+  return callAuth("POST", ["signout"], {
+    cookie: mergeCookies(cookie, response),
+    form: { csrfToken, callbackUrl: `${testOrigin}/`, json: "true" },
+  });
 }

@@ -33,7 +33,9 @@ let addressCounter = 0;
 /** A real session cookie from the next-auth handler, each from its own address so no throttle is hit. */
 export async function sessionCookieFor(email: string, password: string): Promise<string> {
   addressCounter += 1;
-  const { response, cookie } = await passwordSignIn(email, password, { "x-forwarded-for": `198.18.${Math.floor(addressCounter / 250)}.${addressCounter % 250}` });
+  const { response, cookie } = await passwordSignIn(email, password, {
+    "x-forwarded-for": `198.18.${Math.floor(addressCounter / 250)}.${addressCounter % 250}`,
+  });
   if (response.status !== 200) throw new Error(`Sign-in for ${email} failed with ${response.status}`);
   return cookie;
 }

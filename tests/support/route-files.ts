@@ -65,7 +65,9 @@ export function missingGuardRows(
   for (const { file, actions: names } of found.actions) {
     for (const name of names) {
       if (!actions.some((row) => row.file === file && row.action === name)) {
-        messages.push(`${file} exports the server action ${name} but ${tableFile} has no row for it: add its expected status for every role.`);
+        messages.push(
+          `${file} exports the server action ${name} but ${tableFile} has no row for it: add its expected status for every role.`,
+        );
       }
     }
   }

@@ -99,7 +99,15 @@ function all(status: number): Expected {
 }
 
 /** Signed in as coach or admin of any club. */
-const coachesOfAnyClub: Expected = { anonymous: 401, athlete: 403, otherAthlete: 403, coach: 200, otherCoach: 200, admin: 200, otherAdmin: 200 };
+const coachesOfAnyClub: Expected = {
+  anonymous: 401,
+  athlete: 403,
+  otherAthlete: 403,
+  coach: 200,
+  otherCoach: 200,
+  admin: 200,
+  otherAdmin: 200,
+};
 
 /** Admins acting on their own club, with `ok` as the success status. */
 function adminsOwnClub(ok: number): Expected {
@@ -107,10 +115,26 @@ function adminsOwnClub(ok: number): Expected {
 }
 
 /** Admins changing a home-club record: the other club's admin is told it does not exist. */
-const homeAdminOnRecord: Expected = { anonymous: 401, athlete: 403, otherAthlete: 403, coach: 403, otherCoach: 403, admin: 200, otherAdmin: 404 };
+const homeAdminOnRecord: Expected = {
+  anonymous: 401,
+  athlete: 403,
+  otherAthlete: 403,
+  coach: 403,
+  otherCoach: 403,
+  admin: 200,
+  otherAdmin: 404,
+};
 
 /** Coaches and admins changing a home-club record: the other club's coach and admin are told it does not exist. */
-const homeCoachOnRecord: Expected = { anonymous: 401, athlete: 403, otherAthlete: 403, coach: 200, otherCoach: 404, admin: 200, otherAdmin: 404 };
+const homeCoachOnRecord: Expected = {
+  anonymous: 401,
+  athlete: 403,
+  otherAthlete: 403,
+  coach: 200,
+  otherCoach: 404,
+  admin: 200,
+  otherAdmin: 404,
+};
 
 /** Any member using a home-club record, with `ok` as the success status: the other club's members are told it does not exist. */
 function homeMembersOnRecord(ok: number): Expected {
@@ -222,7 +246,10 @@ export const routeGuardRows: RouteGuardRow[] = [
   {
     file: "app/api/invitations/route.ts",
     method: "POST",
-    request: ({ tag }) => ({ path: "/api/invitations", json: { email: `guard.${tag}@invitations.example`, name: "Guard Row", role: "athlete" } }),
+    request: ({ tag }) => ({
+      path: "/api/invitations",
+      json: { email: `guard.${tag}@invitations.example`, name: "Guard Row", role: "athlete" },
+    }),
     expect: adminsOwnClub(201),
   },
   {
@@ -482,7 +509,9 @@ export const actionGuardRows: ActionGuardRow[] = [
   {
     file: "app/(club)/club/members/actions.ts",
     action: "importRosterAction",
-    input: ({ tag }) => ({ formData: { roster: { name: "roster.csv", type: "text/csv", body: `name,email\nGuard Import,guard.action.${tag}@roster.example\n` } } }),
+    input: ({ tag }) => ({
+      formData: { roster: { name: "roster.csv", type: "text/csv", body: `name,email\nGuard Import,guard.action.${tag}@roster.example\n` } },
+    }),
     expect: adminsOwnClub(200),
   },
   {

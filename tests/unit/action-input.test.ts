@@ -22,7 +22,10 @@ describe("fieldErrorsFrom", () => {
 describe("parseActionInput", () => {
   it("parses a plain object, from JSON or with no prototype", () => {
     expect(parseActionInput(note, { note: "ok" })).toEqual({ success: true, data: { note: "ok" } });
-    expect(parseActionInput(note, Object.assign(Object.create(null) as object, { note: "ok" }))).toEqual({ success: true, data: { note: "ok" } });
+    expect(parseActionInput(note, Object.assign(Object.create(null) as object, { note: "ok" }))).toEqual({
+      success: true,
+      data: { note: "ok" },
+    });
   });
 
   it("refuses anything else as a whole, though zod would read a Map or a Date as an object without fields", () => {

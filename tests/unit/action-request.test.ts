@@ -10,7 +10,12 @@ function fieldsOf(problem: ReturnType<typeof argumentListProblem>): string[] {
 
 describe("argumentListProblem (the proxy's check of a server action's arguments)", () => {
   it("passes what our client sends: plain values, escaped dollars, undefined, non-finite numbers, dates", () => {
-    const args = [{ email: "ada@lantern-reach.example", note: "$$5 for the tape", spanCm: 159, humid: "$undefined" }, "$NaN", "$-0", "$D2026-12-02T10:00:00.000Z"];
+    const args = [
+      { email: "ada@lantern-reach.example", note: "$$5 for the tape", spanCm: 159, humid: "$undefined" },
+      "$NaN",
+      "$-0",
+      "$D2026-12-02T10:00:00.000Z",
+    ];
     expect(argumentListProblem(JSON.stringify(args), text)).toBeNull();
     expect(argumentListProblem('["$undefined","$K1"]', multipart)).toBeNull();
   });

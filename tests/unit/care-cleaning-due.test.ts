@@ -65,9 +65,7 @@ describe("cleaningDueState", () => {
   });
 
   it("race tomorrow, cleaned yesterday: due today (the day before the race)", () => {
-    expect(
-      cleaningDueState({ lastCleanedOn: daysAgo(1), today, raceDays: [inDays(1)], humidSpell: false }),
-    ).toEqual({
+    expect(cleaningDueState({ lastCleanedOn: daysAgo(1), today, raceDays: [inDays(1)], humidSpell: false })).toEqual({
       due: true,
       reason: "race-day-next",
       nextDueOn: today,
@@ -91,9 +89,7 @@ describe("cleaningDueState", () => {
   });
 
   it("race today, cleaned 2 days ago: due, since yesterday", () => {
-    expect(
-      cleaningDueState({ lastCleanedOn: daysAgo(2), today, raceDays: [today], humidSpell: false }),
-    ).toEqual({
+    expect(cleaningDueState({ lastCleanedOn: daysAgo(2), today, raceDays: [today], humidSpell: false })).toEqual({
       due: true,
       reason: "race-day-next",
       nextDueOn: daysAgo(1),
@@ -101,9 +97,7 @@ describe("cleaningDueState", () => {
   });
 
   it("race in 2 days, cleaned 3 days ago: not due today, due tomorrow", () => {
-    expect(
-      cleaningDueState({ lastCleanedOn: daysAgo(3), today, raceDays: [inDays(2)], humidSpell: false }),
-    ).toEqual({
+    expect(cleaningDueState({ lastCleanedOn: daysAgo(3), today, raceDays: [inDays(2)], humidSpell: false })).toEqual({
       due: false,
       reason: "ok",
       nextDueOn: inDays(1),
@@ -157,8 +151,6 @@ describe("cleaningDueState", () => {
   });
 
   it("refuses a cleaning date after today", () => {
-    expect(() =>
-      cleaningDueState({ lastCleanedOn: inDays(1), today, raceDays: [], humidSpell: false }),
-    ).toThrow(RangeError);
+    expect(() => cleaningDueState({ lastCleanedOn: inDays(1), today, raceDays: [], humidSpell: false })).toThrow(RangeError);
   });
 });

@@ -63,7 +63,16 @@ describe("the club's today, in its time zone", () => {
   it("agrees with Intl's own date at every instant of a year, clock-change days included", () => {
     // Zones with daylight time both ways, half- and quarter-hour offsets, and a half-hour clock change
     // (Lord Howe): the reference is Intl's date for each instant (en-CA writes YYYY-MM-DD).
-    const zones = ["UTC", "Pacific/Auckland", "America/Los_Angeles", "Europe/London", "Asia/Kathmandu", "America/St_Johns", "Australia/Lord_Howe", "Pacific/Chatham"];
+    const zones = [
+      "UTC",
+      "Pacific/Auckland",
+      "America/Los_Angeles",
+      "Europe/London",
+      "Asia/Kathmandu",
+      "America/St_Johns",
+      "Australia/Lord_Howe",
+      "Pacific/Chatham",
+    ];
     const start = Date.UTC(2026, 0, 1);
     for (const zone of zones) {
       const reference = new Intl.DateTimeFormat("en-CA", { timeZone: zone, year: "numeric", month: "2-digit", day: "2-digit" });
@@ -75,7 +84,16 @@ describe("the club's today, in its time zone", () => {
     }
     // Either side of a clock change at the club's midnight hour: Auckland's clocks went back at
     // 03:00 NZDT on 5 April 2026 (14:00 UTC on the 4th), and forward at 02:00 NZST on 27 September.
-    for (const instant of ["2026-04-04T10:59:59Z", "2026-04-04T11:00:00Z", "2026-04-04T13:59:59Z", "2026-04-04T14:00:00Z", "2026-09-26T11:59:59Z", "2026-09-26T12:00:00Z", "2026-09-26T13:59:59Z", "2026-09-26T14:00:00Z"]) {
+    for (const instant of [
+      "2026-04-04T10:59:59Z",
+      "2026-04-04T11:00:00Z",
+      "2026-04-04T13:59:59Z",
+      "2026-04-04T14:00:00Z",
+      "2026-09-26T11:59:59Z",
+      "2026-09-26T12:00:00Z",
+      "2026-09-26T13:59:59Z",
+      "2026-09-26T14:00:00Z",
+    ]) {
       const reference = new Intl.DateTimeFormat("en-CA", { timeZone: "Pacific/Auckland" });
       expect(isoDateInZone("Pacific/Auckland", new Date(instant)), instant).toBe(reference.format(new Date(instant)));
     }
@@ -83,7 +101,15 @@ describe("the club's today, in its time zone", () => {
   });
 
   it("finds the instant a day starts in a zone, with the offset of that moment, as Intl reads it", () => {
-    const zones = ["UTC", "Pacific/Auckland", "America/Los_Angeles", "Asia/Kathmandu", "America/St_Johns", "Australia/Lord_Howe", "America/Santiago"];
+    const zones = [
+      "UTC",
+      "Pacific/Auckland",
+      "America/Los_Angeles",
+      "Asia/Kathmandu",
+      "America/St_Johns",
+      "Australia/Lord_Howe",
+      "America/Santiago",
+    ];
     for (const zone of zones) {
       const reference = new Intl.DateTimeFormat("en-CA", { timeZone: zone });
       for (let day = Date.UTC(2026, 0, 1); day < Date.UTC(2027, 0, 1); day += 86_400_000) {
@@ -153,7 +179,9 @@ describe("dueStatus", () => {
 
     const race = addDaysIso(today, 1);
     const cleaned = addDaysIso(today, -2);
-    expect(dueStatus(cleaningDueState({ lastCleanedOn: cleaned, today, raceDays: [race], humidSpell: false }), today, cleaned)).toMatchObject({
+    expect(
+      dueStatus(cleaningDueState({ lastCleanedOn: cleaned, today, raceDays: [race], humidSpell: false }), today, cleaned),
+    ).toMatchObject({
       label: "Due before the race",
       detail: expect.stringContaining("Race day Thu 3 Dec 2026"),
     });
@@ -179,7 +207,10 @@ describe("buildCleaningDigest", () => {
     { name: "Eight sweeps", lastCleanedOn: "2026-11-20" },
     { name: "Pair sweeps", lastCleanedOn: null },
     { name: "Green-band sculls", lastCleanedOn: "2026-12-01" },
-  ].map((set) => ({ ...set, state: cleaningDueState({ lastCleanedOn: set.lastCleanedOn, today, raceDays: ["2026-12-07"], humidSpell: false }) }));
+  ].map((set) => ({
+    ...set,
+    state: cleaningDueState({ lastCleanedOn: set.lastCleanedOn, today, raceDays: ["2026-12-07"], humidSpell: false }),
+  }));
 
   const digest = buildCleaningDigest({
     clubName: "Test Reach RC",

@@ -32,13 +32,8 @@ describe("practical assessment schema", () => {
     const missing = schema.safeParse({ items: { "screws-tight": "met" }, note: "" });
     expect(missing.error?.issues[0]?.path).toEqual(["items", "collar-seated"]);
     expect(missing.error?.issues[0]?.message).toBe("Choose met or not yet");
-    expect(
-      schema.safeParse({ items: { "screws-tight": "met", "collar-seated": "met", extra: "met" }, note: "" })
-        .success,
-    ).toBe(false);
-    expect(
-      schema.safeParse({ items: { "screws-tight": "met", "collar-seated": "sort of" }, note: "" }).success,
-    ).toBe(false);
+    expect(schema.safeParse({ items: { "screws-tight": "met", "collar-seated": "met", extra: "met" }, note: "" }).success).toBe(false);
+    expect(schema.safeParse({ items: { "screws-tight": "met", "collar-seated": "sort of" }, note: "" }).success).toBe(false);
   });
 
   it("needs a note when anything is not yet met", () => {
@@ -51,10 +46,7 @@ describe("practical assessment schema", () => {
 
   it("bounds the photos and the note", () => {
     const items = { "screws-tight": "met", "collar-seated": "met" };
-    expect(
-      schema.safeParse({ items, note: "", evidenceIds: [evidenceId, evidenceId, evidenceId, evidenceId] })
-        .success,
-    ).toBe(false);
+    expect(schema.safeParse({ items, note: "", evidenceIds: [evidenceId, evidenceId, evidenceId, evidenceId] }).success).toBe(false);
     expect(schema.safeParse({ items, note: "", evidenceIds: ["../x.jpg"] }).success).toBe(false);
     expect(schema.safeParse({ items, note: "x".repeat(2001) }).success).toBe(false);
   });
@@ -68,16 +60,12 @@ describe("other certification inputs", () => {
     });
     expect(signOffRequestSchema.safeParse({ moduleSlug: "../etc" }).success).toBe(false);
     expect(signOffRequestSchema.safeParse({ moduleSlug: "a".repeat(60) }).success).toBe(true);
-    expect(signOffRequestSchema.safeParse({ moduleSlug: "a".repeat(61) }).error?.issues[0]?.path).toEqual([
-      "moduleSlug",
-    ]);
+    expect(signOffRequestSchema.safeParse({ moduleSlug: "a".repeat(61) }).error?.issues[0]?.path).toEqual(["moduleSlug"]);
   });
 
   it("suspensions need a reason", () => {
     expect(suspendClearanceSchema.safeParse({ reason: "  " }).success).toBe(false);
-    expect(suspendClearanceSchema.parse({ reason: " Collar loose on launch " }).reason).toBe(
-      "Collar loose on launch",
-    );
+    expect(suspendClearanceSchema.parse({ reason: " Collar loose on launch " }).reason).toBe("Collar loose on launch");
   });
 
   it("query strings fall back to 'all' on nonsense", () => {
@@ -130,8 +118,6 @@ describe("club settings form", () => {
     });
     expect(inverted.error?.issues[0]?.path).toEqual(["limits", "sweep", "maxInboardCm"]);
     expect(clubSettingsFormSchema.safeParse({ ...form, clearanceModules: [] }).success).toBe(false);
-    expect(clubSettingsFormSchema.safeParse({ ...form, clickCm: Number.NaN }).error?.issues[0]?.message).toBe(
-      "Enter a number",
-    );
+    expect(clubSettingsFormSchema.safeParse({ ...form, clickCm: Number.NaN }).error?.issues[0]?.message).toBe("Enter a number");
   });
 });

@@ -129,9 +129,7 @@ describe("clearance to rig unsupervised", () => {
   });
 
   it("holds on the day before the first expiry and not on the expiry day itself", () => {
-    expect(
-      clearanceFor({ requiredModules: required, passes, suspension: null, today: "2027-03-13" }).cleared,
-    ).toBe(true);
+    expect(clearanceFor({ requiredModules: required, passes, suspension: null, today: "2027-03-13" }).cleared).toBe(true);
     const onTheDay = clearanceFor({
       requiredModules: required,
       passes,
@@ -173,16 +171,13 @@ describe("clearance to rig unsupervised", () => {
   });
 
   it("clears nobody when the club requires no modules", () => {
-    expect(clearanceFor({ requiredModules: [], passes, suspension: null, today: "2026-06-01" }).state).toBe(
-      "not-cleared",
-    );
+    expect(clearanceFor({ requiredModules: [], passes, suspension: null, today: "2026-06-01" }).state).toBe("not-cleared");
   });
 
   it("counts a pass signed off in the future as missing (clock skew never clears early)", () => {
-    expect(
-      clearanceFor({ requiredModules: required, passes, suspension: null, today: "2026-04-01" })
-        .missingModules,
-    ).toEqual(["setting-inboard"]);
+    expect(clearanceFor({ requiredModules: required, passes, suspension: null, today: "2026-04-01" }).missingModules).toEqual([
+      "setting-inboard",
+    ]);
   });
 
   it("says when it runs out within a window, counting the last day", () => {
@@ -216,45 +211,29 @@ describe("module status", () => {
   it("is passed only with the quiz passed and a current sign-off", () => {
     const latestPass = pass("overall-length", "2026-02-01");
     expect(moduleStatus({ ...base, quizStage: "quiz-passed", latestPass })).toBe("passed");
-    expect(moduleStatus({ ...base, quizStage: "quiz-passed", latestPass, today: "2027-02-01" })).toBe(
-      "expired",
-    );
-    expect(moduleStatus({ ...base, quizStage: "quiz-passed", openRequest: true })).toBe(
-      "waiting-for-sign-off",
-    );
+    expect(moduleStatus({ ...base, quizStage: "quiz-passed", latestPass, today: "2027-02-01" })).toBe("expired");
+    expect(moduleStatus({ ...base, quizStage: "quiz-passed", openRequest: true })).toBe("waiting-for-sign-off");
   });
 
   it("shows the coach's 'not yet' until a later pass", () => {
     const notYet = { outcome: "not-yet" as const, decidedOn: "2026-05-20" };
     expect(moduleStatus({ ...base, quizStage: "quiz-passed", latestDecision: notYet })).toBe("not-yet");
-    expect(
-      moduleStatus({ ...base, quizStage: "quiz-passed", latestDecision: notYet, openRequest: true }),
-    ).toBe("waiting-for-sign-off");
+    expect(moduleStatus({ ...base, quizStage: "quiz-passed", latestDecision: notYet, openRequest: true })).toBe("waiting-for-sign-off");
   });
 });
 
 describe("asking for a sign-off", () => {
   const today = "2026-06-01";
   it("needs a passed quiz and no open request", () => {
-    expect(signOffRequestProblem({ quizPassed: false, openRequest: false, latestPass: null, today })).toMatch(
-      /quiz first/,
-    );
-    expect(signOffRequestProblem({ quizPassed: true, openRequest: true, latestPass: null, today })).toMatch(
-      /already asked/,
-    );
-    expect(
-      signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass: null, today }),
-    ).toBeNull();
+    expect(signOffRequestProblem({ quizPassed: false, openRequest: false, latestPass: null, today })).toMatch(/quiz first/);
+    expect(signOffRequestProblem({ quizPassed: true, openRequest: true, latestPass: null, today })).toMatch(/already asked/);
+    expect(signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass: null, today })).toBeNull();
   });
 
   it("allows a renewal only in the last 30 days of a pass", () => {
     const latestPass = pass("overall-length", "2025-07-01");
-    expect(
-      signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass, today: "2026-05-31" }),
-    ).toMatch(/renew/);
-    expect(
-      signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass, today: "2026-06-01" }),
-    ).toBeNull();
+    expect(signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass, today: "2026-05-31" })).toMatch(/renew/);
+    expect(signOffRequestProblem({ quizPassed: true, openRequest: false, latestPass, today: "2026-06-01" })).toBeNull();
   });
 });
 
@@ -294,8 +273,7 @@ describe("an athlete's standing on the club's calendar", () => {
     const suspendedAt = new Date("2026-12-02T18:00:00Z");
     const suspended = facts({ suspension: { reason: "Collar not seated", suspendedAt } });
     const clearance = (timeZone: string) =>
-      athleteStanding(["overall-length"], ["overall-length"], suspended, { today: "2026-12-03", timeZone })
-        .clearance;
+      athleteStanding(["overall-length"], ["overall-length"], suspended, { today: "2026-12-03", timeZone }).clearance;
     expect(clearance(auckland)).toMatchObject({
       state: "suspended",
       suspension: { reason: "Collar not seated", since: "2026-12-03" },

@@ -4,25 +4,12 @@ import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
 import { moduleFrontmatterSchema } from "@/lib/content/module-schema";
 import { readClubSettings } from "@/lib/validations/club-settings";
-import {
-  checkModuleSet,
-  getModule,
-  LessonContentError,
-  listModules,
-  parseModuleFile,
-  type LessonModule,
-} from "@/lib/content/modules";
+import { checkModuleSet, getModule, LessonContentError, listModules, parseModuleFile, type LessonModule } from "@/lib/content/modules";
 import { renderLesson } from "@/lib/content/render";
 import { isComputedGenerator, quizRecipeSchema } from "@/lib/quiz/recipe";
 
 const LESSON_DIR = path.join(process.cwd(), "content", "modules");
-const EXPECTED_SLUGS = [
-  "overall-length",
-  "setting-inboard",
-  "changing-boats",
-  "secure-and-check",
-  "grip-cleaning",
-];
+const EXPECTED_SLUGS = ["overall-length", "setting-inboard", "changing-boats", "secure-and-check", "grip-cleaning"];
 
 const GOOD_FRONTMATTER = `---
 slug: sample-lesson
@@ -112,9 +99,7 @@ describe("the course's lessons", () => {
     let guaranteedComputed = 0;
     let drawn = 0;
     for (const meta of modules) {
-      const fixed = meta.quiz.items
-        .filter((item) => !isComputedGenerator(item.use))
-        .reduce((sum, item) => sum + item.count, 0);
+      const fixed = meta.quiz.items.filter((item) => !isComputedGenerator(item.use)).reduce((sum, item) => sum + item.count, 0);
       guaranteedComputed += Math.max(0, meta.quiz.draw - fixed);
       drawn += meta.quiz.draw;
     }
@@ -163,9 +148,7 @@ describe("the course's lessons", () => {
     expect(inboard).toContain("Clicks calculator");
     expect(inboard).toContain("Move the collar 2 clicks towards the blade.");
     const boats = renderToStaticMarkup(await renderLesson(getModule("changing-boats")!.source));
-    expect(boats).toContain(
-      "measurement protocol: 2 × (inboard + half swivel width) − span, half swivel 2 cm",
-    );
+    expect(boats).toContain("measurement protocol: 2 × (inboard + half swivel width) − span, half swivel 2 cm");
     expect(boats).toContain("overlap 21 cm");
   });
 });
@@ -179,11 +162,7 @@ describe("a bad lesson", () => {
 
   it("names the file and the field when a quiz generator does not exist", () => {
     const raw = GOOD_FRONTMATTER.replace("use: length-change", "use: guess-the-length");
-    const error = expectLessonError(
-      () => parseModuleFile("sample-lesson.mdx", raw),
-      "sample-lesson.mdx",
-      "quiz.items.0.use",
-    );
+    const error = expectLessonError(() => parseModuleFile("sample-lesson.mdx", raw), "sample-lesson.mdx", "quiz.items.0.use");
     expect(error.field).toBe("quiz.items.0.use");
   });
 
@@ -201,11 +180,7 @@ describe("a bad lesson", () => {
     const lowPass = GOOD_FRONTMATTER.replace("minutes: 3", "minutes: 3\npassMark: 0.3");
     expectLessonError(() => parseModuleFile("sample-lesson.mdx", lowPass), "sample-lesson.mdx", "passMark");
     const typo = GOOD_FRONTMATTER.replace("minutes: 3", "minutes: 3\nrequiredForClearence: false");
-    expectLessonError(
-      () => parseModuleFile("sample-lesson.mdx", typo),
-      "sample-lesson.mdx",
-      "requiredForClearence",
-    );
+    expectLessonError(() => parseModuleFile("sample-lesson.mdx", typo), "sample-lesson.mdx", "requiredForClearence");
   });
 
   it("rejects a slug that differs from the file name", () => {
@@ -214,11 +189,7 @@ describe("a bad lesson", () => {
 
   it("rejects a level-1 heading in the body", () => {
     const raw = GOOD_FRONTMATTER.replace("## A heading", "# A heading");
-    expectLessonError(
-      () => parseModuleFile("sample-lesson.mdx", raw),
-      "sample-lesson.mdx",
-      "level-1 heading",
-    );
+    expectLessonError(() => parseModuleFile("sample-lesson.mdx", raw), "sample-lesson.mdx", "level-1 heading");
   });
 
   it("rejects broken YAML and a file with no frontmatter", () => {
@@ -227,11 +198,7 @@ describe("a bad lesson", () => {
       "sample-lesson.mdx",
       "YAML",
     );
-    expectLessonError(
-      () => parseModuleFile("sample-lesson.mdx", "## Just a body\n"),
-      "sample-lesson.mdx",
-      "frontmatter",
-    );
+    expectLessonError(() => parseModuleFile("sample-lesson.mdx", "## Just a body\n"), "sample-lesson.mdx", "frontmatter");
   });
 
   describe("in a set of lessons", () => {
@@ -242,10 +209,7 @@ describe("a bad lesson", () => {
     };
 
     it("accepts unique orders and earlier prerequisites, sorted by order", () => {
-      expect(checkModuleSet([second, first]).map((lesson) => lesson.meta.slug)).toEqual([
-        "sample-lesson",
-        "second-lesson",
-      ]);
+      expect(checkModuleSet([second, first]).map((lesson) => lesson.meta.slug)).toEqual(["sample-lesson", "second-lesson"]);
     });
 
     it("rejects two lessons with the same order", () => {

@@ -22,7 +22,7 @@ describe("CSV export", () => {
     ]);
   });
 
-  it.each(["=HYPERLINK(\"x\")", "+1+1", "-2+3", "@SUM(A1)"])(
+  it.each(['=HYPERLINK("x")', "+1+1", "-2+3", "@SUM(A1)"])(
     "neutralises a cell beginning like a formula: %s (OWASP CSV Injection)",
     (name) => {
       const csv = toCsv([{ name, score: 1 }], columns);

@@ -14,8 +14,12 @@ describe("boatWarnings (usual span 157–161 and spread 81–88: row2k, 'Rowing 
   it("is quiet inside the usual range and warns outside it", () => {
     expect(boatWarnings({ boatClass: "2x", spanCm: 159 })).toEqual([]);
     expect(boatWarnings({ boatClass: "2x", spanCm: 161 })).toEqual([]);
-    expect(boatWarnings({ boatClass: "2x", spanCm: 162 })).toEqual([expect.stringContaining("span of 162 cm is outside the usual 157–161 cm")]);
-    expect(boatWarnings({ boatClass: "8+", spreadCm: 80 })).toEqual([expect.stringContaining("spread of 80 cm is outside the usual 81–88 cm")]);
+    expect(boatWarnings({ boatClass: "2x", spanCm: 162 })).toEqual([
+      expect.stringContaining("span of 162 cm is outside the usual 157–161 cm"),
+    ]);
+    expect(boatWarnings({ boatClass: "8+", spreadCm: 80 })).toEqual([
+      expect.stringContaining("spread of 80 cm is outside the usual 81–88 cm"),
+    ]);
     expect(boatWarnings({ boatClass: "8+", spreadCm: Number.NaN })).toEqual([]);
   });
 
@@ -49,13 +53,21 @@ describe("oarSetWarnings (default club limits: common practice, no source)", () 
 
 describe("the plan route's answer", () => {
   it("keeps exactly the documented fields", () => {
-    const plan = planRigChange({ oarType: "sculling", measured: { lengthCm: 287, inboardCm: 87 }, target: { lengthCm: 288, inboardCm: 89 } });
+    const plan = planRigChange({
+      oarType: "sculling",
+      measured: { lengthCm: 287, inboardCm: 87 },
+      target: { lengthCm: 288, inboardCm: 89 },
+    });
     expect(Object.keys(toRigPlanResponse(plan)).sort()).toEqual(["inboard", "length", "leverRatio", "outboardCm", "warnings"]);
     expect(Object.keys(toRigPlanResponse(plan).inboard).sort()).toEqual(["changeCm", "clicks", "direction", "residualCm"]);
   });
 
   it("uses the club's limits for the oar type", () => {
-    const request = rigPlanRouteSchema.parse({ oarType: "sculling", measured: { lengthCm: 290, inboardCm: 88 }, target: { lengthCm: 293, inboardCm: 88 } });
+    const request = rigPlanRouteSchema.parse({
+      oarType: "sculling",
+      measured: { lengthCm: 290, inboardCm: 88 },
+      target: { lengthCm: 293, inboardCm: 88 },
+    });
     expect(computeRigPlan(request, limits).warnings).toHaveLength(1);
     const wide = { ...limits, sculling: { ...limits.sculling, maxLengthCm: 295 } };
     expect(computeRigPlan(request, wide).warnings).toEqual([]);
@@ -133,15 +145,29 @@ describe("describeOarSetInBoat", () => {
   it("gives the settings in plain words with the protocol overlap named (L 288, I 88, span 159: FISA 2006 protocol; Kleshnev 2006)", () => {
     const described = describeOarSetInBoat(
       { boatClass: "2x", spanCm: 159, spreadCm: null },
-      { name: "Green-band sculls", oarType: "sculling", oarCount: 8, targetLengthCm: 288, targetInboardCm: 88, clickCm: 0.5, handleMechanism: "clamped-slide" },
+      {
+        name: "Green-band sculls",
+        oarType: "sculling",
+        oarCount: 8,
+        targetLengthCm: 288,
+        targetInboardCm: 88,
+        clickCm: 0.5,
+        handleMechanism: "clamped-slide",
+      },
       2,
       limits,
     );
     expect(described.lines[0]).toBe("8 sculls. Set each to an overall length of 288 cm and an inboard of 88 cm.");
     expect(described.lines[1]).toBe("Outboard 200 cm; lever ratio (outboard ÷ inboard) 2.273.");
-    expect(described.lines[3]).toMatch(/^Overlap 21 cm by the measurement-protocol convention.*half swivel width of 2 cm; 17 cm without the swivel term.*Span gearing 2\.516\.$/);
+    expect(described.lines[3]).toMatch(
+      /^Overlap 21 cm by the measurement-protocol convention.*half swivel width of 2 cm; 17 cm without the swivel term.*Span gearing 2\.516\.$/,
+    );
     expect(described.warnings).toEqual([]);
-    expect(describeRigWidth({ boatClass: "2x", spanCm: 159, spreadCm: null })).toBe("Span: 159 cm, the distance between the centres of the two pins.");
-    expect(describeRigWidth({ boatClass: "8+", spanCm: null, spreadCm: 84 })).toBe("Spread: 84 cm, from the boat's centre line to the centre of the pin.");
+    expect(describeRigWidth({ boatClass: "2x", spanCm: 159, spreadCm: null })).toBe(
+      "Span: 159 cm, the distance between the centres of the two pins.",
+    );
+    expect(describeRigWidth({ boatClass: "8+", spanCm: null, spreadCm: 84 })).toBe(
+      "Spread: 84 cm, from the boat's centre line to the centre of the pin.",
+    );
   });
 });

@@ -23,7 +23,12 @@ describe("boat classes (the trade's shorthand)", () => {
 
 describe("boatSchema", () => {
   it("takes a span for sculling boats and a spread for sweep boats", () => {
-    expect(boatSchema.parse({ name: " Heron ", boatClass: "1x", spanCm: 160 })).toEqual({ name: "Heron", boatClass: "1x", spanCm: 160, notes: "" });
+    expect(boatSchema.parse({ name: " Heron ", boatClass: "1x", spanCm: 160 })).toEqual({
+      name: "Heron",
+      boatClass: "1x",
+      spanCm: 160,
+      notes: "",
+    });
     expect(boatSchema.safeParse({ name: "Grebe", boatClass: "8+", spreadCm: 84 }).success).toBe(true);
     expect(fieldsOf(boatSchema.safeParse({ name: "Grebe", boatClass: "8+", spanCm: 160 }))).toEqual(["spreadCm", "spanCm"]);
     expect(fieldsOf(boatSchema.safeParse({ name: "Heron", boatClass: "1x" }))).toEqual(["spanCm"]);
@@ -60,10 +65,14 @@ describe("oarSetSchema", () => {
     expect(oarSetSchema.safeParse({ ...sculls, targetLengthCm: 2880, targetInboardCm: 88 }).error?.issues[0]?.message).toBe(
       "2880 cm is outside 250–300 cm: measure from the blade tip to the handle end.",
     );
-    expect(oarSetSchema.safeParse({ ...sculls, oarType: "sweep", targetLengthCm: 37.4, targetInboardCm: 116 }).error?.issues.find((issue) => issue.path[0] === "targetLengthCm")?.message).toBe(
-      "37.4 cm is outside 330–400 cm: measure from the blade tip to the handle end.",
-    );
-    expect(fieldsOf(oarSetSchema.safeParse({ ...sculls, oarType: "sweep", targetLengthCm: 200, targetInboardCm: 80 }))).toEqual(["targetLengthCm"]);
+    expect(
+      oarSetSchema
+        .safeParse({ ...sculls, oarType: "sweep", targetLengthCm: 37.4, targetInboardCm: 116 })
+        .error?.issues.find((issue) => issue.path[0] === "targetLengthCm")?.message,
+    ).toBe("37.4 cm is outside 330–400 cm: measure from the blade tip to the handle end.");
+    expect(fieldsOf(oarSetSchema.safeParse({ ...sculls, oarType: "sweep", targetLengthCm: 200, targetInboardCm: 80 }))).toEqual([
+      "targetLengthCm",
+    ]);
     expect(fieldsOf(oarSetSchema.safeParse({ ...sculls, targetLengthCm: 260, targetInboardCm: 130 }))).toEqual(["targetInboardCm"]);
     expect(fieldsOf(oarSetSchema.safeParse({ ...sculls, targetInboardCm: 40 }))).toEqual(["targetInboardCm"]);
   });
@@ -84,7 +93,9 @@ describe("cleaningRecordSchemaFor and raceDaySchemaFor", () => {
   it("takes today or an earlier day, never a future one", () => {
     expect(cleaningRecordSchema.safeParse({ oarSetId: 1, cleanedOn: today, method: "wipe-down" }).success).toBe(true);
     expect(cleaningRecordSchema.safeParse({ oarSetId: 1, cleanedOn: addDaysIso(today, -6), method: "detergent-brush" }).success).toBe(true);
-    expect(fieldsOf(cleaningRecordSchema.safeParse({ oarSetId: 1, cleanedOn: addDaysIso(today, 1), method: "wipe-down" }))).toEqual(["cleanedOn"]);
+    expect(fieldsOf(cleaningRecordSchema.safeParse({ oarSetId: 1, cleanedOn: addDaysIso(today, 1), method: "wipe-down" }))).toEqual([
+      "cleanedOn",
+    ]);
     expect(fieldsOf(cleaningRecordSchema.safeParse({ oarSetId: 1, cleanedOn: "2026-02-30", method: "wipe-down" }))).toEqual(["cleanedOn"]);
   });
 
@@ -104,9 +115,11 @@ describe("cleaningRecordSchemaFor and raceDaySchemaFor", () => {
 describe("rigPlanRouteSchema and savedRigPlanSchema", () => {
   const request = { oarType: "sculling", measured: { lengthCm: 287, inboardCm: 87 }, target: { lengthCm: 288, inboardCm: 88 } };
   it("refuses a handle move that would leave no inboard (the engine's RangeError)", () => {
-    expect(fieldsOf(rigPlanRouteSchema.safeParse({ ...request, measured: { lengthCm: 299, inboardCm: 2 }, target: { lengthCm: 250, inboardCm: 88 } }))).toEqual([
-      "measured.inboardCm",
-    ]);
+    expect(
+      fieldsOf(
+        rigPlanRouteSchema.safeParse({ ...request, measured: { lengthCm: 299, inboardCm: 2 }, target: { lengthCm: 250, inboardCm: 88 } }),
+      ),
+    ).toEqual(["measured.inboardCm"]);
     expect(rigPlanRouteSchema.parse(request).clickCm).toBe(0.5);
   });
 
@@ -119,7 +132,9 @@ describe("rigPlanRouteSchema and savedRigPlanSchema", () => {
     const plan = { clientId: "0b6f3c1e-7a52-4c1e-9a0e-2f4b8d6a1c33", boatId: 1, oarSetId: 2, request, plannedAt: new Date().toISOString() };
     expect(savedRigPlanSchema.safeParse(plan).success).toBe(true);
     expect(fieldsOf(savedRigPlanSchema.safeParse({ ...plan, clientId: "abc" }))).toEqual(["clientId"]);
-    expect(fieldsOf(savedRigPlanSchema.safeParse({ ...plan, plannedAt: new Date(Date.now() - 31 * 86_400_000).toISOString() }))).toEqual(["plannedAt"]);
+    expect(fieldsOf(savedRigPlanSchema.safeParse({ ...plan, plannedAt: new Date(Date.now() - 31 * 86_400_000).toISOString() }))).toEqual([
+      "plannedAt",
+    ]);
     expect(fieldsOf(savedRigPlanSchema.safeParse({ ...plan, request: { ...request, target: { lengthCm: 320, inboardCm: 88 } } }))).toEqual([
       "request.target.lengthCm",
     ]);

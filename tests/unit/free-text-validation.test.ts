@@ -1,6 +1,11 @@
 import { describe, expect, it } from "vitest";
 import { checkRoster } from "@/lib/members/roster-import";
-import { assessmentSchemaFor, liftSuspensionSchema, revokeCertificateSchema, suspendClearanceSchema } from "@/lib/validations/certification";
+import {
+  assessmentSchemaFor,
+  liftSuspensionSchema,
+  revokeCertificateSchema,
+  suspendClearanceSchema,
+} from "@/lib/validations/certification";
 import { cleaningRecordSchemaFor } from "@/lib/validations/cleaning";
 import { boatSchema, oarSetSchema } from "@/lib/validations/fleet";
 import { acceptInvitationSchema, invitationSchema } from "@/lib/validations/members";
@@ -9,7 +14,15 @@ import { acceptInvitationSchema, invitationSchema } from "@/lib/validations/memb
 const controls = ["\u0000", "\u001b[2J", "\u007f", "\u0085"];
 
 const boat = { name: "Heron", boatClass: "1x", spanCm: 160 };
-const sculls = { name: "Sculls", oarType: "sculling", oarCount: 2, targetLengthCm: 288, targetInboardCm: 88, clickCm: 0.5, handleMechanism: "end-screw" };
+const sculls = {
+  name: "Sculls",
+  oarType: "sculling",
+  oarCount: 2,
+  targetLengthCm: 288,
+  targetInboardCm: 88,
+  clickCm: 0.5,
+  handleMechanism: "end-screw",
+};
 const invitation = { email: "rowan@example.org", name: "Rowan Tidewell", role: "athlete" };
 const acceptance = { token: "A".repeat(43), name: "Rowan Tidewell", password: "tidewater heron slipway" };
 
@@ -26,7 +39,12 @@ const notes: [string, { safeParse: (input: unknown) => { success: boolean } }, R
   ["a boat's notes", boatSchema, boat, "notes"],
   ["an oar set's notes", oarSetSchema, sculls, "notes"],
   ["a cleaning's note", cleaningRecordSchemaFor("2026-12-02"), { oarSetId: 1, cleanedOn: "2026-12-02", method: "wipe-down" }, "note"],
-  ["an assessment's note", assessmentSchemaFor([{ id: "seats-collar", label: "Seats the collar" }]), { items: { "seats-collar": "met" } }, "note"],
+  [
+    "an assessment's note",
+    assessmentSchemaFor([{ id: "seats-collar", label: "Seats the collar" }]),
+    { items: { "seats-collar": "met" } },
+    "note",
+  ],
   ["a suspension's reason", suspendClearanceSchema, {}, "reason"],
   ["a lifted suspension's note", liftSuspensionSchema, {}, "note"],
   ["a revocation's reason", revokeCertificateSchema, {}, "reason"],
@@ -38,12 +56,14 @@ describe("free text", () => {
     expect(schema.safeParse({ ...valid, name: "Wren Halloway\n" }).success, "a trailing line break is trimmed").toBe(true);
     expect(schema.safeParse({ ...valid, name: "Wren\nHalloway" }).success).toBe(false);
     expect(schema.safeParse({ ...valid, name: "Wren\tHalloway" }).success).toBe(false);
-    for (const control of controls) expect(schema.safeParse({ ...valid, name: `Wren${control}Halloway` }).success, JSON.stringify(control)).toBe(false);
+    for (const control of controls)
+      expect(schema.safeParse({ ...valid, name: `Wren${control}Halloway` }).success, JSON.stringify(control)).toBe(false);
   });
 
   it.each(notes)("%s may have line breaks and tabs, no other control characters", (_label, schema, valid, key) => {
     expect(schema.safeParse({ ...valid, [key]: "Grips worn at bow.\r\nReplace\tsoon." }).success).toBe(true);
-    for (const control of controls) expect(schema.safeParse({ ...valid, [key]: `Grips worn${control} at bow.` }).success, JSON.stringify(control)).toBe(false);
+    for (const control of controls)
+      expect(schema.safeParse({ ...valid, [key]: `Grips worn${control} at bow.` }).success, JSON.stringify(control)).toBe(false);
   });
 
   it("a roster row's name is refused with control characters, as the invitation form refuses it", () => {

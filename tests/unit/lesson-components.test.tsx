@@ -2,13 +2,7 @@ import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
 import { Caution, CoachCheck, Tip } from "@/components/lessons/callout";
 import { ClicksCalculator } from "@/components/lessons/clicks-calculator";
-import {
-  describeClicks,
-  evaluateClicksInput,
-  formatCm,
-  formatSignedCm,
-  parseCmInput,
-} from "@/components/lessons/lesson-format";
+import { describeClicks, evaluateClicksInput, formatCm, formatSignedCm, parseCmInput } from "@/components/lessons/lesson-format";
 import { OarDiagram } from "@/components/lessons/oar-diagram";
 import { OverlapVisualiser } from "@/components/lessons/overlap-visualiser";
 import { inboardClicks } from "@/lib/rigging/adjust";
@@ -26,15 +20,7 @@ describe("OarDiagram", () => {
     expect(html).toMatch(/<title id="[^"]+">Parts and measurements of a scull<\/title>/);
     expect(html).toMatch(/<desc id="[^"]+">[^<]*blade-side face of the collar/);
     expect(svgTexts(html)).toEqual(
-      expect.arrayContaining([
-        "handle",
-        "shaft",
-        "blade tip",
-        "sleeve",
-        "blade",
-        "handle end",
-        "collar (button)",
-      ]),
+      expect.arrayContaining(["handle", "shaft", "blade tip", "sleeve", "blade", "handle end", "collar (button)"]),
     );
   });
 
@@ -47,16 +33,10 @@ describe("OarDiagram", () => {
 
   it("marks the three dimensions with values from the typical settings", () => {
     const scull = svgTexts(renderToStaticMarkup(<OarDiagram kind="scull" />));
-    expect(scull).toEqual(
-      expect.arrayContaining(["overall length 288 cm", "inboard 88 cm", "outboard 200 cm"]),
-    );
+    expect(scull).toEqual(expect.arrayContaining(["overall length 288 cm", "inboard 88 cm", "outboard 200 cm"]));
     const sweep = svgTexts(renderToStaticMarkup(<OarDiagram kind="sweep" />));
-    expect(sweep).toEqual(
-      expect.arrayContaining(["overall length 374 cm", "inboard 116 cm", "outboard 258 cm"]),
-    );
-    const custom = svgTexts(
-      renderToStaticMarkup(<OarDiagram kind="scull" lengthCm={287.5} inboardCm={87.5} />),
-    );
+    expect(sweep).toEqual(expect.arrayContaining(["overall length 374 cm", "inboard 116 cm", "outboard 258 cm"]));
+    const custom = svgTexts(renderToStaticMarkup(<OarDiagram kind="scull" lengthCm={287.5} inboardCm={87.5} />));
     expect(custom).toEqual(expect.arrayContaining(["overall length 287.5 cm", "outboard 200 cm"]));
   });
 
@@ -69,12 +49,8 @@ describe("OarDiagram", () => {
   });
 
   it("scales with its container and refuses an inboard longer than the oar", () => {
-    expect(renderToStaticMarkup(<OarDiagram kind="scull" />)).toMatch(
-      /viewBox="0 0 360 240"[^>]*class="[^"]*w-full/,
-    );
-    expect(() => renderToStaticMarkup(<OarDiagram kind="scull" lengthCm={80} inboardCm={88} />)).toThrow(
-      /inboard/,
-    );
+    expect(renderToStaticMarkup(<OarDiagram kind="scull" />)).toMatch(/viewBox="0 0 360 240"[^>]*class="[^"]*w-full/);
+    expect(() => renderToStaticMarkup(<OarDiagram kind="scull" lengthCm={80} inboardCm={88} />)).toThrow(/inboard/);
   });
 });
 
@@ -101,9 +77,7 @@ describe("ClicksCalculator before hydration", () => {
 
   it("has a label for every input and a polite live result", () => {
     for (const label of ["Measured inboard (cm)", "Target inboard (cm)", "One click (cm)"]) {
-      const forId = html.match(
-        new RegExp(`<label for="([^"]+)"[^>]*>${label.replace(/[()]/g, "\\$&")}</label>`),
-      )?.[1];
+      const forId = html.match(new RegExp(`<label for="([^"]+)"[^>]*>${label.replace(/[()]/g, "\\$&")}</label>`))?.[1];
       expect(forId, label).toBeTruthy();
       expect(html).toContain(`id="${forId}"`);
     }
@@ -153,16 +127,10 @@ describe("the calculator's rules in words", () => {
   });
 
   it("describes no change, shortening and lengthening", () => {
-    expect(describeClicks(inboardClicks(88, 88), 0.5)).toEqual([
-      "No clicks: the inboard is already on the target.",
-    ]);
-    expect(describeClicks(inboardClicks(89, 88), 0.5)[0]).toBe(
-      "Move the collar 2 clicks towards the handle.",
-    );
+    expect(describeClicks(inboardClicks(88, 88), 0.5)).toEqual(["No clicks: the inboard is already on the target."]);
+    expect(describeClicks(inboardClicks(89, 88), 0.5)[0]).toBe("Move the collar 2 clicks towards the handle.");
     const ok = evaluateClicksInput("87", "87.5", "0.5");
-    expect(ok.ok && describeClicks(ok.result, ok.clickCm)[0]).toBe(
-      "Move the collar 1 click towards the blade.",
-    );
+    expect(ok.ok && describeClicks(ok.result, ok.clickCm)[0]).toBe("Move the collar 1 click towards the blade.");
     expect(describeClicks(inboardClicks(88, 88.2), 0.5)[0]).toMatch(/less than half a click/);
   });
 });
@@ -171,9 +139,7 @@ describe("OverlapVisualiser before hydration", () => {
   const html = renderToStaticMarkup(<OverlapVisualiser />);
 
   it("states the convention and both figures for span 159 cm, inboard 88 cm (FISA 2006 protocol)", () => {
-    expect(html).toContain(
-      "measurement protocol: 2 × (inboard + half swivel width) − span, half swivel 2 cm",
-    );
+    expect(html).toContain("measurement protocol: 2 × (inboard + half swivel width) − span, half swivel 2 cm");
     expect(html).toContain("Overlap: 21 cm");
     expect(html).toContain("2 × 88 − 159 = 17 cm");
     expect(svgTexts(html)).toEqual(expect.arrayContaining(["overlap 21 cm", "span 159 cm", "centre line"]));
@@ -196,16 +162,7 @@ describe("OverlapVisualiser before hydration", () => {
 
 describe("mdx-components", () => {
   it("maps the lesson components and styled elements, and the hook returns the same map", () => {
-    for (const name of [
-      "OarDiagram",
-      "Caution",
-      "Tip",
-      "CoachCheck",
-      "ClicksCalculator",
-      "OverlapVisualiser",
-      "h2",
-      "table",
-    ]) {
+    for (const name of ["OarDiagram", "Caution", "Tip", "CoachCheck", "ClicksCalculator", "OverlapVisualiser", "h2", "table"]) {
       expect(mdxComponents).toHaveProperty(name);
     }
     expect(useMDXComponents().OarDiagram).toBe(OarDiagram);

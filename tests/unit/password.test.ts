@@ -37,7 +37,8 @@ describe("password rules", () => {
     expect(passwordProblem(start)).toBeNull();
     expect(passwordProblem(`${start}x`)).toMatch(/at most 72/);
     // Letters from À to ÿ (U+00C0–U+00FF, taken out of order) take 2 bytes each: 36 of them are 72 bytes, 37 are 74.
-    const accented = (count: number) => Array.from({ length: count }, (_, index) => String.fromCharCode(0xc0 + ((index * 7) % 64))).join("");
+    const accented = (count: number) =>
+      Array.from({ length: count }, (_, index) => String.fromCharCode(0xc0 + ((index * 7) % 64))).join("");
     expect(passwordProblem(accented(36))).toBeNull();
     expect(passwordProblem(accented(37))).toMatch(/at most 72/);
     // The invitation form's schema says so once (a second length rule used to repeat the message).

@@ -57,17 +57,9 @@ describe("certificate QR code", () => {
       drawn.push([]);
       for (let column = 0; column < count; column += 1) {
         const inCode =
-          row >= qrMarginModules &&
-          column >= qrMarginModules &&
-          row < count - qrMarginModules &&
-          column < count - qrMarginModules;
+          row >= qrMarginModules && column >= qrMarginModules && row < count - qrMarginModules && column < count - qrMarginModules;
         expected[row]!.push(inCode && Boolean(modules.get(row - qrMarginModules, column - qrMarginModules)));
-        drawn[row]!.push(
-          darkAt(
-            qrCodeBox.x + (column + 0.5) * modulePt,
-            qrCodeBox.y + qrCodeBox.size - (row + 0.5) * modulePt,
-          ),
-        );
+        drawn[row]!.push(darkAt(qrCodeBox.x + (column + 0.5) * modulePt, qrCodeBox.y + qrCodeBox.size - (row + 0.5) * modulePt));
       }
     }
     expect(drawn).toEqual(expected);

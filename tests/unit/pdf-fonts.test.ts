@@ -169,10 +169,7 @@ describe("PDF fonts", () => {
     // Invented; 37 characters, the kind of double-barrelled name a club meets.
     const longName = "Alexandra Konstantinopoulou-Whitfield";
     const longCoach = "Bartholomew Fitzwilliam-Ashcombe";
-    const certificate = await renderCertificatePdf(
-      { ...international, athleteName: longName, coachName: longCoach },
-      await pdfFonts(),
-    );
+    const certificate = await renderCertificatePdf({ ...international, athleteName: longName, coachName: longCoach }, await pdfFonts());
     expect(extractedLines(certificate)).toEqual(expect.arrayContaining([longName, longCoach]));
     const register = await renderRegisterPdf(
       {
@@ -243,8 +240,7 @@ describe("PDF fonts", () => {
   it("lays out each character as fontkit's layout engine does with every feature off", async () => {
     const fonts = await pdfFonts();
     const ignorable: number[] = [];
-    for (let codePoint = 0; codePoint <= 0x10ffff; codePoint += 1)
-      if (isDefaultIgnorable(codePoint)) ignorable.push(codePoint);
+    for (let codePoint = 0; codePoint <= 0x10ffff; codePoint += 1) if (isDefaultIgnorable(codePoint)) ignorable.push(codePoint);
     expect(ignorable).toContain(0xad);
     expect(ignorable).toContain(0x200d);
     for (const bytes of [fonts.regular, fonts.bold]) {
@@ -257,7 +253,9 @@ describe("PDF fonts", () => {
           .join(",");
       // Mapped and default-ignorable code points.
       const codePoints = [...engine.characterSet, ...ignorable];
-      const differing = codePoints.filter((codePoint) => ids(engine, String.fromCodePoint(codePoint)) !== ids(plain, String.fromCodePoint(codePoint)));
+      const differing = codePoints.filter(
+        (codePoint) => ids(engine, String.fromCodePoint(codePoint)) !== ids(plain, String.fromCodePoint(codePoint)),
+      );
       expect(differing).toEqual([]);
       // A few unmapped ones (fraction slash, an emoji, private use, the last), each against a fresh engine:
       // fontkit's engine labels .notdef with the first character that asked for it, so after an unmapped
@@ -277,9 +275,7 @@ describe("PDF fonts", () => {
       // nothing, so they cannot show a lost glyph; embedPlainFont leaves the last out altogether (above).
       const characters = fontkit
         .create(bytes)
-        .characterSet.filter(
-          (codePoint) => codePoint > 0x20 && !(codePoint >= 0x7f && codePoint <= 0xa0) && !isDefaultIgnorable(codePoint),
-        )
+        .characterSet.filter((codePoint) => codePoint > 0x20 && !(codePoint >= 0x7f && codePoint <= 0xa0) && !isDefaultIgnorable(codePoint))
         .map((codePoint) => String.fromCodePoint(codePoint));
       expect(characters.length).toBeGreaterThan(2000);
       // One line of 40 characters a page. With a font of its own on each page, every subset is a few
@@ -291,16 +287,12 @@ describe("PDF fonts", () => {
         let font: PDFFont | null = null;
         for (let start = 0; start < characters.length; start += perPage) {
           if (ownFontEachPage || !font) font = await embed(document, bytes);
-          document
-            .addPage([600, 24])
-            .drawText(characters.slice(start, start + perPage).join(" "), { x: 8, y: 8, size: 10, font });
+          document.addPage([600, 24]).drawText(characters.slice(start, start + perPage).join(" "), { x: 8, y: 8, size: 10, font });
         }
         return document.save();
       };
       const [subset, whole] = await Promise.all(
-        [lines(true, embedPlainFont), lines(false, embedWholeFace)].map(async (render) =>
-          pagePictures(await render()),
-        ),
+        [lines(true, embedPlainFont), lines(false, embedWholeFace)].map(async (render) => pagePictures(await render())),
       );
       expect(subset).toHaveLength(Math.ceil(characters.length / perPage));
       expect(whole).toHaveLength(subset!.length);

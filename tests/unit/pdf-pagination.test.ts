@@ -4,9 +4,7 @@ import { pageLabel, paginate, rowsPerPage } from "@/lib/pdf/pagination";
 describe("register pagination", () => {
   it("fits whole rows between header and footer", () => {
     expect(rowsPerPage({ pageHeight: 595, top: 40, bottom: 40, headerHeight: 75, rowHeight: 22 })).toBe(20);
-    expect(() =>
-      rowsPerPage({ pageHeight: 100, top: 40, bottom: 40, headerHeight: 20, rowHeight: 22 }),
-    ).toThrow(RangeError);
+    expect(() => rowsPerPage({ pageHeight: 100, top: 40, bottom: 40, headerHeight: 20, rowHeight: 22 })).toThrow(RangeError);
   });
 
   it("cuts rows into pages, the last one partial, and prints one page for an empty register", () => {

@@ -41,9 +41,7 @@ describe("fixedBanks", () => {
   it("puts length before inboard in every rig-change order", () => {
     for (const variant of fixedBanks["order:rig-change-steps"]) {
       if (variant.kind !== "order") throw new Error("order bank must hold order questions");
-      const lengthStep = variant.steps.findIndex(
-        (s) => /overall length/.test(s) && /(Move|Set) the handle|at the handle/.test(s),
-      );
+      const lengthStep = variant.steps.findIndex((s) => /overall length/.test(s) && /(Move|Set) the handle|at the handle/.test(s));
       const inboardStep = variant.steps.findIndex((s) => /collar/.test(s) && /(Move|Set)/.test(s));
       expect(lengthStep).toBeGreaterThanOrEqual(0);
       expect(inboardStep).toBeGreaterThan(lengthStep);

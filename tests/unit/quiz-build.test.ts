@@ -140,12 +140,8 @@ describe("buildQuiz", () => {
   });
 
   it("refuses an invalid recipe or settings", () => {
-    expect(() =>
-      buildQuiz({ recipe: { draw: 8, items: [{ use: "outboard", count: 2 }] }, seed: "x", settings }),
-    ).toThrow(RangeError);
-    expect(() =>
-      buildQuiz({ recipe: mixedRecipe, seed: "x", settings: { clickCm: 0, halfSwivelCm: 2 } }),
-    ).toThrow(RangeError);
+    expect(() => buildQuiz({ recipe: { draw: 8, items: [{ use: "outboard", count: 2 }] }, seed: "x", settings })).toThrow(RangeError);
+    expect(() => buildQuiz({ recipe: mixedRecipe, seed: "x", settings: { clickCm: 0, halfSwivelCm: 2 } })).toThrow(RangeError);
   });
 });
 

@@ -24,18 +24,12 @@ const settingsCases: QuizSettings[] = [
   { clickCm: 0.25, halfSwivelCm: 0 },
 ];
 
-function build(
-  name: (typeof computedGeneratorNames)[number],
-  seed: number,
-  settings: QuizSettings,
-): Question {
+function build(name: (typeof computedGeneratorNames)[number], seed: number, settings: QuizSettings): Question {
   return generators[name](createRng(`test-${name}-${seed}`), settings);
 }
 
 /** Every question each generator makes for many seeds and each settings case. */
-function sample(
-  name: (typeof computedGeneratorNames)[number],
-): { question: Question; settings: QuizSettings }[] {
+function sample(name: (typeof computedGeneratorNames)[number]): { question: Question; settings: QuizSettings }[] {
   const out: { question: Question; settings: QuizSettings }[] = [];
   for (let seed = 0; seed < seedsPerGenerator; seed += 1) {
     const settings = settingsCases[seed % settingsCases.length] as QuizSettings;
@@ -80,15 +74,9 @@ function inRange(value: number, range: { min: number; max: number }): boolean {
 const n = "([\\d.]+)";
 
 /** Recomputes each answer from the numbers in the prompt with a separate engine call. */
-const independentChecks: Record<
-  (typeof computedGeneratorNames)[number],
-  (q: Question, s: QuizSettings) => void
-> = {
+const independentChecks: Record<(typeof computedGeneratorNames)[number], (q: Question, s: QuizSettings) => void> = {
   "length-change": (q) => {
-    const [measured, target] = [
-      num(q.prompt, new RegExp(`measures ${n} cm`)),
-      num(q.prompt, new RegExp(`asks for ${n} cm`)),
-    ];
+    const [measured, target] = [num(q.prompt, new RegExp(`measures ${n} cm`)), num(q.prompt, new RegExp(`asks for ${n} cm`))];
     expect(inRange(measured, realisticCm[oarTypeOf(q.prompt)].lengthCm)).toBe(true);
     expect(q.answer).toBeCloseTo(Math.abs(lengthChange(measured, target).changeCm), 9);
     expect(q.answer).toBeGreaterThan(0);
@@ -136,12 +124,8 @@ const independentChecks: Record<
     const length = num(q.prompt, new RegExp(`is ${n} cm long`));
     const inboard = num(q.prompt, new RegExp(`inboard of ${n} cm`));
     const spanOrSpread = num(q.prompt, new RegExp(`(?:span|spread) of ${n} cm`));
-    expect(inRange(spanOrSpread, oarType === "sculling" ? realisticCm.spanCm : realisticCm.spreadCm)).toBe(
-      true,
-    );
-    expect(
-      Math.abs((q.answer as number) - spanGearing(oarType, length, inboard, spanOrSpread)),
-    ).toBeLessThanOrEqual(0.005 + 1e-9);
+    expect(inRange(spanOrSpread, oarType === "sculling" ? realisticCm.spanCm : realisticCm.spreadCm)).toBe(true);
+    expect(Math.abs((q.answer as number) - spanGearing(oarType, length, inboard, spanOrSpread))).toBeLessThanOrEqual(0.005 + 1e-9);
   },
   "overlap-sculling": (q, s) => {
     const inboard = num(q.prompt, new RegExp(`inboard of ${n} cm`));
@@ -163,9 +147,7 @@ const independentChecks: Record<
     expect(q.answer).toBe(spread + 30); // rule of thumb: common practice, no source
   },
   "limit-check": (q) => {
-    const match = new RegExp(
-      `allows (sculls|sweep oars) from ${n} to ${n} cm long, with an inboard from ${n} to ${n} cm`,
-    ).exec(q.prompt);
+    const match = new RegExp(`allows (sculls|sweep oars) from ${n} to ${n} cm long, with an inboard from ${n} to ${n} cm`).exec(q.prompt);
     const card = new RegExp(`says ${n} cm long with an inboard of ${n} cm`).exec(q.prompt);
     expect(match).not.toBeNull();
     expect(card).not.toBeNull();
@@ -185,14 +167,12 @@ const independentChecks: Record<
     let lastCleanedOn: string | null;
     if (/no record/.test(q.prompt)) lastCleanedOn = null;
     else if (/earlier today/.test(q.prompt)) lastCleanedOn = today;
-    else if (/cleaned the handles of your oars yesterday/.test(q.prompt))
-      lastCleanedOn = addDaysIso(today, -1);
+    else if (/cleaned the handles of your oars yesterday/.test(q.prompt)) lastCleanedOn = addDaysIso(today, -1);
     else lastCleanedOn = addDaysIso(today, -num(q.prompt, /(\d+) days ago/));
     let raceDays: string[] = [];
     if (/race later today/.test(q.prompt)) raceDays = [today];
     else if (/race tomorrow/.test(q.prompt)) raceDays = [addDaysIso(today, 1)];
-    else if (/race in \d+ days/.test(q.prompt))
-      raceDays = [addDaysIso(today, num(q.prompt, /race in (\d+) days/))];
+    else if (/race in \d+ days/.test(q.prompt)) raceDays = [addDaysIso(today, num(q.prompt, /race in (\d+) days/))];
     const humidSpell = /hot and humid/.test(q.prompt);
     const state = cleaningDueState({ lastCleanedOn, today, raceDays, humidSpell });
     expect(answerLabel(q)).toBe(state.due ? cleaningDueLabels.due : cleaningDueLabels.notDue);

@@ -79,21 +79,7 @@ describe("parseNumericAnswer", () => {
   });
 
   it("refuses anything else", () => {
-    for (const value of [
-      "",
-      " ",
-      "3 cm",
-      "1e3",
-      "0x10",
-      "3.5.1",
-      "abc",
-      null,
-      undefined,
-      [],
-      {},
-      Number.NaN,
-      Number.POSITIVE_INFINITY,
-    ]) {
+    for (const value of ["", " ", "3 cm", "1e3", "0x10", "3.5.1", "abc", null, undefined, [], {}, Number.NaN, Number.POSITIVE_INFINITY]) {
       expect(parseNumericAnswer(value)).toBeNull();
     }
   });

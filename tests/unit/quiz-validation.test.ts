@@ -33,9 +33,7 @@ describe("quizSubmissionSchema", () => {
   });
 
   it("refuses too many answers", () => {
-    const answers = Object.fromEntries(
-      Array.from({ length: maxAnswersPerSubmission + 1 }, (_, i) => [`q${i + 1}`, 1]),
-    );
+    const answers = Object.fromEntries(Array.from({ length: maxAnswersPerSubmission + 1 }, (_, i) => [`q${i + 1}`, 1]));
     const result = quizSubmissionSchema.safeParse({ answers });
     expect(result.success).toBe(false);
     expect(result.error?.issues[0]?.path).toEqual(["answers"]);

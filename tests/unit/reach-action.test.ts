@@ -33,7 +33,9 @@ describe("reachAction", () => {
 
   it("tells a page older than the last update to reload, since the server no longer has its action", async () => {
     vi.spyOn(console, "warn").mockImplementation(() => {});
-    const outcome = await reachAction(() => Promise.reject(new UnrecognizedActionError('Server Action "7f00" was not found on the server.')));
+    const outcome = await reachAction(() =>
+      Promise.reject(new UnrecognizedActionError('Server Action "7f00" was not found on the server.')),
+    );
     expect(outcome).toEqual({ ok: false, message: outdatedPageMessage, fieldErrors: {} });
     expect(outcome.message).toContain("Reload the page");
   });

@@ -1,11 +1,6 @@
 import { describe, expect, it } from "vitest";
 
-import {
-  defaultClickCm,
-  inboardAfterLengthChangeCm,
-  inboardClicks,
-  lengthChange,
-} from "@/lib/rigging/adjust";
+import { defaultClickCm, inboardAfterLengthChangeCm, inboardClicks, lengthChange } from "@/lib/rigging/adjust";
 
 describe("lengthChange", () => {
   it("lengthens when the target is longer", () => {

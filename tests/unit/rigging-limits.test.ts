@@ -56,12 +56,9 @@ describe("checkLimits", () => {
   it("warns about each setting outside the range", () => {
     const warnings = checkLimits("sweep", { lengthCm: 365.5, inboardCm: 121 });
     expect(warnings).toHaveLength(2);
-    expect(warnings[0]).toMatch(
-      /overall length of 365.5 cm is below your club's range for sweep oars \(366–380 cm\)/,
-    );
+    expect(warnings[0]).toMatch(/overall length of 365.5 cm is below your club's range for sweep oars \(366–380 cm\)/);
     expect(warnings[1]).toMatch(/inboard of 121 cm is above/);
-    for (const warning of warnings)
-      expect(warning.endsWith("ask your coach before going afloat.")).toBe(true);
+    for (const warning of warnings) expect(warning.endsWith("ask your coach before going afloat.")).toBe(true);
   });
 
   it("accepts one type's limits as well as a club's", () => {
@@ -80,9 +77,7 @@ describe("checkOverlap", () => {
   };
 
   it("warns below Woodgate's minimum overlap of 10.16 cm (W. B. Woodgate, Boating, Badminton Library, 1888, p. 136)", () => {
-    expect(checkOverlap(8, woodgate)).toMatch(
-      /less than your club's minimum of 10.16 cm: ask your coach before going afloat\.$/,
-    );
+    expect(checkOverlap(8, woodgate)).toMatch(/less than your club's minimum of 10.16 cm: ask your coach before going afloat\.$/);
     expect(checkOverlap(10.16, woodgate)).toBeNull();
     expect(checkOverlap(21, woodgate)).toBeNull();
   });

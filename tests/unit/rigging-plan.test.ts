@@ -160,11 +160,7 @@ describe("planRigChange", () => {
       measured: { lengthCm: 288, inboardCm: 88 },
       target: { lengthCm: 294, inboardCm: 88 },
     });
-    expect(
-      plan.warnings.some(
-        (w) => /above your club's range/.test(w) && w.endsWith("ask your coach before going afloat."),
-      ),
-    ).toBe(true);
+    expect(plan.warnings.some((w) => /above your club's range/.test(w) && w.endsWith("ask your coach before going afloat."))).toBe(true);
   });
 
   it("checks the target against the limits it is given, including a minimum overlap (Woodgate 1888, p. 136: 10.16 cm)", () => {

@@ -65,9 +65,7 @@ describe("rigPlanRequestSchema", () => {
   });
 
   it("requires the inboard to be shorter than the length, naming the inboard", () => {
-    expect(issuePaths({ ...good, measured: { lengthCm: 287, inboardCm: 287 } })).toEqual([
-      "measured.inboardCm",
-    ]);
+    expect(issuePaths({ ...good, measured: { lengthCm: 287, inboardCm: 287 } })).toEqual(["measured.inboardCm"]);
   });
 
   it("rejects a scull of 300 cm or more as the wrong oar type, naming the length", () => {
@@ -88,9 +86,7 @@ describe("rigPlanRequestSchema", () => {
   });
 
   it("keeps lengths in a sane range for the type", () => {
-    expect(issuePaths({ ...good, measured: { lengthCm: 249, inboardCm: 87 } })).toEqual([
-      "measured.lengthCm",
-    ]);
+    expect(issuePaths({ ...good, measured: { lengthCm: 249, inboardCm: 87 } })).toEqual(["measured.lengthCm"]);
     expect(issuePaths({ ...good, measured: { lengthCm: 250, inboardCm: 87 } })).toEqual([]);
     expect(issuePaths({ ...good, measured: { lengthCm: 299.9, inboardCm: 87 } })).toEqual([]);
     const sweep = {

@@ -41,7 +41,10 @@ describe("startSession", () => {
     fakeServer(Response.json({ url: `${origin}/sign-in?error=invalid` }));
     expect(await startSession("password", { email: "a@b.example", password: "wrong-password" })).toEqual({ ok: false, reason: "refused" });
     fakeServer(Response.json({ url: `${origin}/sign-in?error=throttled` }, { status: 429 }));
-    expect(await startSession("password", { email: "a@b.example", password: "wrong-password" })).toEqual({ ok: false, reason: "throttled" });
+    expect(await startSession("password", { email: "a@b.example", password: "wrong-password" })).toEqual({
+      ok: false,
+      reason: "throttled",
+    });
   });
 
   it("says the server was not reached when the request fails or the server breaks, rather than refusing", async () => {

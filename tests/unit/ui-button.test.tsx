@@ -10,7 +10,13 @@ describe("Button before hydration", () => {
   });
 
   it("stays enabled when it works without the script (a plain GET filter form)", () => {
-    expect(renderToStaticMarkup(<Button type="submit" worksWithoutScript>Show</Button>)).not.toMatch(/ disabled=""/);
+    expect(
+      renderToStaticMarkup(
+        <Button type="submit" worksWithoutScript>
+          Show
+        </Button>,
+      ),
+    ).not.toMatch(/ disabled=""/);
   });
 
   it("says what it is doing while pending", () => {

@@ -36,8 +36,7 @@ function raceText(offset: number | null): string {
 const reasonText: Record<CleaningDueReason, string> = {
   "never-cleaned": "There is no cleaning on record, so the handles are due now.",
   "over-7-days": `It has been ${weeklyCleanDays} days or more since the last clean, and handles are cleaned at least weekly.`,
-  "race-day-next":
-    "A race is coming and the handles have not been cleaned since the day before it: clean before every race.",
+  "race-day-next": "A race is coming and the handles have not been cleaned since the day before it: clean before every race.",
   "humid-spell": "In a hot, humid spell handles are cleaned every day, and they have not been cleaned today.",
   ok: "None of the rules applies yet.",
 };
@@ -63,9 +62,7 @@ export const cleaningDueQuestion: QuestionGenerator = (rng) => {
       : `You last cleaned the handles of your oars ${daysAgoText(daysSinceCleaned)}.`;
   const weatherText = humidSpell ? "It has been hot and humid all week." : "The weather is cool and dry.";
   const nextNote =
-    !state.due && state.nextDueOn !== null
-      ? ` The next clean is due in ${daysText(daysBetweenIso(today, state.nextDueOn))}.`
-      : "";
+    !state.due && state.nextDueOn !== null ? ` The next clean is due in ${daysText(daysBetweenIso(today, state.nextDueOn))}.` : "";
   return question("cleaning-due", {
     kind: "single",
     prompt: `${cleanedText} ${raceText(raceOffset)} ${weatherText} Are your handles due for a clean today?`,

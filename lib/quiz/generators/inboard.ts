@@ -101,8 +101,7 @@ export const clickDirectionQuestion: QuestionGenerator = (rng, settings) => {
       .filter((direction) => direction !== result.direction)
       .map((direction) => collarDirectionLabels[direction]),
   );
-  const clicksNote =
-    result.clicks === 0 ? "" : ` That is ${formatClicks(result.clicks)} of ${formatCm(settings.clickCm)}.`;
+  const clicksNote = result.clicks === 0 ? "" : ` That is ${formatClicks(result.clicks)} of ${formatCm(settings.clickCm)}.`;
   return question("click-direction", {
     kind: "single",
     prompt:

@@ -1,16 +1,8 @@
 import { cleaningDueQuestion } from "@/lib/quiz/generators/cleaning";
-import {
-  clickDirectionQuestion,
-  inboardAfterHandleMoveQuestion,
-  inboardClicksQuestion,
-} from "@/lib/quiz/generators/inboard";
+import { clickDirectionQuestion, inboardAfterHandleMoveQuestion, inboardClicksQuestion } from "@/lib/quiz/generators/inboard";
 import { lengthChangeQuestion, lengthDirectionQuestion } from "@/lib/quiz/generators/length";
 import { limitCheckQuestion } from "@/lib/quiz/generators/limits";
-import {
-  overlapScullingQuestion,
-  overlapSweepQuestion,
-  suggestedInboardSweepQuestion,
-} from "@/lib/quiz/generators/overlap";
+import { overlapScullingQuestion, overlapSweepQuestion, suggestedInboardSweepQuestion } from "@/lib/quiz/generators/overlap";
 import { leverRatioQuestion, outboardQuestion, spanGearingQuestion } from "@/lib/quiz/generators/ratios";
 import type { QuestionGenerator } from "@/lib/quiz/generators/scenario";
 import type { ComputedGeneratorName } from "@/lib/quiz/types";

@@ -1,17 +1,6 @@
 import { formatCm, formatNumber } from "@/lib/quiz/format";
-import {
-  question,
-  randomInboardCm,
-  randomSpanCm,
-  randomSpreadCm,
-  type QuestionGenerator,
-} from "@/lib/quiz/generators/scenario";
-import {
-  overlapCm,
-  simpleOverlapCm,
-  suggestedInboardCm,
-  sweepInboardOverSpreadCm,
-} from "@/lib/rigging/geometry";
+import { question, randomInboardCm, randomSpanCm, randomSpreadCm, type QuestionGenerator } from "@/lib/quiz/generators/scenario";
+import { overlapCm, simpleOverlapCm, suggestedInboardCm, sweepInboardOverSpreadCm } from "@/lib/rigging/geometry";
 
 /** Sculling overlap by the measurement protocol: 2 × (inboard + half swivel width) − span. */
 export const overlapScullingQuestion: QuestionGenerator = (rng, settings) => {

@@ -62,9 +62,6 @@ export function oarNoun(oarType: OarType): string {
 }
 
 /** A partial question with a placeholder id; buildQuiz gives the real id. */
-export function question(
-  generator: ComputedGeneratorName,
-  fields: Omit<Question, "id" | "generator">,
-): Question {
+export function question(generator: ComputedGeneratorName, fields: Omit<Question, "id" | "generator">): Question {
   return { id: generator, generator, ...fields };
 }

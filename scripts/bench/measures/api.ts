@@ -27,7 +27,11 @@ async function pause(): Promise<void> {
 function medianRound(results: readonly LoadResult[]): LoadResult {
   const byRate = [...results].sort((a, b) => a.requestsPerSecond - b.requestsPerSecond);
   const middle = byRate[Math.floor((byRate.length - 1) / 2)]!;
-  return { ...middle, requestsPerSecond: median(results.map((result) => result.requestsPerSecond)), p99Ms: Math.max(...results.map((result) => result.p99Ms)) };
+  return {
+    ...middle,
+    requestsPerSecond: median(results.map((result) => result.requestsPerSecond)),
+    p99Ms: Math.max(...results.map((result) => result.p99Ms)),
+  };
 }
 
 /**
@@ -44,18 +48,44 @@ function submitRounds(context: BenchContext): Promise<SubmitRounds> {
     const warmUpPool = context.dataset.submitPool.slice(0, warmUpAttempts);
     const measuredPool = context.dataset.submitPool.slice(warmUpAttempts);
     context.log(`warm-up, not counted: ${warmUpSeconds} s of GET ${trivialPath}, then ${warmUpSeconds} s of quiz submissions`);
-    await runLoad({ baseUrl: context.baseUrl, connections: context.connections, durationSeconds: warmUpSeconds, request: { method: "GET", path: trivialPath } });
+    await runLoad({
+      baseUrl: context.baseUrl,
+      connections: context.connections,
+      durationSeconds: warmUpSeconds,
+      request: { method: "GET", path: trivialPath },
+    });
     const warmUp = submitRequests(context, warmUpPool);
-    await runLoad({ baseUrl: context.baseUrl, connections: context.connections, durationSeconds: warmUpSeconds, maxRequests: warmUp.maxRequests, request: warmUp.request });
+    await runLoad({
+      baseUrl: context.baseUrl,
+      connections: context.connections,
+      durationSeconds: warmUpSeconds,
+      maxRequests: warmUp.maxRequests,
+      request: warmUp.request,
+    });
     await pause();
     const share = Math.floor(measuredPool.length / context.apiRounds);
     for (let round = 0; round < context.apiRounds; round += 1) {
-      context.log(`round ${round + 1} of ${context.apiRounds}: autocannon ${context.connections} connections, ${context.roundSeconds} s: GET ${trivialPath}`);
-      const trivial = await runLoad({ baseUrl: context.baseUrl, connections: context.connections, durationSeconds: context.roundSeconds, request: { method: "GET", path: trivialPath } });
+      context.log(
+        `round ${round + 1} of ${context.apiRounds}: autocannon ${context.connections} connections, ${context.roundSeconds} s: GET ${trivialPath}`,
+      );
+      const trivial = await runLoad({
+        baseUrl: context.baseUrl,
+        connections: context.connections,
+        durationSeconds: context.roundSeconds,
+        request: { method: "GET", path: trivialPath },
+      });
       await pause();
       const { request, maxRequests } = submitRequests(context, measuredPool.slice(round * share, (round + 1) * share));
-      context.log(`round ${round + 1} of ${context.apiRounds}: ≤ ${context.roundSeconds} s, ≤ ${maxRequests} attempts: POST /api/attempts/{id}/submit`);
-      const submit = await runLoad({ baseUrl: context.baseUrl, connections: context.connections, durationSeconds: context.roundSeconds, maxRequests, request });
+      context.log(
+        `round ${round + 1} of ${context.apiRounds}: ≤ ${context.roundSeconds} s, ≤ ${maxRequests} attempts: POST /api/attempts/{id}/submit`,
+      );
+      const submit = await runLoad({
+        baseUrl: context.baseUrl,
+        connections: context.connections,
+        durationSeconds: context.roundSeconds,
+        maxRequests,
+        request,
+      });
       await pause();
       rounds.push({ trivial, submit });
     }
@@ -94,7 +124,12 @@ function submitRequests(context: BenchContext, pool: typeof context.dataset.subm
   const maxRequests = queue.size - 2 * context.connections - 10;
   const request = () => {
     const next = queue.take();
-    return { method: "POST" as const, path: next.path, headers: { Cookie: next.cookie, "Content-Type": "application/json" }, body: next.body };
+    return {
+      method: "POST" as const,
+      path: next.path,
+      headers: { Cookie: next.cookie, "Content-Type": "application/json" },
+      body: next.body,
+    };
   };
   return { request, maxRequests };
 }
@@ -172,7 +207,9 @@ async function readsBesideWrites(context: BenchContext, path: string) {
   const half = Math.floor(context.dataset.writePool.length / 2);
   const part = path === rosterPaths[0] ? context.dataset.writePool.slice(0, half) : context.dataset.writePool.slice(half);
   const { request, maxRequests } = submitRequests(context, part);
-  context.log(`autocannon: GET ${path} from ${context.connections} connections while ${writerConnections} connections submit, ${context.loadSeconds} s`);
+  context.log(
+    `autocannon: GET ${path} from ${context.connections} connections while ${writerConnections} connections submit, ${context.loadSeconds} s`,
+  );
   const [reads, writes] = await Promise.all([
     rosterLoad(context, path),
     runLoad({ baseUrl: context.baseUrl, connections: writerConnections, durationSeconds: context.loadSeconds, maxRequests, request }),

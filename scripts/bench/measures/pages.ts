@@ -49,8 +49,22 @@ function describe(figures: PageFigures): string {
 export async function referencePages(context: BenchContext): Promise<Row[]> {
   const { staticLesson, minimal } = await pages(context);
   return [
-    { figure: `Static page, same text (${context.staticLessonPath})`, value: describe(staticLesson), baseline: "—", ratio: "—", target: "reference", result: "report" },
-    { figure: `Minimal app page (${context.minimalPath})`, value: describe(minimal), baseline: "—", ratio: "—", target: "reference", result: "report" },
+    {
+      figure: `Static page, same text (${context.staticLessonPath})`,
+      value: describe(staticLesson),
+      baseline: "—",
+      ratio: "—",
+      target: "reference",
+      result: "report",
+    },
+    {
+      figure: `Minimal app page (${context.minimalPath})`,
+      value: describe(minimal),
+      baseline: "—",
+      ratio: "—",
+      target: "reference",
+      result: "report",
+    },
   ];
 }
 

@@ -83,7 +83,9 @@ export async function answerQuiz(page: Page, questions: StoredQuestion[], correc
 
 /** Waits for the quiz form to open an attempt and returns its id and public payload. */
 export async function openQuiz(page: Page, slug: string): Promise<{ attemptId: string; payload: string }> {
-  const opened = page.waitForResponse((response) => response.url().endsWith(`/api/modules/${slug}/attempts`) && response.request().method() === "POST");
+  const opened = page.waitForResponse(
+    (response) => response.url().endsWith(`/api/modules/${slug}/attempts`) && response.request().method() === "POST",
+  );
   await page.goto(`/learn/${slug}/quiz`);
   const response = await opened;
   const payload = await response.text();

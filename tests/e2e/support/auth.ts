@@ -21,7 +21,10 @@ export async function signIn(page: Page, email: string, password = demo.password
 /** The newest message in the demo outbox addressed to `to`, read in the browser as the admin would. */
 export async function openNewestMailTo(page: Page, to: string): Promise<string> {
   await page.goto("/club/outbox");
-  await page.getByRole("link", { name: new RegExp(`To ${to.replace(/[.]/g, "\\.")}`) }).first().click();
+  await page
+    .getByRole("link", { name: new RegExp(`To ${to.replace(/[.]/g, "\\.")}`) })
+    .first()
+    .click();
   const body = page.getByTestId("message-body");
   await expect(body).toBeVisible();
   return (await body.textContent()) ?? "";
@@ -36,7 +39,11 @@ export const otherClub = {
 };
 
 /** A fresh browser context signed in as one account (its own cookies, like a second device). */
-export async function signedInContext(browser: Browser, email: string, password = demo.password): Promise<{ context: BrowserContext; page: Page }> {
+export async function signedInContext(
+  browser: Browser,
+  email: string,
+  password = demo.password,
+): Promise<{ context: BrowserContext; page: Page }> {
   const context = await browser.newContext();
   const page = await context.newPage();
   await signIn(page, email, password);

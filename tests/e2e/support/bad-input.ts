@@ -100,7 +100,9 @@ export function commonRefusalCases(
   validBody: Record<string, unknown>,
   options: { emptyObject: string; numericKeys?: string[] },
 ): RefusalCase[] {
-  return commonBadInputs(validBody, options.numericKeys).map((input) => jsonCase(input, fieldOfCommon(validBody, input.label, options.emptyObject)));
+  return commonBadInputs(validBody, options.numericKeys).map((input) =>
+    jsonCase(input, fieldOfCommon(validBody, input.label, options.emptyObject)),
+  );
 }
 
 /** A multipart part as Playwright sends it. */
@@ -170,7 +172,8 @@ export async function expectAllRefusedNaming(
     const status = response.status();
     const { problems, body } = refusalProblems(refusal.label, status, await response.text());
     failures.push(...problems);
-    if (refusal.status !== undefined && status !== refusal.status) failures.push(`${refusal.label}: status ${status}, expected ${refusal.status}`);
+    if (refusal.status !== undefined && status !== refusal.status)
+      failures.push(`${refusal.label}: status ${status}, expected ${refusal.status}`);
     if (body && !namesField(body, refusal.field)) {
       failures.push(`${refusal.label}: does not name "${refusal.field}": ${body.message} ${JSON.stringify(body.fields ?? {})}`);
     }

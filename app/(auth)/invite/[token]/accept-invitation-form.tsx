@@ -60,7 +60,13 @@ export function AcceptInvitationForm({ token, email, defaultName }: { token: str
         error={errors.password?.message}
         {...form.register("password")}
       />
-      <TextField label="Type it again" type="password" autoComplete="new-password" error={errors.confirm?.message} {...form.register("confirm")} />
+      <TextField
+        label="Type it again"
+        type="password"
+        autoComplete="new-password"
+        error={errors.confirm?.message}
+        {...form.register("confirm")}
+      />
       <LiveStatus>{failure && <Notice tone="error" title={failure} />}</LiveStatus>
       <Button type="submit" pending={isSubmitting} pendingLabel="Creating your account…" className="w-full">
         Create account and sign in

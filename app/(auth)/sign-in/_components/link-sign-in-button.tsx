@@ -42,10 +42,7 @@ export function LinkSignInButton({ token }: { token: string }) {
       </Button>
       <LiveStatus>
         {unreached && (
-          <Notice
-            tone="error"
-            title="Slipway could not be reached, so you are not signed in yet. Try again once you have a connection."
-          />
+          <Notice tone="error" title="Slipway could not be reached, so you are not signed in yet. Try again once you have a connection." />
         )}
         {failed && (
           <Notice tone="error" title="This link has expired or was already used.">

@@ -26,9 +26,7 @@ export function SignInLinkForm() {
   return (
     <ClientForm onSubmit={onSubmit} noValidate className="space-y-4">
       <TextField label="E-mail for the link" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
-      <LiveStatus testId="link-status">
-        {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
-      </LiveStatus>
+      <LiveStatus testId="link-status">{result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}</LiveStatus>
       <Button type="submit" variant="secondary" pending={isSubmitting} pendingLabel="Sending…" className="w-full">
         E-mail me a link
       </Button>

@@ -57,9 +57,7 @@ export function InviteMemberForm() {
         </Button>
       </div>
       <div className="sm:col-span-2">
-        <LiveStatus testId="invite-status">
-          {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
-        </LiveStatus>
+        <LiveStatus testId="invite-status">{result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}</LiveStatus>
       </div>
     </ClientForm>
   );

@@ -25,7 +25,11 @@ export async function changeMemberRoleAction(input: unknown): Promise<ActionResu
     const { memberId, role } = parsed.data;
     const member = await lookUpBy("memberId", "member of your club", () => changeMemberRole(actor, memberId, role));
     revalidatePath(membersPath);
-    return { ok: true, message: `${member.name} is now ${roleLabels[member.role].toLowerCase()}. They sign in again to continue.`, data: member };
+    return {
+      ok: true,
+      message: `${member.name} is now ${roleLabels[member.role].toLowerCase()}. They sign in again to continue.`,
+      data: member,
+    };
   } catch (error) {
     return actionFailure(error);
   }
@@ -93,7 +97,12 @@ export async function importRosterAction(formData: FormData): Promise<ActionResu
     const invited = report.invited.length;
     // As POST /api/members/import answers 400: the problems under rows.<row>.<column>, the report for the form.
     if (invited === 0) {
-      return { ok: false, message: "No invitations sent: every row had a problem.", fieldErrors: rosterProblemFields(report.problems), data: report };
+      return {
+        ok: false,
+        message: "No invitations sent: every row had a problem.",
+        fieldErrors: rosterProblemFields(report.problems),
+        data: report,
+      };
     }
     revalidatePath(membersPath);
     const message = `${invited} ${invited === 1 ? "invitation" : "invitations"} sent.${report.problems.length > 0 ? " Some rows were not imported." : ""}`;

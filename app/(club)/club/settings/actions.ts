@@ -19,10 +19,7 @@ export async function saveClubSettingsAction(input: unknown): Promise<ActionResu
     revalidatePath("/club/settings");
     return {
       ok: true,
-      message:
-        changed.length === 0
-          ? "Nothing changed."
-          : "Settings saved. They apply to new quizzes and sign-offs from now on.",
+      message: changed.length === 0 ? "Nothing changed." : "Settings saved. They apply to new quizzes and sign-offs from now on.",
     };
   } catch (error) {
     return actionFailure(error);

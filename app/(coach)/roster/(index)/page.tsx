@@ -14,9 +14,7 @@ export default async function RosterPage() {
   const forMe = queue.filter((entry) => entry.forMe).length;
   return (
     <div className="space-y-4">
-      <PageTitle lead={`${club.name}: who may rig unsupervised, and where everyone is with each module.`}>
-        Roster
-      </PageTitle>
+      <PageTitle lead={`${club.name}: who may rig unsupervised, and where everyone is with each module.`}>Roster</PageTitle>
       <p>
         <Link
           href="/roster/sign-offs"

@@ -65,8 +65,7 @@ function SortMark({ direction }: { direction: false | "asc" | "desc" }) {
   return <span aria-hidden="true">{direction === "asc" ? "↑" : "↓"}</span>;
 }
 
-type Load =
-  { state: "loading" } | { state: "failed"; message: string } | { state: "ready"; matrix: RosterMatrix };
+type Load = { state: "loading" } | { state: "failed"; message: string } | { state: "ready"; matrix: RosterMatrix };
 
 /**
  * The coach's roster: athletes × modules from GET /api/roster/matrix, sortable by any column, filtered
@@ -97,10 +96,7 @@ export function RosterMatrixView() {
     fetch("/api/roster/matrix", { signal: controller.signal, headers: { Accept: "application/json" } })
       .then(async (response) => {
         if (!response.ok)
-          throw new Error(
-            ((await response.json().catch(() => ({}))) as { message?: string }).message ??
-              "The roster could not be loaded.",
-          );
+          throw new Error(((await response.json().catch(() => ({}))) as { message?: string }).message ?? "The roster could not be loaded.");
         setLoad({ state: "ready", matrix: (await response.json()) as RosterMatrix });
       })
       .catch((error: unknown) => {
@@ -121,8 +117,7 @@ export function RosterMatrixView() {
 
   const matrix = load.state === "ready" ? load.matrix : null;
   const rows = useMemo(
-    () =>
-      matrix ? matrix.athletes.filter((row) => rosterRowMatches(row, filter, search, matrix.today)) : [],
+    () => (matrix ? matrix.athletes.filter((row) => rosterRowMatches(row, filter, search, matrix.today)) : []),
     [matrix, filter, search],
   );
 
@@ -133,10 +128,7 @@ export function RosterMatrixView() {
         id: "name",
         header: "Athlete",
         cell: (info) => (
-          <Link
-            href={`/roster/athletes/${info.row.original.id}`}
-            className="font-semibold text-river-700 underline"
-          >
+          <Link href={`/roster/athletes/${info.row.original.id}`} className="font-semibold text-river-700 underline">
             {info.getValue()}
             <PendingMark />
           </Link>
@@ -153,9 +145,7 @@ export function RosterMatrixView() {
               {clearance.state === "cleared" && clearance.expiresOn && (
                 <span className="text-xs text-slate-700">expires {shortDate(clearance.expiresOn)}</span>
               )}
-              {clearance.suspendedReason && (
-                <span className="max-w-48 text-xs text-slate-700">{clearance.suspendedReason}</span>
-              )}
+              {clearance.suspendedReason && <span className="max-w-48 text-xs text-slate-700">{clearance.suspendedReason}</span>}
             </span>
           );
         },
@@ -281,9 +271,7 @@ export function RosterMatrixView() {
           tabIndex={0}
         >
           <table className="min-w-full border-collapse text-sm" data-testid="roster-table">
-            <caption className="sr-only">
-              Athletes and the state of each module; column headers sort the table.
-            </caption>
+            <caption className="sr-only">Athletes and the state of each module; column headers sort the table.</caption>
             <thead>
               {table.getHeaderGroups().map((group) => (
                 <tr key={group.id} className="border-b border-slate-300 bg-river-50 text-left align-bottom">
@@ -292,11 +280,7 @@ export function RosterMatrixView() {
                       key={header.id}
                       scope="col"
                       aria-sort={
-                        header.column.getIsSorted() === "asc"
-                          ? "ascending"
-                          : header.column.getIsSorted() === "desc"
-                            ? "descending"
-                            : "none"
+                        header.column.getIsSorted() === "asc" ? "ascending" : header.column.getIsSorted() === "desc" ? "descending" : "none"
                       }
                       className={`px-3 py-2 font-semibold ${index === 0 ? "sticky left-0 z-10 bg-river-50" : ""}`}
                     >
@@ -315,18 +299,10 @@ export function RosterMatrixView() {
             </thead>
             <tbody>
               {table.getRowModel().rows.map((row) => (
-                <tr
-                  key={row.id}
-                  className="border-b border-slate-200 align-top"
-                  data-testid={`roster-row-${row.original.id}`}
-                >
+                <tr key={row.id} className="border-b border-slate-200 align-top" data-testid={`roster-row-${row.original.id}`}>
                   {row.getVisibleCells().map((cell, index) =>
                     index === 0 ? (
-                      <th
-                        key={cell.id}
-                        scope="row"
-                        className="sticky left-0 z-10 bg-white px-3 py-2 text-left font-normal"
-                      >
+                      <th key={cell.id} scope="row" className="sticky left-0 z-10 bg-white px-3 py-2 text-left font-normal">
                         {flexRender(cell.column.columnDef.cell, cell.getContext())}
                       </th>
                     ) : (

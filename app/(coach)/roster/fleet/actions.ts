@@ -3,7 +3,15 @@
 import { revalidatePath } from "next/cache";
 import { assertMayManageFleet } from "@/lib/auth/permissions";
 import { requireActor } from "@/lib/auth/session";
-import { createBoat, createOarSet, setBoatArchived, setOarSetArchived, updateBoat, updateOarSet, type SavedFleetRecord } from "@/lib/data/fleet";
+import {
+  createBoat,
+  createOarSet,
+  setBoatArchived,
+  setOarSetArchived,
+  updateBoat,
+  updateOarSet,
+  type SavedFleetRecord,
+} from "@/lib/data/fleet";
 import { addRaceDay, removeRaceDay, setHumidSpell } from "@/lib/data/cleaning";
 import { sendCleaningDigestNow } from "@/lib/data/cleaning-digest";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
@@ -180,7 +188,10 @@ export async function sendDigestNowAction(...input: unknown[]): Promise<ActionRe
     assertMayManageFleet(actor);
     if (input.length > 0) return { ok: false, message: "Sending the digest takes no input.", fieldErrors: { _: ["Send no input."] } };
     const { recipients, isoWeek } = await sendCleaningDigestNow(actor);
-    return { ok: true, message: `Digest for ${isoWeek} sent to ${recipients} ${recipients === 1 ? "coach or admin" : "coaches and admins"}.` };
+    return {
+      ok: true,
+      message: `Digest for ${isoWeek} sent to ${recipients} ${recipients === 1 ? "coach or admin" : "coaches and admins"}.`,
+    };
   } catch (error) {
     return actionFailure(error);
   }

@@ -15,16 +15,11 @@ export const metadata: Metadata = { title: "Your certificates" };
 /** The athlete's own certificates (download, public check) and each module's practical. */
 export default async function MyCertificatesPage() {
   const actor = await requirePageActor("member", "/learn/certificates");
-  const [certificates, { standing, today }] = await Promise.all([
-    certificatesOfAthlete(actor, actor.id),
-    clearanceOf(actor),
-  ]);
+  const [certificates, { standing, today }] = await Promise.all([certificatesOfAthlete(actor, actor.id), clearanceOf(actor)]);
   const titles = new Map(listModules().map((meta) => [meta.slug, meta.title]));
   return (
     <div className="space-y-6">
-      <PageTitle lead="What a coach has signed off, and whether you may rig without one.">
-        Your certificates
-      </PageTitle>
+      <PageTitle lead="What a coach has signed off, and whether you may rig without one.">Your certificates</PageTitle>
       <ClearanceSummary actor={actor} onCertificatesPage />
 
       <section aria-labelledby="practicals-heading" className="rounded-lg bg-white p-4 shadow-sm">
@@ -34,10 +29,7 @@ export default async function MyCertificatesPage() {
         <ul className="divide-y divide-slate-200">
           {standing.modules.map((entry) => (
             <li key={entry.slug} className="flex flex-wrap items-center justify-between gap-2 py-2">
-              <Link
-                href={`/learn/${entry.slug}/practical`}
-                className="min-h-11 content-center font-semibold text-river-700 underline"
-              >
+              <Link href={`/learn/${entry.slug}/practical`} className="min-h-11 content-center font-semibold text-river-700 underline">
                 {titles.get(entry.slug) ?? entry.slug}
                 <PendingMark />
               </Link>
@@ -62,25 +54,18 @@ export default async function MyCertificatesPage() {
                   <CertificateStatusBadge status={certificate.status} />
                 </div>
                 <p className="text-sm text-slate-700">
-                  {certificate.serial} · signed off by {certificate.signedOffByName} on{" "}
-                  {formatLongDate(certificate.issuedOn)} · {expiryVerb(certificate.expiresOn, today)}{" "}
-                  {formatLongDate(certificate.expiresOn)}
+                  {certificate.serial} · signed off by {certificate.signedOffByName} on {formatLongDate(certificate.issuedOn)} ·{" "}
+                  {expiryVerb(certificate.expiresOn, today)} {formatLongDate(certificate.expiresOn)}
                 </p>
                 <p className="flex flex-wrap gap-x-4">
-                  <a
-                    href={certificate.pdfUrl}
-                    className="inline-flex min-h-11 items-center font-semibold text-river-700 underline"
-                  >
+                  <a href={certificate.pdfUrl} className="inline-flex min-h-11 items-center font-semibold text-river-700 underline">
                     Download PDF
                     <span className="sr-only">
                       {" "}
                       of {certificate.title}, {certificate.serial}
                     </span>
                   </a>
-                  <a
-                    href={certificate.verifyUrl}
-                    className="inline-flex min-h-11 items-center text-river-700 underline"
-                  >
+                  <a href={certificate.verifyUrl} className="inline-flex min-h-11 items-center text-river-700 underline">
                     Public check page
                     <span className="sr-only">
                       {" "}

@@ -34,42 +34,29 @@ export default async function VerifyPage({ params }: { params: Promise<{ code: s
   return (
     <div className="space-y-6">
       <h1 className="text-2xl font-bold tracking-tight text-river-900 sm:text-3xl">Certificate check</h1>
-      <div
-        className={`rounded-lg border-l-4 p-4 ${statusClasses[verification.status]}`}
-        data-testid="verify-status"
-      >
+      <div className={`rounded-lg border-l-4 p-4 ${statusClasses[verification.status]}`} data-testid="verify-status">
         <p className="text-xl font-bold">
           <span aria-hidden="true">{icon} </span>
           {label}
         </p>
         <p className="mt-1">
           {statusText[verification.status]}
-          {verification.status === "revoked" && verification.revokedOn
-            ? ` Revoked on ${formatLongDate(verification.revokedOn)}.`
-            : ""}
+          {verification.status === "revoked" && verification.revokedOn ? ` Revoked on ${formatLongDate(verification.revokedOn)}.` : ""}
         </p>
       </div>
-      <dl
-        className="grid gap-x-6 gap-y-3 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-[max-content_1fr]"
-        data-testid="verify-details"
-      >
+      <dl className="grid gap-x-6 gap-y-3 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-[max-content_1fr]" data-testid="verify-details">
         <dt className="font-semibold text-slate-700">Athlete</dt>
         <dd>{verification.athleteName}</dd>
-        <dt className="font-semibold text-slate-700">
-          {verification.kind === "module" ? "Module" : "Certificate"}
-        </dt>
+        <dt className="font-semibold text-slate-700">{verification.kind === "module" ? "Module" : "Certificate"}</dt>
         <dd>{verification.title}</dd>
         <dt className="font-semibold text-slate-700">Signed off on</dt>
         <dd>{formatLongDate(verification.issuedOn)}</dd>
-        <dt className="font-semibold text-slate-700">
-          {verification.status === "expired" ? "Expired on" : "Expires on"}
-        </dt>
+        <dt className="font-semibold text-slate-700">{verification.status === "expired" ? "Expired on" : "Expires on"}</dt>
         <dd>{formatLongDate(verification.expiresOn)}</dd>
       </dl>
       <p className="text-sm text-slate-700">
-        This page is the live record: a printed or e-mailed certificate can be out of date. A certificate
-        records what a coach saw on the day; the club&apos;s rules and the coach on duty decide who goes
-        afloat.
+        This page is the live record: a printed or e-mailed certificate can be out of date. A certificate records what a coach saw on the
+        day; the club&apos;s rules and the coach on duty decide who goes afloat.
       </p>
       <p className="text-sm text-slate-700">
         For software:{" "}

@@ -78,7 +78,9 @@ export function RigHelper({ boats, oarSets, limits, halfSwivelCm, userId, initia
     const sendKept = () => {
       void flushPending(userId).then((result) => {
         if (result.sent > 0) {
-          setSyncMessage(`${result.sent === 1 ? "1 plan" : `${result.sent} plans`} kept on this phone ${result.sent === 1 ? "was" : "were"} sent to your club.`);
+          setSyncMessage(
+            `${result.sent === 1 ? "1 plan" : `${result.sent} plans`} kept on this phone ${result.sent === 1 ? "was" : "were"} sent to your club.`,
+          );
         }
         if (result.refused.length > 0) setSyncMessage(`A kept plan was not accepted: ${result.refused[0]}`);
       });
@@ -211,7 +213,10 @@ export function RigHelper({ boats, oarSets, limits, halfSwivelCm, userId, initia
           onChange={(event) => chooseBoat(event.target.value)}
           options={[
             { value: "", label: "Choose a boat" },
-            ...boats.map((candidate) => ({ value: String(candidate.id), label: `${candidate.name}: ${boatClassLabel(candidate.boatClass)}` })),
+            ...boats.map((candidate) => ({
+              value: String(candidate.id),
+              label: `${candidate.name}: ${boatClassLabel(candidate.boatClass)}`,
+            })),
           ]}
         />
         {boat && setsForBoat.length === 0 && (
@@ -226,7 +231,10 @@ export function RigHelper({ boats, oarSets, limits, halfSwivelCm, userId, initia
             disabled={!hydrated}
             value={chosenSetId === null ? "" : String(chosenSetId)}
             onChange={(event) => chooseSet(event.target.value)}
-            options={[{ value: "", label: "Choose the oar set" }, ...setsForBoat.map((set) => ({ value: String(set.id), label: set.name }))]}
+            options={[
+              { value: "", label: "Choose the oar set" },
+              ...setsForBoat.map((set) => ({ value: String(set.id), label: set.name })),
+            ]}
           />
         )}
         {boat && oarSet && (
@@ -274,7 +282,14 @@ export function RigHelper({ boats, oarSets, limits, halfSwivelCm, userId, initia
           <PlanStepsView steps={planSteps(outcome.plan, outcome.context)} warnings={outcome.plan.warnings} source={outcome.source} />
           <div className="space-y-3 rounded-lg bg-white p-4 shadow-sm">
             <p>Done it? Save the plan so your coach can see who rigged what, and when.</p>
-            <Button type="button" variant="secondary" onClick={savePlan} pending={saving} pendingLabel="Saving…" disabled={saveStatus?.tone === "success" || saveStatus?.tone === "info"}>
+            <Button
+              type="button"
+              variant="secondary"
+              onClick={savePlan}
+              pending={saving}
+              pendingLabel="Saving…"
+              disabled={saveStatus?.tone === "success" || saveStatus?.tone === "info"}
+            >
               Save this plan
             </Button>
           </div>

@@ -23,7 +23,9 @@ export default async function CarePage() {
       <RigNav label="Rig" links={memberRigLinks(isCoach(actor))} current="/rig/care" />
       <CleaningCautions />
       <p data-testid="care-calendar">
-        {upcomingRaces.length > 0 ? `Race days ahead: ${upcomingRaces.map(formatIsoDate).join(", ")}.` : "No race days ahead in the club calendar."}{" "}
+        {upcomingRaces.length > 0
+          ? `Race days ahead: ${upcomingRaces.map(formatIsoDate).join(", ")}.`
+          : "No race days ahead in the club calendar."}{" "}
         {overview.humidSpell ? "Humid spell: on, so every set is due daily." : ""}
       </p>
       {overview.oarSets.length === 0 ? (

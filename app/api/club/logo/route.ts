@@ -4,13 +4,7 @@ import { assertAllowed, canManageClub } from "@/lib/auth/permissions";
 import { NotFoundError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { readUploadedFile, sniffImageType } from "@/lib/http/upload";
-import {
-  clubLogoTypes,
-  maxClubLogoBytes,
-  readClubLogo,
-  removeClubLogo,
-  storeClubLogo,
-} from "@/lib/data/club-logo";
+import { clubLogoTypes, maxClubLogoBytes, readClubLogo, removeClubLogo, storeClubLogo } from "@/lib/data/club-logo";
 
 export const dynamic = "force-dynamic";
 

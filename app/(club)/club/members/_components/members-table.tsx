@@ -34,7 +34,9 @@ const matchesSearch: FilterFn<MemberRow> = (row, _columnId, value: string) => {
   const needle = value.trim().toLowerCase();
   if (!needle) return true;
   const member = row.original;
-  return [member.name, member.email, roleLabels[member.role], member.role, member.status].some((text) => text.toLowerCase().includes(needle));
+  return [member.name, member.email, roleLabels[member.role], member.role, member.status].some((text) =>
+    text.toLowerCase().includes(needle),
+  );
 };
 
 function StatusWord({ status }: { status: MemberRow["status"] }) {
@@ -192,7 +194,11 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
                       aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
                     >
                       {header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex min-h-11 items-center gap-1 underline-offset-2 hover:underline">
+                        <button
+                          type="button"
+                          onClick={header.column.getToggleSortingHandler()}
+                          className="inline-flex min-h-11 items-center gap-1 underline-offset-2 hover:underline"
+                        >
                           {label}
                           <span aria-hidden="true">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
                         </button>

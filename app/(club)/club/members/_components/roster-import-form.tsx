@@ -21,9 +21,15 @@ function ProblemTable({ problems, caption, testId }: { problems: RosterProblem[]
         <caption className="mb-1 text-left font-semibold">{caption}</caption>
         <thead className="border-b border-slate-300 bg-alarm-100">
           <tr>
-            <th scope="col" className="px-3 py-2">Row</th>
-            <th scope="col" className="px-3 py-2">Field</th>
-            <th scope="col" className="px-3 py-2">What is wrong</th>
+            <th scope="col" className="px-3 py-2">
+              Row
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Field
+            </th>
+            <th scope="col" className="px-3 py-2">
+              What is wrong
+            </th>
           </tr>
         </thead>
         <tbody className="divide-y divide-slate-200">
@@ -122,10 +128,18 @@ export function RosterImportForm() {
                 <caption className="mb-1 text-left font-semibold">Ready to invite</caption>
                 <thead className="border-b border-slate-300 bg-river-50">
                   <tr>
-                    <th scope="col" className="px-3 py-2">Row</th>
-                    <th scope="col" className="px-3 py-2">Name</th>
-                    <th scope="col" className="px-3 py-2">E-mail</th>
-                    <th scope="col" className="px-3 py-2">Role</th>
+                    <th scope="col" className="px-3 py-2">
+                      Row
+                    </th>
+                    <th scope="col" className="px-3 py-2">
+                      Name
+                    </th>
+                    <th scope="col" className="px-3 py-2">
+                      E-mail
+                    </th>
+                    <th scope="col" className="px-3 py-2">
+                      Role
+                    </th>
                   </tr>
                 </thead>
                 <tbody className="divide-y divide-slate-200">
@@ -141,15 +155,25 @@ export function RosterImportForm() {
               </table>
             </div>
           )}
-          {preview.problems.length > 0 && <ProblemTable problems={preview.problems} caption="Will not be imported" testId="roster-preview-problems" />}
+          {preview.problems.length > 0 && (
+            <ProblemTable problems={preview.problems} caption="Will not be imported" testId="roster-preview-problems" />
+          )}
           <p className="text-sm text-slate-700">Addresses that already have an account or an open invitation are checked when you send.</p>
-          <Button type="button" onClick={() => void send()} pending={sending} pendingLabel="Sending invitations…" disabled={preview.entries.length === 0}>
+          <Button
+            type="button"
+            onClick={() => void send()}
+            pending={sending}
+            pendingLabel="Sending invitations…"
+            disabled={preview.entries.length === 0}
+          >
             Send {preview.entries.length} {preview.entries.length === 1 ? "invitation" : "invitations"}
           </Button>
         </section>
       )}
 
-      <LiveStatus testId="roster-status">{outcome && <Notice tone={outcome.ok ? "success" : "error"} title={outcome.message} />}</LiveStatus>
+      <LiveStatus testId="roster-status">
+        {outcome && <Notice tone={outcome.ok ? "success" : "error"} title={outcome.message} />}
+      </LiveStatus>
 
       {report && (
         <section aria-labelledby="roster-report-heading" className="space-y-3" data-testid="roster-report">
@@ -157,9 +181,7 @@ export function RosterImportForm() {
             Import report
           </h3>
           {report.invited.length > 0 && (
-            <p>
-              Invited: {report.invited.map((entry) => `${entry.name} (row ${entry.row})`).join(", ")}. Each gets the invitation e-mail.
-            </p>
+            <p>Invited: {report.invited.map((entry) => `${entry.name} (row ${entry.row})`).join(", ")}. Each gets the invitation e-mail.</p>
           )}
           {report.unsent.length > 0 && (
             <Notice tone="warning" title="Some e-mails could not be sent">

@@ -8,25 +8,30 @@ import { registerFor } from "@/lib/data/register";
 import { listModules } from "@/lib/content/modules";
 import { certificateStatusLabels } from "@/lib/certificates/status";
 import { Notice } from "@/components/ui/notice";
-import { queryObject, registerDownloadProblems, registerFilterQuery, registerFilterSchema, registerStatuses } from "@/lib/validations/certification";
+import {
+  queryObject,
+  registerDownloadProblems,
+  registerFilterQuery,
+  registerFilterSchema,
+  registerStatuses,
+} from "@/lib/validations/certification";
 
 export const metadata: Metadata = { title: "Induction register" };
 
 const controlClasses = "min-h-11 w-full rounded-md border border-slate-500 bg-white px-3 py-2 text-base";
 
 /** Every certificate the club has issued, filtered, with CSV and print-ready PDF downloads. */
-export default async function RegisterPage({
-  searchParams,
-}: {
-  searchParams: Promise<Record<string, string | string[] | undefined>>;
-}) {
+export default async function RegisterPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const actor = await requirePageActor("admin", "/club/register");
   const filter = registerFilterSchema.parse(queryObject(await searchParams));
   const register = await registerFor(actor, filter);
   const modules = listModules();
   const query = new URLSearchParams(registerFilterQuery(filter)).toString();
   const suffix = query ? `?${query}` : "";
-  const problems = registerDownloadProblems(filter, modules.map((meta) => meta.slug));
+  const problems = registerDownloadProblems(
+    filter,
+    modules.map((meta) => meta.slug),
+  );
 
   return (
     <div className="space-y-6">
@@ -34,11 +39,7 @@ export default async function RegisterPage({
         Induction register
       </PageTitle>
 
-      <form
-        method="get"
-        className="grid gap-4 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-2"
-        data-testid="register-filters"
-      >
+      <form method="get" className="grid gap-4 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-2" data-testid="register-filters">
         <div className="flex flex-col gap-1">
           <label htmlFor="register-module" className="font-semibold">
             Module
@@ -79,25 +80,13 @@ export default async function RegisterPage({
             <label htmlFor="register-from" className="font-semibold">
               Issued from
             </label>
-            <input
-              id="register-from"
-              type="date"
-              name="from"
-              defaultValue={filter.from}
-              className={controlClasses}
-            />
+            <input id="register-from" type="date" name="from" defaultValue={filter.from} className={controlClasses} />
           </div>
           <div className="flex flex-col gap-1">
             <label htmlFor="register-to" className="font-semibold">
               Issued to
             </label>
-            <input
-              id="register-to"
-              type="date"
-              name="to"
-              defaultValue={filter.to}
-              className={controlClasses}
-            />
+            <input id="register-to" type="date" name="to" defaultValue={filter.to} className={controlClasses} />
           </div>
         </div>
         <div className="flex flex-wrap gap-3 sm:col-span-2">
@@ -154,23 +143,18 @@ export default async function RegisterPage({
           <table className="min-w-full text-left text-sm" data-testid="register-table">
             <thead>
               <tr className="border-b border-slate-300 bg-river-50">
-                {["Serial", "Athlete", "Certificate", "Signed off by", "Issued", "Expires", "Status"].map(
-                  (heading) => (
-                    <th key={heading} scope="col" className="whitespace-nowrap px-3 py-2">
-                      {heading}
-                    </th>
-                  ),
-                )}
+                {["Serial", "Athlete", "Certificate", "Signed off by", "Issued", "Expires", "Status"].map((heading) => (
+                  <th key={heading} scope="col" className="whitespace-nowrap px-3 py-2">
+                    {heading}
+                  </th>
+                ))}
               </tr>
             </thead>
             <tbody>
               {register.entries.map((entry) => (
                 <tr key={entry.id} className="border-b border-slate-200 align-top">
                   <th scope="row" className="whitespace-nowrap px-3 py-2 font-normal">
-                    <Link
-                      href={`/club/register/${entry.id}`}
-                      className="font-semibold text-river-700 underline"
-                    >
+                    <Link href={`/club/register/${entry.id}`} className="font-semibold text-river-700 underline">
                       {entry.serial}
                       <PendingMark />
                     </Link>

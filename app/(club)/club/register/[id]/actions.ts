@@ -21,10 +21,7 @@ export async function revokeCertificateAction(certificateId: string, input: unkn
     const { revoked } = await lookUpBy("certificateId", "certificate", () => revokeCertificate(actor, id.data, parsed.data.reason));
     return {
       ok: true,
-      message:
-        revoked.length > 1
-          ? `Revoked ${revoked.join(" and ")} (the clearance stood on this module).`
-          : `Revoked ${revoked[0]}.`,
+      message: revoked.length > 1 ? `Revoked ${revoked.join(" and ")} (the clearance stood on this module).` : `Revoked ${revoked[0]}.`,
     };
   } catch (error) {
     return actionFailure(error);

@@ -44,8 +44,7 @@ export default async function CertificatePage({ params }: { params: Promise<{ id
           <>
             <dt className="font-semibold">Revoked</dt>
             <dd>
-              {formatLongDate(certificate.revokedOn)} by{" "}
-              {certificate.revokedByName ?? "an administrator"}: {certificate.revokeReason}
+              {formatLongDate(certificate.revokedOn)} by {certificate.revokedByName ?? "an administrator"}: {certificate.revokeReason}
             </dd>
           </>
         )}

@@ -53,9 +53,7 @@ export function ClubSettingsFormView({
     const outcome = await reachAction(() => saveClubSettingsAction(values));
     setResult(outcome);
     if (outcome.ok) form.reset(values);
-    else
-      for (const [field, messages] of Object.entries(outcome.fieldErrors))
-        form.setError(field as Path, { message: messages[0] });
+    else for (const [field, messages] of Object.entries(outcome.fieldErrors)) form.setError(field as Path, { message: messages[0] });
   });
 
   const modulesError = errorAt(errors, "clearanceModules");
@@ -101,12 +99,7 @@ export function ClubSettingsFormView({
             {modules.map((module) => (
               <li key={module.slug}>
                 <label className="flex min-h-11 items-center gap-3">
-                  <input
-                    type="checkbox"
-                    value={module.slug}
-                    className="h-5 w-5 accent-river-700"
-                    {...form.register("clearanceModules")}
-                  />
+                  <input type="checkbox" value={module.slug} className="h-5 w-5 accent-river-700" {...form.register("clearanceModules")} />
                   {module.title}
                 </label>
               </li>

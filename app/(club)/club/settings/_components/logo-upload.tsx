@@ -83,9 +83,7 @@ export function LogoUpload({ hasLogo: initiallyHasLogo }: { hasLogo: boolean }) 
           Remove the logo
         </Button>
       )}
-      <LiveStatus testId="logo-status">
-        {message && <Notice tone={message.ok ? "success" : "error"} title={message.text} />}
-      </LiveStatus>
+      <LiveStatus testId="logo-status">{message && <Notice tone={message.ok ? "success" : "error"} title={message.text} />}</LiveStatus>
     </div>
   );
 }

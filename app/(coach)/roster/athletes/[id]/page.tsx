@@ -32,9 +32,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
 
   return (
     <div className="space-y-6">
-      <PageTitle
-        lead={`${record.athlete.email}${record.athlete.status === "deactivated" ? " · deactivated" : ""}`}
-      >
+      <PageTitle lead={`${record.athlete.email}${record.athlete.status === "deactivated" ? " · deactivated" : ""}`}>
         {record.athlete.name}
       </PageTitle>
 
@@ -47,30 +45,22 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
         </div>
         {clearance.state === "cleared" && clearance.expiresOn && (
           <p>
-            Cleared up to and including {formatLongDate(lastValidDay(clearance.expiresOn))}: the first required
-            pass expires on {formatLongDate(clearance.expiresOn)}.
+            Cleared up to and including {formatLongDate(lastValidDay(clearance.expiresOn))}: the first required pass expires on{" "}
+            {formatLongDate(clearance.expiresOn)}.
           </p>
         )}
         {clearance.missingModules.length > 0 && (
-          <p>
-            Still to pass:{" "}
-            {clearance.missingModules.map((slug) => record.moduleTitles[slug] ?? slug).join(", ")}.
-          </p>
+          <p>Still to pass: {clearance.missingModules.map((slug) => record.moduleTitles[slug] ?? slug).join(", ")}.</p>
         )}
         {clearance.expiredModules.length > 0 && (
-          <p>
-            Expired: {clearance.expiredModules.map((slug) => record.moduleTitles[slug] ?? slug).join(", ")}.
-          </p>
+          <p>Expired: {clearance.expiredModules.map((slug) => record.moduleTitles[slug] ?? slug).join(", ")}.</p>
         )}
         {activeSuspension && (
           <p>
-            Suspended by {activeSuspension.suspendedByName} on{" "}
-            {formatLongDate(activeSuspension.suspendedOn)}: {activeSuspension.reason}
+            Suspended by {activeSuspension.suspendedByName} on {formatLongDate(activeSuspension.suspendedOn)}: {activeSuspension.reason}
           </p>
         )}
-        {record.viewer.canSuspend && (
-          <SuspensionControl athleteId={record.athlete.id} suspended={!!activeSuspension} />
-        )}
+        {record.viewer.canSuspend && <SuspensionControl athleteId={record.athlete.id} suspended={!!activeSuspension} />}
       </section>
 
       <section aria-labelledby="modules-heading" className={sectionClasses} data-testid="athlete-modules">
@@ -153,8 +143,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
                 </p>
                 <p className="text-sm text-slate-700">
                   Asked {when(entry.requestedAt)}
-                  {entry.assessedAt &&
-                    ` · recorded ${when(entry.assessedAt)} by ${entry.assessorName ?? "a coach"}`}
+                  {entry.assessedAt && ` · recorded ${when(entry.assessedAt)} by ${entry.assessorName ?? "a coach"}`}
                 </p>
                 {entry.note && <p className="whitespace-pre-wrap text-sm">Note: {entry.note}</p>}
                 {entry.photos.length > 0 && (
@@ -188,8 +177,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
                   </span>
                   <span className="block text-sm text-slate-700">
                     Issued {formatLongDate(certificate.issuedOn)} · {expiryVerb(certificate.expiresOn, today)}{" "}
-                    {formatLongDate(certificate.expiresOn)} ·{" "}
-                    {certificate.signedOffByName}
+                    {formatLongDate(certificate.expiresOn)} · {certificate.signedOffByName}
                     {certificate.revokeReason && ` · revoked: ${certificate.revokeReason}`}
                   </span>
                 </span>

@@ -45,8 +45,8 @@ function OarSetRow({ set, boats }: { set: OarSetSummary; boats: Map<number, Boat
       <div>
         <span className="font-semibold">{set.name}</span>{" "}
         <span className="text-sm text-slate-700">
-          {set.oarCount} {oarTypeLabels[set.oarType].toLowerCase()} · {formatCm(set.targetLengthCm)} cm, inboard {formatCm(set.targetInboardCm)} cm ·
-          clicks {formatCm(set.clickCm)} cm
+          {set.oarCount} {oarTypeLabels[set.oarType].toLowerCase()} · {formatCm(set.targetLengthCm)} cm, inboard{" "}
+          {formatCm(set.targetInboardCm)} cm · clicks {formatCm(set.clickCm)} cm
         </span>
         <span className="block text-sm">{handleMechanismLabels[set.handleMechanism]}.</span>
         <span className="block text-sm">{names.length ? `Used in: ${names.join(", ")}` : "Not linked to a boat."}</span>
@@ -118,7 +118,9 @@ export default async function FleetPage() {
           <h2 id="archived-heading" className="text-lg font-semibold">
             Archived
           </h2>
-          <p className="text-sm text-slate-700">Archived boats and sets are hidden from athletes; their saved plans and cleanings are kept.</p>
+          <p className="text-sm text-slate-700">
+            Archived boats and sets are hidden from athletes; their saved plans and cleanings are kept.
+          </p>
           <ul className="divide-y divide-slate-200 rounded-lg bg-white shadow-sm" data-testid="fleet-archived">
             {archivedBoats.map((boat) => (
               <BoatRow key={`boat-${boat.id}`} boat={boat} sets={sets} />

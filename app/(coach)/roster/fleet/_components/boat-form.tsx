@@ -88,4 +88,3 @@ export function BoatForm({ boatId, initial, linkedSets = [], halfSwivelCm }: Boa
     </ClientForm>
   );
 }
-

@@ -110,7 +110,9 @@ export function HumidSpellSwitch({ humidSpell }: { humidSpell: boolean }) {
       >
         {humidSpell ? "Switch the humid spell off" : "Switch the humid spell on"}
       </Button>
-      <LiveStatus testId="humid-spell-status">{status && <Notice tone={status.ok ? "success" : "error"} title={status.message} />}</LiveStatus>
+      <LiveStatus testId="humid-spell-status">
+        {status && <Notice tone={status.ok ? "success" : "error"} title={status.message} />}
+      </LiveStatus>
     </div>
   );
 }
@@ -121,7 +123,12 @@ export function SendDigestButton() {
   const [pending, startTransition] = useTransition();
   return (
     <div className="space-y-2">
-      <Button type="button" pending={pending} pendingLabel="Sending…" onClick={() => startTransition(async () => setStatus(await reachAction(sendDigestNowAction)))}>
+      <Button
+        type="button"
+        pending={pending}
+        pendingLabel="Sending…"
+        onClick={() => startTransition(async () => setStatus(await reachAction(sendDigestNowAction)))}
+      >
         Send the digest now
       </Button>
       <LiveStatus testId="digest-status">{status && <Notice tone={status.ok ? "success" : "error"} title={status.message} />}</LiveStatus>

@@ -26,14 +26,31 @@ interface OarSetFormProps {
   defaultClickCm: number;
 }
 
-const fields = ["name", "oarType", "oarCount", "targetLengthCm", "targetInboardCm", "clickCm", "handleMechanism", "boatIds", "notes"] as const;
+const fields = [
+  "name",
+  "oarType",
+  "oarCount",
+  "targetLengthCm",
+  "targetInboardCm",
+  "clickCm",
+  "handleMechanism",
+  "boatIds",
+  "notes",
+] as const;
 
 /** Adds or edits an oar set: targets checked against the club's limits as you type (warnings) and refused when impossible. */
 export function OarSetForm({ oarSetId, initial, boats, limits, defaultClickCm }: OarSetFormProps) {
   const [result, setResult] = useState<SaveOutcome | null>(null);
   const form = useForm<OarSetFormInput, unknown, OarSetInput>({
     resolver: zodResolver(oarSetSchema),
-    defaultValues: initial ?? { name: "", oarType: "sculling", clickCm: defaultClickCm, handleMechanism: "clamped-slide", boatIds: [], notes: "" },
+    defaultValues: initial ?? {
+      name: "",
+      oarType: "sculling",
+      clickCm: defaultClickCm,
+      handleMechanism: "clamped-slide",
+      boatIds: [],
+      notes: "",
+    },
   });
   const { errors, isSubmitting } = form.formState;
   const [oarType, oarCount, targetLengthCm, targetInboardCm] = useWatch({
@@ -49,7 +66,14 @@ export function OarSetForm({ oarSetId, initial, boats, limits, defaultClickCm }:
     setResult({ ok: outcome.ok, message: outcome.message, warnings: outcome.ok ? (outcome.data?.warnings ?? []) : [] });
     if (outcome.ok) {
       if (oarSetId === undefined) {
-        form.reset({ name: "", oarType: values.oarType, clickCm: values.clickCm, handleMechanism: values.handleMechanism, boatIds: [], notes: "" });
+        form.reset({
+          name: "",
+          oarType: values.oarType,
+          clickCm: values.clickCm,
+          handleMechanism: values.handleMechanism,
+          boatIds: [],
+          notes: "",
+        });
       }
       return;
     }
@@ -69,12 +93,20 @@ export function OarSetForm({ oarSetId, initial, boats, limits, defaultClickCm }:
         {...form.register("oarType", {
           onChange: (event: { target: { value: string } }) => {
             // Boats of the other type cannot stay chosen.
-            const kept = (form.getValues("boatIds") ?? []).filter((id) => boats.find((boat) => boat.id === id)?.oarType === event.target.value);
+            const kept = (form.getValues("boatIds") ?? []).filter(
+              (id) => boats.find((boat) => boat.id === id)?.oarType === event.target.value,
+            );
             form.setValue("boatIds", kept);
           },
         })}
       />
-      <TextField label="Number of oars" inputMode="numeric" autoComplete="off" error={errors.oarCount?.message} {...form.register("oarCount", { setValueAs: wholeValue })} />
+      <TextField
+        label="Number of oars"
+        inputMode="numeric"
+        autoComplete="off"
+        error={errors.oarCount?.message}
+        {...form.register("oarCount", { setValueAs: wholeValue })}
+      />
       <div className="grid gap-4 sm:grid-cols-2">
         <TextField
           label="Target overall length (cm)"
@@ -116,7 +148,9 @@ export function OarSetForm({ oarSetId, initial, boats, limits, defaultClickCm }:
             <fieldset aria-describedby={errors.boatIds ? "boat-ids-error" : undefined}>
               <legend className="font-semibold text-slate-900">Used in</legend>
               {suitable.length === 0 ? (
-                <p className="text-sm text-slate-700">No {oarType === "sculling" ? "sculling" : "sweep"} boats yet: add one first, or link it later.</p>
+                <p className="text-sm text-slate-700">
+                  No {oarType === "sculling" ? "sculling" : "sweep"} boats yet: add one first, or link it later.
+                </p>
               ) : (
                 <div className="mt-1 grid gap-1 sm:grid-cols-2">
                   {suitable.map((boat) => (

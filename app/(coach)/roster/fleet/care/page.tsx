@@ -18,13 +18,17 @@ export default async function CleaningDuePage() {
   const due = overview.oarSets.filter((set) => set.state.due);
   return (
     <div className="space-y-8">
-      <PageTitle lead="Which oar sets need their handles cleaned, and the race days and weather that make them due.">Cleaning due</PageTitle>
+      <PageTitle lead="Which oar sets need their handles cleaned, and the race days and weather that make them due.">
+        Cleaning due
+      </PageTitle>
       <RigNav label="Fleet" links={fleetLinks} current="/roster/fleet/care" />
       <section aria-labelledby="due-heading" className="space-y-3">
         <h2 id="due-heading" className="text-lg font-semibold" data-testid="due-count">
           {due.length === 0 ? "Nothing is due today" : `${due.length} ${due.length === 1 ? "set is" : "sets are"} due`}
         </h2>
-        {overview.oarSets.length > 0 && <CleaningTable oarSets={overview.oarSets} caption={`Every oar set on ${formatIsoDate(today)}, due first`} />}
+        {overview.oarSets.length > 0 && (
+          <CleaningTable oarSets={overview.oarSets} caption={`Every oar set on ${formatIsoDate(today)}, due first`} />
+        )}
         <p>
           Athletes record cleanings on the{" "}
           <Link href="/rig/care" className="font-semibold text-river-700 underline">

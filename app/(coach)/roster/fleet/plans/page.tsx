@@ -28,7 +28,11 @@ export default async function SavedPlansPage({ searchParams }: { searchParams: P
     <div className="space-y-6">
       <PageTitle lead="Who rigged what, and when: the plans athletes saved in the boat-change helper, newest first.">Saved plans</PageTitle>
       <RigNav label="Fleet" links={fleetLinks} current="/roster/fleet/plans" />
-      <Form action="/roster/fleet/plans" className="flex flex-wrap items-end gap-3 rounded-lg bg-white p-4 shadow-sm" data-testid="plans-filter">
+      <Form
+        action="/roster/fleet/plans"
+        className="flex flex-wrap items-end gap-3 rounded-lg bg-white p-4 shadow-sm"
+        data-testid="plans-filter"
+      >
         <div className="min-w-56 flex-1">
           <SelectField
             label="Boat"
@@ -36,7 +40,10 @@ export default async function SavedPlansPage({ searchParams }: { searchParams: P
             defaultValue={boatId === undefined ? "" : String(boatId)}
             options={[
               { value: "", label: "All boats" },
-              ...fleet.boats.map((candidate) => ({ value: String(candidate.id), label: `${candidate.name} (${candidate.boatClass})${candidate.archived ? ", archived" : ""}` })),
+              ...fleet.boats.map((candidate) => ({
+                value: String(candidate.id),
+                label: `${candidate.name} (${candidate.boatClass})${candidate.archived ? ", archived" : ""}`,
+              })),
             ]}
           />
         </div>

@@ -16,9 +16,7 @@ export default async function SignOffQueuePage() {
   const others = queue.filter((entry) => !entry.forMe);
   return (
     <div className="space-y-6">
-      <PageTitle lead="Open one at the boat rack, watch the athlete and record each checklist item.">
-        Sign-offs waiting
-      </PageTitle>
+      <PageTitle lead="Open one at the boat rack, watch the athlete and record each checklist item.">Sign-offs waiting</PageTitle>
       {queue.length === 0 && <p data-testid="queue-empty">Nobody is waiting for a sign-off.</p>}
       {[
         { heading: "For you or any coach", entries: mine, id: "mine" },
@@ -30,23 +28,16 @@ export default async function SignOffQueuePage() {
             <h2 id={`queue-${group.id}`} className="mb-3 text-lg font-semibold">
               {group.heading} ({group.entries.length})
             </h2>
-            <ul
-              className="divide-y divide-slate-200 rounded-lg bg-white shadow-sm"
-              data-testid={`queue-${group.id}`}
-            >
+            <ul className="divide-y divide-slate-200 rounded-lg bg-white shadow-sm" data-testid={`queue-${group.id}`}>
               {group.entries.map((entry) => (
                 <li key={entry.id}>
-                  <Link
-                    href={`/roster/sign-offs/${entry.id}`}
-                    className="block min-h-11 px-4 py-3 hover:bg-river-50"
-                  >
+                  <Link href={`/roster/sign-offs/${entry.id}`} className="block min-h-11 px-4 py-3 hover:bg-river-50">
                     <span className="block font-semibold">
                       {entry.athleteName}: {entry.moduleTitle}
                       <PendingMark />
                     </span>
                     <span className="block text-sm text-slate-700">
-                      Asked {entry.askedCoachName ? `of ${entry.askedCoachName}` : "of any coach"} on{" "}
-                      {formatLongDate(entry.requestedOn)}
+                      Asked {entry.askedCoachName ? `of ${entry.askedCoachName}` : "of any coach"} on {formatLongDate(entry.requestedOn)}
                     </span>
                   </Link>
                 </li>

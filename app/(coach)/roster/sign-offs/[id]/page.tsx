@@ -26,9 +26,7 @@ export default async function AssessmentPage({ params }: { params: Promise<{ id:
         Sign-off: {detail.athlete.name}
       </PageTitle>
       <p className="text-slate-700">
-        Best quiz score:{" "}
-        {detail.bestQuizScore === null ? "no quiz submitted" : `${Math.round(detail.bestQuizScore * 100)} %`}{" "}
-        ·{" "}
+        Best quiz score: {detail.bestQuizScore === null ? "no quiz submitted" : `${Math.round(detail.bestQuizScore * 100)} %`} ·{" "}
         <Link href={`/roster/athletes/${detail.athlete.id}`} className="underline">
           {detail.athlete.name}&apos;s record
           <PendingMark />
@@ -37,40 +35,22 @@ export default async function AssessmentPage({ params }: { params: Promise<{ id:
       {detail.status === "waiting" ? (
         <>
           <Notice tone="warning" title="Watch, do not prompt">
-            Mark an item met only when you saw the athlete do it correctly, unprompted, with a real oar. If
-            anything is unsafe (a collar not seated, a loose screw), mark it not yet and make sure the oar is
-            put right before anyone goes afloat. Local rules apply.
+            Mark an item met only when you saw the athlete do it correctly, unprompted, with a real oar. If anything is unsafe (a collar not
+            seated, a loose screw), mark it not yet and make sure the oar is put right before anyone goes afloat. Local rules apply.
           </Notice>
-          <AssessmentForm
-            assessmentId={detail.id}
-            athleteName={detail.athlete.name}
-            checklist={detail.checklist}
-            photos={detail.photos}
-          />
+          <AssessmentForm assessmentId={detail.id} athleteName={detail.athlete.name} checklist={detail.checklist} photos={detail.photos} />
         </>
       ) : (
-        <section
-          aria-labelledby="decision-heading"
-          className="space-y-3 rounded-lg bg-white p-4 shadow-sm"
-          data-testid="assessment-record"
-        >
+        <section aria-labelledby="decision-heading" className="space-y-3 rounded-lg bg-white p-4 shadow-sm" data-testid="assessment-record">
           <h2 id="decision-heading" className="text-lg font-semibold">
-            {detail.status === "passed"
-              ? "✓ Signed off"
-              : detail.status === "not-yet"
-                ? "✕ Not yet"
-                : "Withdrawn"}
-            {detail.assessorName &&
-              detail.assessedOn &&
-              ` by ${detail.assessorName} on ${formatLongDate(detail.assessedOn)}`}
+            {detail.status === "passed" ? "✓ Signed off" : detail.status === "not-yet" ? "✕ Not yet" : "Withdrawn"}
+            {detail.assessorName && detail.assessedOn && ` by ${detail.assessorName} on ${formatLongDate(detail.assessedOn)}`}
           </h2>
           <ul className="space-y-1">
             {detail.checklist.map((item) => (
               <li key={item.id}>
                 {detail.verdicts?.[item.id] === "met" ? "✓" : "✕"} {item.label}:{" "}
-                <strong>
-                  {detail.verdicts?.[item.id] ? checklistVerdictLabels[detail.verdicts[item.id]!] : "—"}
-                </strong>
+                <strong>{detail.verdicts?.[item.id] ? checklistVerdictLabels[detail.verdicts[item.id]!] : "—"}</strong>
               </li>
             ))}
           </ul>

@@ -33,8 +33,7 @@ export function FinishLessonForm({ action, children }: Props) {
       <div role="alert" className="mt-3 empty:hidden">
         {heldOffline && !online && (
           <Notice tone="warning" title="No connection" testId="finish-lesson-offline">
-            You are offline, so the quiz cannot start yet. The lesson stays here: press the button again once you
-            have a connection.
+            You are offline, so the quiz cannot start yet. The lesson stays here: press the button again once you have a connection.
           </Notice>
         )}
       </div>

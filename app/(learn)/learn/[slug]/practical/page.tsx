@@ -23,9 +23,8 @@ export default async function PracticalPage({ params }: { params: Promise<{ slug
         <CleaningCautions />
       ) : (
         <Notice tone="warning" title="Safety first">
-          A collar that is not seated in a click, or a loose screw, can make an oar unrowable on the water.
-          Until a coach signs you off, adjust oars only with a coach beside you, and always follow your
-          club&apos;s rules and the coach on duty.
+          A collar that is not seated in a click, or a loose screw, can make an oar unrowable on the water. Until a coach signs you off,
+          adjust oars only with a coach beside you, and always follow your club&apos;s rules and the coach on duty.
         </Notice>
       )}
       <PracticalSignOffPanel actor={actor} moduleSlug={slug} />

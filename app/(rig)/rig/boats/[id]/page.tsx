@@ -24,7 +24,9 @@ export default async function BoatSettingsPage({ params }: { params: Promise<{ i
   const className = boatClassLabel(boat.boatClass);
   return (
     <div className="space-y-6">
-      <PageTitle lead={`${className.charAt(0).toUpperCase()}${className.slice(1)}${boat.archived ? " · archived" : ""}`}>{boat.name}</PageTitle>
+      <PageTitle lead={`${className.charAt(0).toUpperCase()}${className.slice(1)}${boat.archived ? " · archived" : ""}`}>
+        {boat.name}
+      </PageTitle>
       <RigNav label="Rig" links={memberRigLinks(isCoach(actor))} current="" />
       <section aria-labelledby="boat-heading" className="rounded-lg bg-white p-4 shadow-sm" data-testid="boat-settings">
         <h2 id="boat-heading" className="mb-2 text-lg font-semibold">

@@ -64,7 +64,9 @@ export function CleaningForm({ oarSets, members, me, today }: CleaningFormProps)
           { value: "", label: `Me (${me.name})` },
           ...members.filter((member) => member.id !== me.id).map((member) => ({ value: String(member.id), label: member.name })),
         ]}
-        {...form.register("cleanedById", { setValueAs: (value: string) => (value === "" || value === undefined ? undefined : Number(value)) })}
+        {...form.register("cleanedById", {
+          setValueAs: (value: string) => (value === "" || value === undefined ? undefined : Number(value)),
+        })}
       />
       <fieldset aria-describedby={errors.method ? "method-error" : undefined}>
         <legend className="font-semibold text-slate-900">How</legend>

@@ -33,11 +33,7 @@ export function RevokeCertificateForm({
   const [result, setResult] = useState<{ ok: boolean; message?: string } | null>(null);
   const [confirming, setConfirming] = useState<z.output<typeof revokeCertificateSchema> | null>(null);
   const [busy, setBusy] = useState(false);
-  const form = useForm<
-    z.input<typeof revokeCertificateSchema>,
-    unknown,
-    z.output<typeof revokeCertificateSchema>
-  >({
+  const form = useForm<z.input<typeof revokeCertificateSchema>, unknown, z.output<typeof revokeCertificateSchema>>({
     resolver: zodResolver(revokeCertificateSchema),
     defaultValues: { reason: "" },
   });
@@ -59,9 +55,7 @@ export function RevokeCertificateForm({
     }
   };
   const status = (
-    <LiveStatus testId="revoke-status">
-      {result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}
-    </LiveStatus>
+    <LiveStatus testId="revoke-status">{result && <Notice tone={result.ok ? "success" : "error"} title={result.message} />}</LiveStatus>
   );
   // The live region stays mounted after the refresh that marks the certificate revoked, so the message stays too.
   return (

@@ -35,19 +35,9 @@ export function SuspensionControl({ athleteId, suspended }: { athleteId: number;
   );
 }
 
-function SuspendClearanceForm({
-  athleteId,
-  onDone,
-}: {
-  athleteId: number;
-  onDone: (outcome: Outcome) => void;
-}) {
+function SuspendClearanceForm({ athleteId, onDone }: { athleteId: number; onDone: (outcome: Outcome) => void }) {
   const router = useRouter();
-  const form = useForm<
-    z.input<typeof suspendClearanceSchema>,
-    unknown,
-    z.output<typeof suspendClearanceSchema>
-  >({
+  const form = useForm<z.input<typeof suspendClearanceSchema>, unknown, z.output<typeof suspendClearanceSchema>>({
     resolver: zodResolver(suspendClearanceSchema),
     defaultValues: { reason: "" },
   });
@@ -73,13 +63,7 @@ function SuspendClearanceForm({
   );
 }
 
-function LiftSuspensionForm({
-  athleteId,
-  onDone,
-}: {
-  athleteId: number;
-  onDone: (outcome: Outcome) => void;
-}) {
+function LiftSuspensionForm({ athleteId, onDone }: { athleteId: number; onDone: (outcome: Outcome) => void }) {
   const router = useRouter();
   const form = useForm<z.input<typeof liftSuspensionSchema>, unknown, z.output<typeof liftSuspensionSchema>>({
     resolver: zodResolver(liftSuspensionSchema),
@@ -94,11 +78,7 @@ function LiftSuspensionForm({
   });
   return (
     <ClientForm onSubmit={onSubmit} noValidate className="space-y-3" data-testid="lift-form">
-      <TextField
-        label="Note (optional)"
-        error={form.formState.errors.note?.message}
-        {...form.register("note")}
-      />
+      <TextField label="Note (optional)" error={form.formState.errors.note?.message} {...form.register("note")} />
       <Button type="submit" pending={form.formState.isSubmitting} pendingLabel="Lifting…">
         Lift the suspension
       </Button>

@@ -15,11 +15,17 @@ export default async function EditBoatPage({ params }: { params: Promise<{ id: s
   const actor = await requirePageActor("coach", `/roster/fleet/boats/${id}`);
   const boatId = recordIdSchema.safeParse(id);
   if (!boatId.success) notFound();
-  const [boat, fleet, settings] = await Promise.all([orNotFound(getBoatForEdit(actor, boatId.data)), listFleet(actor), rigSettingsFor(actor)]);
+  const [boat, fleet, settings] = await Promise.all([
+    orNotFound(getBoatForEdit(actor, boatId.data)),
+    listFleet(actor),
+    rigSettingsFor(actor),
+  ]);
   const linkedSets = fleet.oarSets.filter((set) => boat.oarSetIds.includes(set.id));
   return (
     <div>
-      <PageTitle lead={boat.archived ? "Archived: hidden from athletes until restored." : "Changes apply to the next plan an athlete works out."}>
+      <PageTitle
+        lead={boat.archived ? "Archived: hidden from athletes until restored." : "Changes apply to the next plan an athlete works out."}
+      >
         Edit {boat.name}
       </PageTitle>
       <RigNav label="Fleet" links={fleetLinks} current="" />

@@ -15,11 +15,17 @@ export default async function EditOarSetPage({ params }: { params: Promise<{ id:
   const actor = await requirePageActor("coach", `/roster/fleet/oar-sets/${id}`);
   const oarSetId = recordIdSchema.safeParse(id);
   if (!oarSetId.success) notFound();
-  const [set, fleet, settings] = await Promise.all([orNotFound(getOarSetForEdit(actor, oarSetId.data)), listFleet(actor), rigSettingsFor(actor)]);
+  const [set, fleet, settings] = await Promise.all([
+    orNotFound(getOarSetForEdit(actor, oarSetId.data)),
+    listFleet(actor),
+    rigSettingsFor(actor),
+  ]);
   const activeBoatIds = new Set(fleet.boats.map((boat) => boat.id));
   return (
     <div>
-      <PageTitle lead={set.archived ? "Archived: hidden from athletes until restored." : "Changes apply to the next plan an athlete works out."}>
+      <PageTitle
+        lead={set.archived ? "Archived: hidden from athletes until restored." : "Changes apply to the next plan an athlete works out."}
+      >
         Edit {set.name}
       </PageTitle>
       <RigNav label="Fleet" links={fleetLinks} current="" />

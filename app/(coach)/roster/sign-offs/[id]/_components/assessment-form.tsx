@@ -8,12 +8,7 @@ import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import type { ChecklistItem } from "@/lib/content/module-schema";
-import {
-  assessmentOutcome,
-  checklistVerdictLabels,
-  checklistVerdicts,
-  type ChecklistVerdict,
-} from "@/lib/clearance/checklist";
+import { assessmentOutcome, checklistVerdictLabels, checklistVerdicts, type ChecklistVerdict } from "@/lib/clearance/checklist";
 import { assessmentSchemaFor, maxEvidencePhotos } from "@/lib/validations/certification";
 import { recordAssessmentAction } from "../actions";
 import { reachAction } from "@/lib/http/reach-action";
@@ -39,12 +34,7 @@ type AssessmentSchema = ReturnType<typeof assessmentSchemaFor>;
  * The poolside form: for each checklist item a real radio pair (met / not yet) in a fieldset, a note,
  * and photos uploaded as they are taken. The same zod schema checks it here and on the server.
  */
-export function AssessmentForm({
-  assessmentId,
-  athleteName,
-  checklist,
-  photos: initialPhotos,
-}: AssessmentFormProps) {
+export function AssessmentForm({ assessmentId, athleteName, checklist, photos: initialPhotos }: AssessmentFormProps) {
   const noteId = useId();
   const photoId = useId();
   const schema = useMemo(() => assessmentSchemaFor(checklist), [checklist]);
@@ -57,8 +47,7 @@ export function AssessmentForm({
     defaultValues: { items: {}, note: "", evidenceIds: initialPhotos.map((photo) => photo.id) },
   });
   const { errors, isSubmitting } = form.formState;
-  const verdicts = useWatch({ control: form.control, name: "items" }) as
-    Record<string, ChecklistVerdict | undefined> | undefined;
+  const verdicts = useWatch({ control: form.control, name: "items" }) as Record<string, ChecklistVerdict | undefined> | undefined;
   const answered = checklist.filter((item) => verdicts?.[item.id]).length;
   const outcome = answered === checklist.length ? assessmentOutcome(checklist, verdicts ?? {}) : null;
 
@@ -116,13 +105,10 @@ export function AssessmentForm({
 
   const onSubmit = form.handleSubmit(async (values) => {
     const outcomeOfAction = await reachAction(() => recordAssessmentAction(assessmentId, values));
-    setResult(
-      outcomeOfAction.ok ? { ok: true, message: outcomeOfAction.message ?? "Recorded." } : outcomeOfAction,
-    );
+    setResult(outcomeOfAction.ok ? { ok: true, message: outcomeOfAction.message ?? "Recorded." } : outcomeOfAction);
     if (!outcomeOfAction.ok)
       for (const [field, messages] of Object.entries(outcomeOfAction.fieldErrors)) {
-        if (field === "note" || field.startsWith("items."))
-          form.setError(field as "note", { message: messages[0] });
+        if (field === "note" || field.startsWith("items.")) form.setError(field as "note", { message: messages[0] });
       }
   });
 
@@ -205,8 +191,8 @@ export function AssessmentForm({
               Photo evidence (optional)
             </label>
             <p id={`${photoId}-hint`} className="text-sm text-slate-700">
-              JPEG, PNG or WebP, up to 8 MB each, at most {maxEvidencePhotos}. Only the athlete and the
-              club&apos;s coaches and administrators can see them.
+              JPEG, PNG or WebP, up to 8 MB each, at most {maxEvidencePhotos}. Only the athlete and the club&apos;s coaches and
+              administrators can see them.
             </p>
             <input
               id={photoId}
@@ -220,9 +206,7 @@ export function AssessmentForm({
             />
             {uploading && <p role="status">Uploading…</p>}
             <LiveStatus testId="photo-status">
-              {photoMessage && (
-                <Notice tone={photoMessage.ok ? "success" : "error"} title={photoMessage.text} />
-              )}
+              {photoMessage && <Notice tone={photoMessage.ok ? "success" : "error"} title={photoMessage.text} />}
             </LiveStatus>
             {photos.length > 0 && (
               <ul className="flex flex-wrap gap-3" data-testid="evidence-photos">
@@ -234,11 +218,7 @@ export function AssessmentForm({
                       alt={`Evidence photo ${index + 1}`}
                       className="h-24 w-24 rounded border border-slate-300 object-cover"
                     />
-                    <button
-                      type="button"
-                      onClick={() => removePhoto(photo)}
-                      className="min-h-11 text-sm text-alarm-800 underline"
-                    >
+                    <button type="button" onClick={() => removePhoto(photo)} className="min-h-11 text-sm text-alarm-800 underline">
                       Remove photo {index + 1}
                     </button>
                   </li>
@@ -249,17 +229,11 @@ export function AssessmentForm({
 
           <div className="space-y-3">
             <p data-testid="assessment-outcome">
-              {outcome === "passed" &&
-                "✓ Every item met: recording this signs the module off and issues the certificate."}
+              {outcome === "passed" && "✓ Every item met: recording this signs the module off and issues the certificate."}
               {outcome === "not-yet" && "✕ Not everything met: the athlete is sent back with your note."}
               {outcome === null && `${answered} of ${checklist.length} items answered.`}
             </p>
-            <Button
-              type="submit"
-              pending={isSubmitting}
-              pendingLabel="Recording…"
-              className="w-full sm:w-auto"
-            >
+            <Button type="submit" pending={isSubmitting} pendingLabel="Recording…" className="w-full sm:w-auto">
               Record the sign-off
             </Button>
           </div>

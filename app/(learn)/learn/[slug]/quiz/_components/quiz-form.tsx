@@ -312,7 +312,9 @@ function QuizResults({
     if (value === undefined || value === "" || (Array.isArray(value) && value.length === 0)) return "no answer";
     const ids = Array.isArray(value) ? value : [value];
     if (!question.choices) return `${ids.join(", ")}${question.unit ? ` ${question.unit}` : ""}`;
-    return ids.map((id) => question.choices?.find((choice) => choice.id === id)?.label ?? id).join(question.kind === "order" ? " → " : "; ");
+    return ids
+      .map((id) => question.choices?.find((choice) => choice.id === id)?.label ?? id)
+      .join(question.kind === "order" ? " → " : "; ");
   };
   return (
     <div className="space-y-5" data-testid="quiz-results">

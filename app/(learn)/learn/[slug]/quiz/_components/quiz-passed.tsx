@@ -37,9 +37,7 @@ export function QuizPassed({ passed, onPractise }: { passed: PassedQuizView; onP
         <h2 id="practise-heading" className="font-semibold">
           Practise again
         </h2>
-        <p className="mt-1 mb-3">
-          A fresh set of questions is marked like any other. Your pass stays, whatever you score.
-        </p>
+        <p className="mt-1 mb-3">A fresh set of questions is marked like any other. Your pass stays, whatever you score.</p>
         <Button type="button" variant="secondary" onClick={onPractise} className="w-full sm:w-auto">
           Practise with a fresh set of questions
         </Button>
