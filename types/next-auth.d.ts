@@ -12,5 +12,8 @@ declare module "next-auth/jwt" {
     role?: Role;
     clubId?: number;
     tokenVersion?: number;
+    signInMethod?: "password" | "link";
+    /** Seconds since 1970 when the session was started. */
+    signedInAt?: number;
   }
 }

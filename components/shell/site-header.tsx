@@ -38,10 +38,15 @@ export async function SiteHeader() {
         <div className="ml-auto flex items-center gap-3 text-sm">
           {actor ? (
             <>
-              <p data-testid="signed-in-as" className="text-right leading-tight">
+              <Link
+                href="/account"
+                data-testid="signed-in-as"
+                className="inline-flex min-h-11 flex-col justify-center rounded px-2 text-right leading-tight hover:bg-river-800"
+              >
+                <span className="sr-only">Your account: </span>
                 <span className="block font-semibold">{actor.name}</span>
                 <span className="block text-river-100">{roleLabels[actor.role]}</span>
-              </p>
+              </Link>
               <SignOutButton />
             </>
           ) : (

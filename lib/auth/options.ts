@@ -57,13 +57,16 @@ export function authOptions(): NextAuthOptions {
       },
     },
     callbacks: {
-      async jwt({ token, user }) {
+      async jwt({ token, user, account }) {
         if (user) {
           const signedIn = user as ReturnType<typeof toNextAuthUser>;
           token.uid = Number(signedIn.id);
           token.role = signedIn.role;
           token.clubId = signedIn.clubId;
           token.tokenVersion = signedIn.tokenVersion;
+          // How and when this session began: a fresh e-mail-link session may set a password without the old one.
+          token.signInMethod = account?.provider === "link" ? "link" : "password";
+          token.signedInAt = Math.floor(Date.now() / 1000);
         }
         return token;
       },

@@ -14,3 +14,18 @@ export const newPasswordTooLongMessage = `Use at most ${maxNewPasswordBytes} cha
 export function fitsPasswordHash(password: string): boolean {
   return new TextEncoder().encode(password).length <= maxNewPasswordBytes;
 }
+
+/** How long after signing in with an e-mail link a member may set a new password without the old one. */
+export const linkSessionGraceMinutes = 20;
+
+/**
+ * Whether a session may change its password without the current one: only a session started with a
+ * one-time e-mail link (which proved the member reads that inbox) in the last `linkSessionGraceMinutes`.
+ * This is how a member who forgot their password sets a new one; an older or password session must
+ * type the current password, so a phone left signed in at the boathouse cannot be used to take over.
+ */
+export function mayChangePasswordWithoutCurrent(session: { method: "password" | "link"; signedInAt: Date } | null, now: Date): boolean {
+  if (!session || session.method !== "link") return false;
+  const age = now.getTime() - session.signedInAt.getTime();
+  return age >= -60_000 && age <= linkSessionGraceMinutes * 60_000;
+}

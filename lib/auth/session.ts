@@ -10,6 +10,11 @@ import { assertSignedIn, canEnterArea, type Actor, type Area } from "@/lib/auth/
 
 type TokenRequest = Parameters<typeof getToken>[0]["req"];
 
+export interface SessionStartClaims {
+  method: "password" | "link";
+  signedInAt: Date;
+}
+
 const decodeSessionToken = cachedTokenDecoder(decode);
 
 /**
@@ -20,18 +25,29 @@ const decodeSessionToken = cachedTokenDecoder(decode);
  * costing about 15% of an API request. Sessions are not extended on use; they last their 12 hours.
  */
 export async function actorFromSessionCookies(cookieList: readonly { name: string; value: string }[]): Promise<Actor | null> {
+  const claims = await sessionClaims(cookieList);
+  if (!claims?.uid || typeof claims.tokenVersion !== "number") return null;
+  const user = await sessionUserById(claims.uid, claims.tokenVersion);
+  if (!user) return null;
+  return { id: user.id, clubId: user.clubId, role: user.role, name: user.name, email: user.email };
+}
+
+function sessionClaims(cookieList: readonly { name: string; value: string }[]) {
   ensureAuthUrl();
   const request = { cookies: Object.fromEntries(cookieList.map((cookie) => [cookie.name, cookie.value])), headers: {} };
-  const claims = await getToken({
+  return getToken({
     req: request as unknown as TokenRequest,
     secret: authSecret(),
     secureCookie: (process.env.NEXTAUTH_URL ?? "").startsWith("https://"),
     decode: decodeSessionToken,
   });
-  if (!claims?.uid || typeof claims.tokenVersion !== "number") return null;
-  const user = await sessionUserById(claims.uid, claims.tokenVersion);
-  if (!user) return null;
-  return { id: user.id, clubId: user.clubId, role: user.role, name: user.name, email: user.email };
+}
+
+/** How this request's session began: with a password or an e-mail link, and when (null for sessions from before it was recorded). */
+export async function currentSessionStart(): Promise<SessionStartClaims | null> {
+  const claims = await sessionClaims((await cookies()).getAll());
+  if (!claims?.signInMethod || typeof claims.signedInAt !== "number") return null;
+  return { method: claims.signInMethod, signedInAt: new Date(claims.signedInAt * 1000) };
 }
 
 /** The signed-in user for this request (pages, actions, route handlers), read once per request. */

@@ -8,7 +8,8 @@ import type { Actor } from "@/lib/auth/permissions";
 import { assertAllowed, canManageClub } from "@/lib/auth/permissions";
 import { hashPassword, passwordProblem, verifyAgainstDecoy, verifyPassword } from "@/lib/auth/password";
 import { hashToken, newToken } from "@/lib/auth/tokens";
-import { ConflictError, NotFoundError, ValidationError } from "@/lib/http/errors";
+import { ConflictError, NotFoundError, TooManyRequestsError, ValidationError } from "@/lib/http/errors";
+import { isSignInThrottled, recordSignInFailure } from "@/lib/auth/throttle";
 import { sendMail } from "@/lib/mail/send";
 import { publicBaseUrl } from "@/lib/env";
 import type { Role } from "@/lib/auth/roles";
@@ -301,4 +302,64 @@ export async function acceptInvitation(token: string, name: string, password: st
     );
     return { email: user.email };
   });
+}
+
+/**
+ * A member changes their own password. The current password is checked unless `withoutCurrent` (a fresh
+ * e-mail-link session, see mayChangePasswordWithoutCurrent); wrong guesses count against the same limit
+ * as failed sign-ins, for the account and the address. The token version moves on, which ends every
+ * session of the member, this one included: the form signs in again with the new password.
+ */
+export async function changeOwnPassword(
+  actor: Actor,
+  input: { currentPassword: string; newPassword: string },
+  options: { address: string; withoutCurrent: boolean },
+): Promise<{ email: string }> {
+  await databaseReady();
+  const user = await User.findByPk(actor.id);
+  if (!user || user.status !== "active") throw new NotFoundError("Your account is no longer active. Ask your club administrator.");
+  if (!options.withoutCurrent || input.currentPassword !== "") {
+    if (await isSignInThrottled(user.email, options.address)) {
+      throw new TooManyRequestsError(
+        "Too many wrong passwords. Wait 15 minutes, or sign in with an e-mail link to set a new one.",
+        15 * 60,
+      );
+    }
+    if (input.currentPassword === "") {
+      throw new ValidationError("Enter your current password.", { currentPassword: ["Enter your current password."] });
+    }
+    const matches = user.passwordHash
+      ? await verifyPassword(input.currentPassword, user.passwordHash)
+      : await verifyAgainstDecoy(input.currentPassword);
+    if (!matches) {
+      await recordSignInFailure(user.email, options.address);
+      throw new ValidationError("That is not your current password.", { currentPassword: ["That is not your current password."] });
+    }
+  }
+  const problem = passwordProblem(input.newPassword);
+  if (problem) throw new ValidationError(problem, { newPassword: [problem] });
+  if (user.passwordHash && (await verifyPassword(input.newPassword, user.passwordHash))) {
+    const same = "That is your current password: choose a different one.";
+    throw new ValidationError(same, { newPassword: [same] });
+  }
+  const passwordHash = await hashPassword(input.newPassword);
+  return writeTransaction(async (transaction) => {
+    const [changed] = await User.update(
+      { passwordHash, tokenVersion: user.tokenVersion + 1 },
+      { where: { id: user.id, tokenVersion: user.tokenVersion, status: "active" }, transaction },
+    );
+    if (changed === 0) throw new ConflictError("Your session ended while you typed. Sign in again, then change your password.");
+    await recordAudit(
+      { clubId: user.clubId, actorId: user.id, action: "member.password-changed", subjectType: "user", subjectId: user.id },
+      transaction,
+    );
+    return { email: user.email };
+  });
+}
+
+/** The name of a club, for pages that show a member where they belong. */
+export async function clubNameOf(clubId: number): Promise<string> {
+  await databaseReady();
+  const club = await Club.findByPk(clubId, { attributes: ["name"] });
+  return club?.name ?? "";
 }

@@ -18,6 +18,12 @@ export const invitationSchema = z.strictObject({
 });
 export type InvitationFormInput = z.input<typeof invitationSchema>;
 
+/** A password being chosen: long enough, and within what bcrypt reads. */
+const newPasswordField = z
+  .string({ error: "Choose a password." })
+  .min(minPasswordLength, { error: `Use at least ${minPasswordLength} characters.` })
+  .refine(fitsPasswordHash, { error: newPasswordTooLongMessage });
+
 export const acceptInvitationSchema = z.strictObject({
   token: z.string({ error: "Open the link from the invitation e-mail." }).regex(oneTimeTokenPattern, {
     error: "Not an invitation link: copy the whole link from the e-mail.",
@@ -28,10 +34,18 @@ export const acceptInvitationSchema = z.strictObject({
     .min(1, { error: "Enter your name." })
     .max(120, { error: "Keep your name under 120 characters." })
     .regex(oneLineTextPattern, { error: oneLineTextMessage }),
-  password: z
-    .string()
-    .min(minPasswordLength, { error: `Use at least ${minPasswordLength} characters.` })
-    .refine(fitsPasswordHash, { error: newPasswordTooLongMessage }),
+  password: newPasswordField,
+});
+
+/**
+ * A member changing their own password. The current one may be left empty only in a session started
+ * with an e-mail link a few minutes ago (the server decides that, not this schema).
+ */
+export const changePasswordSchema = z.strictObject({
+  currentPassword: z
+    .string({ error: "Enter your current password." })
+    .max(maxPasswordLength, { error: "That is not your current password." }),
+  newPassword: newPasswordField,
 });
 
 export const signInSchema = z.strictObject({

@@ -89,6 +89,8 @@ const pages: { path: string; as: string | null; open?: (page: Page) => Promise<v
   { path: "/sign-in", as: null },
   { path: "/invite/not-a-real-token-at-all", as: null },
   { path: "/no-such-page", as: null },
+  { path: "/account", as: demo.athlete },
+  { path: "/account", as: demo.admin },
   { path: "/learn", as: demo.athlete, ready: (page) => page.getByTestId("module-list").waitFor() },
   { path: "/learn/overall-length", as: demo.athlete },
   { path: "/learn/changing-boats", as: demo.athlete },

@@ -52,6 +52,7 @@ const clubActions = await import("@/app/(club)/club/actions");
 const registerActions = await import("@/app/(club)/club/register/[id]/actions");
 const settingsActions = await import("@/app/(club)/club/settings/actions");
 const memberActions = await import("@/app/(club)/club/members/actions");
+const accountActions = await import("@/app/(account)/account/actions");
 
 // ---------------------------------------------------------------------------------------------------
 // Fixtures
@@ -1196,5 +1197,41 @@ describe("finishing a lesson (as an athlete)", () => {
       [],
     );
     expect(await fingerprint(), "the read is recorded").not.toBe(before);
+  });
+});
+
+// ---------------------------------------------------------------------------------------------------
+// Your own password (any member). The valid control changes the athlete's password, which ends the
+// athlete's session: the test after the table signs in again with the new one.
+
+describe("changing your own password (as an athlete)", () => {
+  const changedPassword = "tidewater heron slipway";
+  const validChange = () => ({ currentPassword: demoPassword, newPassword: changedPassword });
+  table("changePasswordAction", {
+    action: accountActions.changePasswordAction,
+    as: "athlete",
+    cases: () =>
+      single(
+        objectVariants(validChange(), "currentPassword", { currentPassword: { kind: "password" }, newPassword: { kind: "password" } }, [
+          v("current password wrong", { ...validChange(), currentPassword: "not the password at all" }, "currentPassword"),
+          v("current password longer than sign-in accepts", { ...validChange(), currentPassword: "p".repeat(129) }, "currentPassword"),
+          v("new password too short", { ...validChange(), newPassword: "short" }, "newPassword"),
+          v("new password too long", { ...validChange(), newPassword: "p".repeat(129) }, "newPassword"),
+          v("new password over bcrypt's 72 bytes", { ...validChange(), newPassword: "heron collar ".repeat(6) }, "newPassword"),
+          v("new password of 37 two-byte letters (74 bytes)", { ...validChange(), newPassword: "é".repeat(37) }, "newPassword"),
+          v("new password a common one", { ...validChange(), newPassword: "password123" }, "newPassword"),
+          v("new password the current one", { ...validChange(), newPassword: demoPassword }, "newPassword"),
+          v("a confirm field", { ...validChange(), confirm: changedPassword }, "confirm"),
+          v("an email field", { ...validChange(), email: "someone@else.example" }, "email"),
+          v("a member id field (there is no changing someone else's)", { ...validChange(), memberId: 1 }, "memberId"),
+        ]),
+      ),
+    valid: () => [validChange()],
+  });
+
+  it("the athlete signs in with the new password, and not the old one", async () => {
+    await expect(sessionCookieFor("ada@lantern-reach.example", demoPassword)).rejects.toThrow(/failed with 401/);
+    cookies.athlete = await sessionCookieFor("ada@lantern-reach.example", changedPassword);
+    expect(cookies.athlete).toContain("next-auth.session-token=");
   });
 });

@@ -474,6 +474,13 @@ const settingInboardVerdicts = {
 
 export const actionGuardRows: ActionGuardRow[] = [
   {
+    file: "app/(account)/account/actions.ts",
+    action: "changePasswordAction",
+    input: () => ({ currentPassword: "not anyone's password here", newPassword: "guard row heron tidewater" }),
+    expect: { anonymous: 401, athlete: 400, otherAthlete: 400, coach: 400, otherCoach: 400, admin: 400, otherAdmin: 400 },
+    why: "Any member, only for their own account (there is no member argument); a wrong current password is refused (400), so the rows' sessions live on.",
+  },
+  {
     file: "app/(auth)/invite/[token]/actions.ts",
     action: "acceptInvitationAction",
     // Shaped like a real token (43 base64url characters), so that it is refused as unknown, not as malformed.

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { hashPassword, passwordProblem, verifyPassword } from "@/lib/auth/password";
 import { safeCallbackPath } from "@/lib/http/safe-redirect";
 import { acceptInvitationSchema } from "@/lib/validations/members";
+import { linkSessionGraceMinutes, mayChangePasswordWithoutCurrent } from "@/lib/auth/password-rules";
 
 // Rules after NIST SP 800-63B (2017), 5.1.1.2: a minimum length, a check against common passwords,
 // no composition rules.
@@ -61,5 +62,28 @@ describe("callback paths after sign-in", () => {
     expect(safeCallbackPath("https://evil.example")).toBe("/home");
     expect(safeCallbackPath("/\\evil.example")).toBe("/home");
     expect(safeCallbackPath(undefined)).toBe("/home");
+  });
+});
+
+describe("setting a password without the current one", () => {
+  const start = new Date("2026-12-04T09:00:00Z");
+  const minutesLater = (minutes: number) => new Date(start.getTime() + minutes * 60_000);
+
+  it("is allowed for 20 minutes after signing in with an e-mail link, and not after", () => {
+    // Rule of this project (the link proved the member reads that inbox); the length is our choice, no source.
+    const link = { method: "link" as const, signedInAt: start };
+    expect(linkSessionGraceMinutes).toBe(20);
+    expect(mayChangePasswordWithoutCurrent(link, start)).toBe(true);
+    expect(mayChangePasswordWithoutCurrent(link, minutesLater(20))).toBe(true);
+    expect(mayChangePasswordWithoutCurrent(link, minutesLater(20.01))).toBe(false);
+    expect(mayChangePasswordWithoutCurrent(link, minutesLater(600))).toBe(false);
+  });
+
+  it("is never allowed for a password session, a session from before this was recorded, or a start in the future", () => {
+    expect(mayChangePasswordWithoutCurrent({ method: "password", signedInAt: start }, minutesLater(1))).toBe(false);
+    expect(mayChangePasswordWithoutCurrent(null, start)).toBe(false);
+    expect(mayChangePasswordWithoutCurrent({ method: "link", signedInAt: minutesLater(5) }, start)).toBe(false);
+    // A clock a few seconds behind the server that signed the session still counts.
+    expect(mayChangePasswordWithoutCurrent({ method: "link", signedInAt: minutesLater(0.5) }, start)).toBe(true);
   });
 });

@@ -1,0 +1,44 @@
+import type { Metadata } from "next";
+import { PageTitle } from "@/components/ui/page-title";
+import { currentSessionStart, requirePageActor } from "@/lib/auth/session";
+import { linkSessionGraceMinutes, mayChangePasswordWithoutCurrent } from "@/lib/auth/password-rules";
+import { roleLabels } from "@/lib/auth/roles";
+import { clubNameOf } from "@/lib/data/users";
+import { ChangePasswordForm } from "./_components/change-password-form";
+
+export const metadata: Metadata = { title: "Your account" };
+
+/** The signed-in member's own account: who they are to Slipway, and their password. */
+export default async function AccountPage() {
+  const actor = await requirePageActor("member", "/account");
+  const [clubName, session] = await Promise.all([clubNameOf(actor.clubId), currentSessionStart()]);
+  const withoutCurrent = mayChangePasswordWithoutCurrent(session, new Date());
+  return (
+    <div className="mx-auto max-w-md space-y-6">
+      <PageTitle lead="Who you are to your club on Slipway, and your password.">Your account</PageTitle>
+      <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 rounded-lg bg-white p-4 shadow-sm" data-testid="account-facts">
+        <dt className="font-semibold">Name</dt>
+        <dd>{actor.name}</dd>
+        <dt className="font-semibold">E-mail</dt>
+        <dd className="break-all">{actor.email}</dd>
+        <dt className="font-semibold">Role</dt>
+        <dd>{roleLabels[actor.role]}</dd>
+        <dt className="font-semibold">Club</dt>
+        <dd>{clubName}</dd>
+      </dl>
+      <section aria-labelledby="password-heading" className="rounded-lg bg-white p-4 shadow-sm">
+        <h2 id="password-heading" className="mb-1 text-lg font-semibold">
+          Change your password
+        </h2>
+        <p className="mb-3 text-sm text-slate-700">
+          {withoutCurrent
+            ? `You signed in with an e-mail link, so for ${linkSessionGraceMinutes} minutes after that you can set a new password without the old one.`
+            : "Forgot your current one? Sign out, ask for a one-time link on the sign-in page, and come back here within " +
+              `${linkSessionGraceMinutes} minutes of using it.`}{" "}
+          Changing it signs you out on every other phone or computer.
+        </p>
+        <ChangePasswordForm email={actor.email} withoutCurrent={withoutCurrent} />
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,92 @@
+import { expect, test, type Page } from "@playwright/test";
+import { demo, openNewestMailTo, signIn } from "./support/auth";
+import { loadAthleteEmail } from "@/lib/seed/load-athletes";
+
+/** Your account (/account): a member changes their own password. Uses load athletes 41 and 42 only. */
+
+async function signInFails(page: Page, email: string, password: string): Promise<void> {
+  await page.goto("/sign-in");
+  const form = page.getByTestId("password-sign-in");
+  await form.getByLabel("E-mail").fill(email);
+  await form.getByLabel("Password").fill(password);
+  await form.getByRole("button", { name: "Sign in" }).click();
+  await expect(page.getByTestId("sign-in-status")).toContainText("That e-mail address and password do not match an active account.");
+  await expect(page.getByTestId("signed-in-as")).toHaveCount(0);
+}
+
+test("a member opens Your account from the header and changes their password; the old one stops working", async ({ page }) => {
+  const email = loadAthleteEmail(41);
+  const changed = "boathouse ebb kestrel";
+  await signIn(page, email);
+  await page.getByTestId("signed-in-as").click();
+  await expect(page).toHaveURL(/\/account$/);
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("Your account");
+  await expect(page.getByTestId("account-facts")).toContainText(email);
+  await expect(page.getByTestId("account-facts")).toContainText("Load Trial Rowing Club");
+
+  const form = page.getByTestId("change-password-form");
+  await form.getByLabel("Current password").fill("a wrong guess at it");
+  await form.getByLabel("New password").fill(changed);
+  await form.getByLabel("Type it again").fill(changed);
+  await form.getByRole("button", { name: "Change password" }).click();
+  await expect(form.getByText("That is not your current password.").first()).toBeVisible();
+  await expect(form.getByLabel("Current password")).toHaveAttribute("aria-invalid", "true");
+
+  await form.getByLabel("Type it again").fill("boathouse ebb kestrels");
+  await form.getByLabel("Current password").fill(demo.password);
+  await form.getByRole("button", { name: "Change password" }).click();
+  await expect(form.getByText("The two passwords differ.")).toBeVisible();
+
+  await form.getByLabel("Type it again").fill(changed);
+  await form.getByRole("button", { name: "Change password" }).click();
+  await expect(page.getByTestId("change-password-status")).toContainText("Password changed. You are signed in with the new one");
+  await expect(form.getByLabel("New password")).toHaveValue("");
+  // Still signed in (a fresh session with the new password), on the account page.
+  await page.reload();
+  await expect(page.getByTestId("signed-in-as")).toContainText("Load Athlete 41");
+
+  await page.getByRole("button", { name: "Sign out" }).click();
+  await expect(page).toHaveURL(/\/sign-in/);
+  await signInFails(page, email, demo.password);
+  await signIn(page, email, changed);
+});
+
+test("signed in with an e-mail link, a member sets a new password without the old one", async ({ page, browser }) => {
+  const email = loadAthleteEmail(42);
+  const chosen = "slack water rigger";
+  const context = await browser.newContext();
+  const athlete = await context.newPage();
+  await athlete.goto("/sign-in");
+  await athlete.getByLabel("E-mail for the link").fill(email);
+  await athlete.getByRole("button", { name: "E-mail me a link" }).click();
+  await expect(athlete.getByTestId("link-status")).toContainText("a sign-in link is on its way");
+
+  await signIn(page, demo.admin);
+  const text = await openNewestMailTo(page, email);
+  const link = new URL(/https?:\/\/\S+\/sign-in\/link\?token=\S+/.exec(text)![0]);
+  await athlete.goto(`${link.pathname}${link.search}`);
+  await athlete.getByRole("button", { name: "Sign in to Slipway" }).click();
+  await expect(athlete.getByTestId("signed-in-as")).toBeVisible();
+
+  await athlete.goto("/account");
+  await expect(athlete.getByText("You signed in with an e-mail link")).toBeVisible();
+  const form = athlete.getByTestId("change-password-form");
+  await expect(form.getByLabel("Current password")).toHaveCount(0);
+  await form.getByLabel("New password").fill(chosen);
+  await form.getByLabel("Type it again").fill(chosen);
+  await form.getByRole("button", { name: "Change password" }).click();
+  await expect(athlete.getByTestId("change-password-status")).toContainText("Password changed.");
+  // Now a password session: the next change asks for the current password again.
+  await expect(form.getByLabel("Current password")).toBeVisible();
+  await context.close();
+
+  const fresh = await browser.newContext();
+  const again = await fresh.newPage();
+  await signIn(again, email, chosen);
+  await fresh.close();
+});
+
+test("Your account is for members only: a visitor is sent to sign in and brought back", async ({ page }) => {
+  await page.goto("/account");
+  await expect(page).toHaveURL(/\/sign-in\?callbackUrl=%2Faccount/);
+});
