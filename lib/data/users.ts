@@ -363,3 +363,31 @@ export async function clubNameOf(clubId: number): Promise<string> {
   const club = await Club.findByPk(clubId, { attributes: ["name"] });
   return club?.name ?? "";
 }
+
+/**
+ * A member corrects their own name. Certificates already issued keep the name they were issued to (the
+ * register is a record of what was signed); the roster, new certificates and the header use the new one.
+ */
+export async function changeOwnName(actor: Actor, name: string): Promise<{ name: string }> {
+  await databaseReady();
+  const trimmed = name.trim();
+  return writeTransaction(async (transaction) => {
+    const user = await User.findByPk(actor.id, { transaction });
+    if (!user || user.status !== "active") throw new NotFoundError("Your account is no longer active. Ask your club administrator.");
+    if (user.name === trimmed) return { name: trimmed };
+    const previous = user.name;
+    await user.update({ name: trimmed }, { transaction });
+    await recordAudit(
+      {
+        clubId: user.clubId,
+        actorId: user.id,
+        action: "member.renamed",
+        subjectType: "user",
+        subjectId: user.id,
+        details: { from: previous, to: trimmed },
+      },
+      transaction,
+    );
+    return { name: trimmed };
+  });
+}

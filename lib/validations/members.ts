@@ -24,18 +24,24 @@ const newPasswordField = z
   .min(minPasswordLength, { error: `Use at least ${minPasswordLength} characters.` })
   .refine(fitsPasswordHash, { error: newPasswordTooLongMessage });
 
+/** A member's own name, as certificates and the register will print it. */
+const ownNameField = z
+  .string({ error: "Enter your name." })
+  .trim()
+  .min(1, { error: "Enter your name." })
+  .max(120, { error: "Keep your name under 120 characters." })
+  .regex(oneLineTextPattern, { error: oneLineTextMessage });
+
 export const acceptInvitationSchema = z.strictObject({
   token: z.string({ error: "Open the link from the invitation e-mail." }).regex(oneTimeTokenPattern, {
     error: "Not an invitation link: copy the whole link from the e-mail.",
   }),
-  name: z
-    .string()
-    .trim()
-    .min(1, { error: "Enter your name." })
-    .max(120, { error: "Keep your name under 120 characters." })
-    .regex(oneLineTextPattern, { error: oneLineTextMessage }),
+  name: ownNameField,
   password: newPasswordField,
 });
+
+/** A member correcting their own name. */
+export const changeOwnNameSchema = z.strictObject({ name: ownNameField });
 
 /**
  * A member changing their own password. The current one may be left empty only in a session started

@@ -2,7 +2,7 @@ import { expect, test, type Page } from "@playwright/test";
 import { demo, openNewestMailTo, signIn } from "./support/auth";
 import { loadAthleteEmail } from "@/lib/seed/load-athletes";
 
-/** Your account (/account): a member changes their own password. Uses load athletes 41 and 42 only. */
+/** Your account (/account): a member corrects their name and changes their password. Uses load athletes 41–43 only. */
 
 async function signInFails(page: Page, email: string, password: string): Promise<void> {
   await page.goto("/sign-in");
@@ -84,6 +84,24 @@ test("signed in with an e-mail link, a member sets a new password without the ol
   const again = await fresh.newPage();
   await signIn(again, email, chosen);
   await fresh.close();
+});
+
+test("a member corrects their name; the header shows it at once, and a blank name is refused beside the field", async ({ page }) => {
+  await signIn(page, loadAthleteEmail(43));
+  await page.goto("/account");
+  const form = page.getByTestId("change-name-form");
+  const name = form.getByLabel("Your name");
+  await expect(name).toHaveValue("Load Athlete 43");
+  await name.fill("   ");
+  await form.getByRole("button", { name: "Save name" }).click();
+  await expect(form.getByText("Enter your name.")).toBeVisible();
+  await expect(name).toHaveAttribute("aria-invalid", "true");
+  await name.fill("  Load Athlete Forty-Three ");
+  await form.getByRole("button", { name: "Save name" }).click();
+  await expect(page.getByTestId("change-name-status")).toContainText("Name saved.");
+  await expect(page.getByTestId("signed-in-as")).toContainText("Load Athlete Forty-Three");
+  await page.reload();
+  await expect(page.getByTestId("change-name-form").getByLabel("Your name")).toHaveValue("Load Athlete Forty-Three");
 });
 
 test("Your account is for members only: a visitor is sent to sign in and brought back", async ({ page }) => {

@@ -1201,6 +1201,33 @@ describe("finishing a lesson (as an athlete)", () => {
 });
 
 // ---------------------------------------------------------------------------------------------------
+// Your own name (any member)
+
+describe("correcting your own name (as an athlete)", () => {
+  const validName = () => ({ name: "Ada Whitcombe" });
+  table("changeOwnNameAction", {
+    action: accountActions.changeOwnNameAction,
+    as: "athlete",
+    cases: () =>
+      single(
+        objectVariants(validName(), "name", { name: { kind: "name" } }, [
+          v("name too long", { name: "n".repeat(121) }, "name"),
+          v("name with a tab", { name: "Ada\tWhitcombe" }, "name"),
+          v("name with a carriage return", { name: "Ada\rWhitcombe" }, "name"),
+          v("name with a DEL character", { name: "Ada\u007fWhitcombe" }, "name"),
+          v("name with a C1 control character", { name: "Ada\u0085Whitcombe" }, "name"),
+          v("name of only a line break", { name: "\n" }, "name"),
+          v("an email field", { ...validName(), email: "someone@else.example" }, "email"),
+          v("a role field", { ...validName(), role: "admin" }, "role"),
+          v("a member id field (there is no renaming someone else)", { ...validName(), memberId: 1 }, "memberId"),
+          v("a club id field", { ...validName(), clubId: 2 }, "clubId"),
+        ]),
+      ),
+    valid: () => [validName()],
+  });
+});
+
+// ---------------------------------------------------------------------------------------------------
 // Your own password (any member). The valid control changes the athlete's password, which ends the
 // athlete's session: the test after the table signs in again with the new one.
 

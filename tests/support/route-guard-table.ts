@@ -481,6 +481,13 @@ export const actionGuardRows: ActionGuardRow[] = [
     why: "Any member, only for their own account (there is no member argument); a wrong current password is refused (400), so the rows' sessions live on.",
   },
   {
+    file: "app/(account)/account/actions.ts",
+    action: "changeOwnNameAction",
+    input: ({ tag }) => ({ name: `Guard Row ${tag}` }),
+    expect: { anonymous: 401, athlete: 200, otherAthlete: 200, coach: 200, otherCoach: 200, admin: 200, otherAdmin: 200 },
+    why: "Any member renames only themselves (there is no member argument).",
+  },
+  {
     file: "app/(auth)/invite/[token]/actions.ts",
     action: "acceptInvitationAction",
     // Shaped like a real token (43 base64url characters), so that it is refused as unknown, not as malformed.

@@ -4,8 +4,9 @@ import { headers } from "next/headers";
 import { currentSessionStart, requireActor } from "@/lib/auth/session";
 import { mayChangePasswordWithoutCurrent } from "@/lib/auth/password-rules";
 import { clientAddress } from "@/lib/auth/throttle";
-import { changeOwnPassword } from "@/lib/data/users";
-import { changePasswordSchema } from "@/lib/validations/members";
+import { revalidatePath } from "next/cache";
+import { changeOwnName, changeOwnPassword } from "@/lib/data/users";
+import { changeOwnNameSchema, changePasswordSchema } from "@/lib/validations/members";
 import { parseActionInput } from "@/lib/validations/issues";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
 
@@ -19,6 +20,20 @@ export async function changePasswordAction(input: unknown): Promise<ActionResult
     const address = clientAddress(await headers());
     const { email } = await changeOwnPassword(actor, parsed.data, { address, withoutCurrent });
     return { ok: true, message: "Password changed.", data: { email } };
+  } catch (error) {
+    return actionFailure(error);
+  }
+}
+
+/** A member corrects how their name is written; the header and roster show it from the next page. */
+export async function changeOwnNameAction(input: unknown): Promise<ActionResult<{ name: string }>> {
+  try {
+    const actor = await requireActor();
+    const parsed = parseActionInput(changeOwnNameSchema, input);
+    if (!parsed.success) return { ok: false, message: "Check your name.", fieldErrors: parsed.fieldErrors };
+    const { name } = await changeOwnName(actor, parsed.data.name);
+    revalidatePath("/", "layout");
+    return { ok: true, message: name === actor.name ? "Your name was already written that way." : "Name saved.", data: { name } };
   } catch (error) {
     return actionFailure(error);
   }

@@ -4,6 +4,7 @@ import { currentSessionStart, requirePageActor } from "@/lib/auth/session";
 import { linkSessionGraceMinutes, mayChangePasswordWithoutCurrent } from "@/lib/auth/password-rules";
 import { roleLabels } from "@/lib/auth/roles";
 import { clubNameOf } from "@/lib/data/users";
+import { ChangeNameForm } from "./_components/change-name-form";
 import { ChangePasswordForm } from "./_components/change-password-form";
 
 export const metadata: Metadata = { title: "Your account" };
@@ -15,10 +16,8 @@ export default async function AccountPage() {
   const withoutCurrent = mayChangePasswordWithoutCurrent(session, new Date());
   return (
     <div className="mx-auto max-w-md space-y-6">
-      <PageTitle lead="Who you are to your club on Slipway, and your password.">Your account</PageTitle>
+      <PageTitle lead="Your name as your club's records print it, and your password.">Your account</PageTitle>
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 rounded-lg bg-white p-4 shadow-sm" data-testid="account-facts">
-        <dt className="font-semibold">Name</dt>
-        <dd>{actor.name}</dd>
         <dt className="font-semibold">E-mail</dt>
         <dd className="break-all">{actor.email}</dd>
         <dt className="font-semibold">Role</dt>
@@ -26,6 +25,12 @@ export default async function AccountPage() {
         <dt className="font-semibold">Club</dt>
         <dd>{clubName}</dd>
       </dl>
+      <section aria-labelledby="name-heading" className="rounded-lg bg-white p-4 shadow-sm">
+        <h2 id="name-heading" className="mb-3 text-lg font-semibold">
+          Your name
+        </h2>
+        <ChangeNameForm name={actor.name} />
+      </section>
       <section aria-labelledby="password-heading" className="rounded-lg bg-white p-4 shadow-sm">
         <h2 id="password-heading" className="mb-1 text-lg font-semibold">
           Change your password

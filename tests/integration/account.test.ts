@@ -4,26 +4,29 @@ import { installNextHeadersStandIn, withRequest } from "@/tests/support/request-
 import { callAuth, csrf, passwordSignIn, testOrigin } from "@/tests/support/auth-handler";
 import { sessionCookieFor } from "@/tests/support/call-route";
 
-/** A member changing their own password on /account (changePasswordAction), with real next-auth sessions. */
+/** Your account (/account): a member corrects their name and changes their password, with real next-auth sessions. */
 
 vi.mock("next/headers", async () => (await import("@/tests/support/request-scope")).nextHeadersStandIn);
+vi.mock("next/cache", () => ({ revalidatePath: () => undefined }));
 
-createTempDataDir("account-password");
+createTempDataDir("account");
 installNextHeadersStandIn();
 
 const { closeDatabase, getSequelize } = await import("@/lib/db");
 const { databaseReady } = await import("@/lib/data/database");
 const { seedDemoClub, demoPassword } = await import("@/lib/seed/demo-club");
+const { seedDemoCertification } = await import("@/lib/seed/demo-certification");
 const { currentActor } = await import("@/lib/auth/session");
 const { authenticateWithPassword } = await import("@/lib/data/users");
 const { newToken, hashToken } = await import("@/lib/auth/tokens");
 const { signInFailureLimit } = await import("@/lib/auth/throttle");
-const { AuditEvent, SignInLink, User } = await import("@/models");
-const { changePasswordAction } = await import("@/app/(account)/account/actions");
+const { AuditEvent, Certificate, SignInLink, User } = await import("@/models");
+const { changeOwnNameAction, changePasswordAction } = await import("@/app/(account)/account/actions");
 
 beforeAll(async () => {
   await databaseReady();
   await seedDemoClub(getSequelize());
+  await seedDemoCertification(getSequelize());
 });
 
 afterAll(async () => {
@@ -130,5 +133,40 @@ describe("changing your own password", () => {
       message: "Sign in to continue.",
       fieldErrors: {},
     });
+  });
+});
+
+describe("correcting your own name", () => {
+  it("saves the trimmed name, which the session shows at once; issued certificates keep the name they were issued to", async () => {
+    const email = "femi@lantern-reach.example";
+    const cookie = await sessionCookieFor(email, demoPassword);
+    const femi = (await User.findOne({ where: { email } }))!;
+    const issuedBefore = await Certificate.findAll({ where: { athleteId: femi.id } });
+    expect(issuedBefore.length).toBeGreaterThan(0);
+    const outcome = await asCookie(cookie, () => changeOwnNameAction({ name: "  Femi Ashdown-Okoro  " }));
+    expect(outcome).toEqual({ ok: true, message: "Name saved.", data: { name: "Femi Ashdown-Okoro" } });
+    expect(await asCookie(cookie, () => currentActor())).toMatchObject({ name: "Femi Ashdown-Okoro" });
+    const issuedAfter = await Certificate.findAll({ where: { athleteId: femi.id } });
+    expect(issuedAfter.map((certificate) => certificate.athleteName)).toEqual(issuedBefore.map((certificate) => certificate.athleteName));
+    const audit = await AuditEvent.findOne({ where: { action: "member.renamed", subjectId: String(femi.id) } });
+    expect(audit?.details).toEqual({ from: femi.name, to: "Femi Ashdown-Okoro" });
+    const again = await asCookie(cookie, () => changeOwnNameAction({ name: "Femi Ashdown-Okoro" }));
+    expect(again).toMatchObject({ ok: true, message: "Your name was already written that way." });
+    expect(await AuditEvent.count({ where: { action: "member.renamed", subjectId: String(femi.id) } })).toBe(1);
+  });
+
+  it("refuses a blank name or one with a line break, and changes nothing", async () => {
+    const email = "lena@lantern-reach.example";
+    const cookie = await sessionCookieFor(email, demoPassword);
+    const before = (await User.findOne({ where: { email } }))!.name;
+    expect(await asCookie(cookie, () => changeOwnNameAction({ name: "   " }))).toMatchObject({
+      ok: false,
+      fieldErrors: { name: ["Enter your name."] },
+    });
+    expect(await asCookie(cookie, () => changeOwnNameAction({ name: "Lena\nFairbrother" }))).toMatchObject({
+      ok: false,
+      fieldErrors: { name: [expect.stringContaining("one line")] },
+    });
+    expect((await User.findOne({ where: { email } }))!.name).toBe(before);
   });
 });
