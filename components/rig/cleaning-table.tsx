@@ -4,7 +4,7 @@ import type { OarSetCleaning } from "@/lib/data/cleaning";
 /** Each oar set with its cleaning status, the reason, and who cleaned it last. */
 export function CleaningTable({ oarSets, caption }: { oarSets: OarSetCleaning[]; caption: string }) {
   return (
-    <div className="overflow-x-auto rounded-lg bg-white shadow-sm">
+    <div className="relative overflow-x-auto rounded-lg bg-white shadow-sm">
       <table className="w-full text-left" data-testid="cleaning-table">
         <caption className="px-4 pt-3 text-left font-semibold">{caption}</caption>
         <thead>

@@ -38,7 +38,7 @@ export function InviteMemberForm() {
   };
 
   return (
-    <ClientForm onSubmit={onSubmit} noValidate className="grid gap-4 sm:grid-cols-2" data-testid="invite-form">
+    <ClientForm onSubmit={onSubmit} noValidate className="grid grid-cols-1 gap-4 sm:grid-cols-2" data-testid="invite-form">
       <TextField label="Name" autoComplete="off" error={errors.name?.message} {...form.register("name")} />
       <TextField label="E-mail" type="email" autoComplete="off" error={errors.email?.message} {...form.register("email")} />
       <SelectField

@@ -214,7 +214,7 @@ export function RosterMatrixView() {
 
   return (
     <div className="space-y-4">
-      <div className="grid gap-3 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-[1fr_1fr_auto] sm:items-end">
+      <div className="grid grid-cols-1 gap-3 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-[1fr_1fr_auto] sm:items-end">
         <div className="flex flex-col gap-1">
           <label htmlFor={searchId} className="font-semibold">
             Search by name
@@ -265,7 +265,7 @@ export function RosterMatrixView() {
         <p data-testid="roster-empty">No athletes match. Clear the search or choose &quot;Everyone&quot;.</p>
       ) : (
         <div
-          className="overflow-x-auto rounded-lg bg-white shadow-sm"
+          className="relative overflow-x-auto rounded-lg bg-white shadow-sm"
           role="region"
           aria-label="Roster table, scrolls sideways"
           tabIndex={0}

@@ -252,7 +252,7 @@ export function RigHelper({ boats, oarSets, limits, halfSwivelCm, userId, initia
         )}
         <fieldset className="space-y-4">
           <legend className="font-semibold text-slate-900">What your oar measures now</legend>
-          <div className="grid gap-4 sm:grid-cols-2">
+          <div className="grid grid-cols-1 gap-4 sm:grid-cols-2">
             <TextField
               label="Overall length (cm)"
               hint="Blade tip to the end of the handle, along the shaft."

@@ -177,7 +177,7 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
       <LiveStatus testId="members-status">
         {outcome?.message && <Notice tone={outcome.ok ? "success" : "error"} title={outcome.message} />}
       </LiveStatus>
-      <div className="overflow-x-auto rounded-lg bg-white shadow-sm">
+      <div className="relative overflow-x-auto rounded-lg bg-white shadow-sm">
         <table className="w-full min-w-[40rem] text-left text-sm" data-testid="members-table">
           <caption className="sr-only">Members of the club, sorted by {sorting[0]?.id ?? "name"}</caption>
           <thead className="border-b border-slate-300 bg-river-50">

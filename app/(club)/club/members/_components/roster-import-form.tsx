@@ -16,7 +16,7 @@ const fieldLabels: Record<RosterProblem["field"], string> = { name: "name", emai
 
 function ProblemTable({ problems, caption, testId }: { problems: RosterProblem[]; caption: string; testId: string }) {
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full text-left text-sm" data-testid={testId}>
         <caption className="mb-1 text-left font-semibold">{caption}</caption>
         <thead className="border-b border-slate-300 bg-alarm-100">
@@ -123,7 +123,7 @@ export function RosterImportForm() {
             {new Set(preview.problems.map((problem) => problem.row)).size} with problems.
           </p>
           {preview.entries.length > 0 && (
-            <div className="overflow-x-auto">
+            <div className="relative overflow-x-auto">
               <table className="w-full text-left text-sm" data-testid="roster-ready">
                 <caption className="mb-1 text-left font-semibold">Ready to invite</caption>
                 <thead className="border-b border-slate-300 bg-river-50">

@@ -39,7 +39,7 @@ export default async function RegisterPage({ searchParams }: { searchParams: Pro
         Induction register
       </PageTitle>
 
-      <form method="get" className="grid gap-4 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-2" data-testid="register-filters">
+      <form method="get" className="grid grid-cols-1 gap-4 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-2" data-testid="register-filters">
         <div className="flex flex-col gap-1">
           <label htmlFor="register-module" className="font-semibold">
             Module
@@ -135,7 +135,7 @@ export default async function RegisterPage({ searchParams }: { searchParams: Pro
         // On a desk screen the table is wider than the page's column (64 rem, centred on it), so the
         // administrator reads every column without scrolling sideways; narrower screens scroll it.
         <div
-          className="overflow-x-auto rounded-lg bg-white shadow-sm lg:relative lg:left-1/2 lg:w-[min(64rem,calc(100vw-2rem))] lg:-translate-x-1/2"
+          className="relative overflow-x-auto rounded-lg bg-white shadow-sm lg:left-1/2 lg:w-[min(64rem,calc(100vw-2rem))] lg:-translate-x-1/2"
           role="region"
           aria-label="Register, scrolls sideways"
           tabIndex={0}

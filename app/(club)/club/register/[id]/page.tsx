@@ -20,7 +20,7 @@ export default async function CertificatePage({ params }: { params: Promise<{ id
     <div className="space-y-6">
       <PageTitle lead={certificate.title}>Certificate {certificate.serial}</PageTitle>
       <dl
-        className="grid gap-x-6 gap-y-2 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-[max-content_1fr]"
+        className="grid grid-cols-1 gap-x-6 gap-y-2 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-[max-content_1fr]"
         data-testid="certificate-record"
       >
         <dt className="font-semibold">Status</dt>

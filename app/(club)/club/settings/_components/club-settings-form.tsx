@@ -59,7 +59,7 @@ export function ClubSettingsFormView({
   const modulesError = errorAt(errors, "clearanceModules");
   return (
     <ClientForm onSubmit={onSubmit} noValidate className="space-y-6" data-testid="settings-form">
-      <fieldset className="grid gap-4 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-3">
+      <fieldset className="grid grid-cols-1 gap-4 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-3">
         <legend className="px-1 text-lg font-semibold">Quizzes</legend>
         <TextField
           label="Pass mark (%)"
@@ -124,7 +124,7 @@ export function ClubSettingsFormView({
       </fieldset>
 
       {oarKinds.map((kind) => (
-        <fieldset key={kind.key} className="grid gap-4 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-2">
+        <fieldset key={kind.key} className="grid grid-cols-1 gap-4 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-2">
           <legend className="px-1 text-lg font-semibold">Club limits: {kind.title}</legend>
           {limitFields.map((field) => {
             const path = `limits.${kind.key}.${field.key}` as Path;

@@ -67,7 +67,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
         <h2 id="modules-heading" className="text-lg font-semibold">
           Modules
         </h2>
-        <div className="overflow-x-auto">
+        <div className="relative overflow-x-auto">
           <table className="min-w-full text-left text-sm">
             <thead>
               <tr className="border-b border-slate-300">

@@ -107,7 +107,7 @@ export function OarSetForm({ oarSetId, initial, boats, limits, defaultClickCm }:
         error={errors.oarCount?.message}
         {...form.register("oarCount", { setValueAs: wholeValue })}
       />
-      <div className="grid gap-4 sm:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 sm:grid-cols-2">
         <TextField
           label="Target overall length (cm)"
           hint={`Your club's range for ${oarTypeLabels[oarType].toLowerCase()}: ${range.minLengthCm}–${range.maxLengthCm} cm.`}
