@@ -44,7 +44,10 @@ export default async function VerifyPage({ params }: { params: Promise<{ code: s
           {verification.status === "revoked" && verification.revokedOn ? ` Revoked on ${formatLongDate(verification.revokedOn)}.` : ""}
         </p>
       </div>
-      <dl className="grid grid-cols-1 gap-x-6 gap-y-3 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-[max-content_1fr]" data-testid="verify-details">
+      <dl
+        className="grid grid-cols-1 gap-x-6 gap-y-3 rounded-lg bg-white p-4 shadow-sm sm:grid-cols-[max-content_1fr]"
+        data-testid="verify-details"
+      >
         <dt className="font-semibold text-slate-700">Athlete</dt>
         <dd>{verification.athleteName}</dd>
         <dt className="font-semibold text-slate-700">{verification.kind === "module" ? "Module" : "Certificate"}</dt>
