@@ -6,6 +6,7 @@ import { seedDemoFleet } from "@/lib/seed/demo-fleet";
 import { seedDemoCertification } from "@/lib/seed/demo-certification";
 import { databaseFile } from "@/lib/env";
 import { seedLoadAthletes } from "@/lib/seed/load-athletes";
+import { seedDemoInvitations } from "@/lib/seed/demo-invitations";
 
 async function main() {
   const sequelize = getSequelize();
@@ -21,6 +22,8 @@ async function main() {
   }
   const fleet = await seedDemoFleet(sequelize);
   console.log(`${demoClub.name}: ${fleet.boats} new boats and ${fleet.oarSets} new oar sets seeded.`);
+  const invitations = await seedDemoInvitations(sequelize);
+  console.log(`${demoClub.name}: ${invitations.created} unanswered invitations seeded.`);
   const { staged } = await seedDemoCertification(sequelize);
   console.log(`${demoClub.name}: ${staged} athletes staged with quizzes, sign-offs and certificates.`);
   await closeDatabase();

@@ -391,3 +391,81 @@ export async function changeOwnName(actor: Actor, name: string): Promise<{ name:
     return { name: trimmed };
   });
 }
+
+/** An invitation nobody has accepted yet, as the club page lists it. */
+export interface UnansweredInvitation {
+  id: number;
+  email: string;
+  name: string;
+  role: Role;
+  sentAt: Date;
+  expiresAt: Date;
+  /** False once its 14 days are over: the link no longer works, and "Send again" is the way on. */
+  open: boolean;
+}
+
+/** How long an expired invitation stays on the club page's list. */
+export const expiredInvitationListDays = 30;
+
+/**
+ * The club's invitations not accepted yet: the newest one per address (sending again replaces the
+ * earlier), leaving out addresses that have an account by now, and expired ones after 30 days.
+ */
+export async function listUnansweredInvitations(actor: Actor, now: Date = new Date()): Promise<UnansweredInvitation[]> {
+  await databaseReady();
+  assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators can see invitations.");
+  const invitations = await Invitation.findAll({
+    where: {
+      clubId: actor.clubId,
+      acceptedAt: null,
+      expiresAt: { [Op.gt]: new Date(now.getTime() - expiredInvitationListDays * 86_400_000) },
+    },
+    order: [
+      ["createdAt", "DESC"],
+      ["id", "DESC"],
+    ],
+  });
+  const newest = new Map<string, Invitation>();
+  for (const invitation of invitations) if (!newest.has(invitation.email)) newest.set(invitation.email, invitation);
+  const joined = new Set((await User.findAll({ where: { email: [...newest.keys()] }, attributes: ["email"] })).map((user) => user.email));
+  return [...newest.values()]
+    .filter((invitation) => !joined.has(invitation.email))
+    .map((invitation) => ({
+      id: invitation.id,
+      email: invitation.email,
+      name: invitation.name,
+      role: invitation.role,
+      sentAt: invitation.createdAt,
+      expiresAt: invitation.expiresAt,
+      open: invitation.expiresAt.getTime() > now.getTime(),
+    }));
+}
+
+/**
+ * An administrator withdraws an invitation not accepted yet (sent to a wrong address, say): its link
+ * stops working at once and the address leaves the list. Its rows (this one and any earlier ones to the
+ * address) are removed; the audit log keeps who and when.
+ */
+export async function withdrawInvitation(actor: Actor, invitationId: number): Promise<{ email: string }> {
+  await databaseReady();
+  assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators can withdraw invitations.");
+  return writeTransaction(async (transaction) => {
+    const invitation = await Invitation.findOne({ where: { id: invitationId, clubId: actor.clubId, acceptedAt: null }, transaction });
+    if (!invitation) throw new NotFoundError("That invitation is not waiting any more: it was accepted or withdrawn.");
+    const { email } = invitation;
+    // Earlier invitations to the address (replaced or expired) go too, or the list would show the last of them again.
+    await Invitation.destroy({ where: { clubId: actor.clubId, email, acceptedAt: null }, transaction });
+    await recordAudit(
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action: "member.invitation-withdrawn",
+        subjectType: "invitation",
+        subjectId: invitationId,
+        details: { email },
+      },
+      transaction,
+    );
+    return { email };
+  });
+}

@@ -28,3 +28,6 @@ export type ChangeRoleInput = z.input<typeof changeRoleSchema>;
 
 /** Deactivate and reactivate buttons on the members page. */
 export const memberStatusSchema = z.strictObject({ memberId: recordIdValueSchema, status });
+
+/** The "Withdraw" button of an invitation not yet accepted, on the club page. */
+export const withdrawInvitationSchema = z.strictObject({ invitationId: recordIdValueSchema });

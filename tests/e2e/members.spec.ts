@@ -3,6 +3,42 @@ import AxeBuilder from "@axe-core/playwright";
 import { demo, openNewestMailTo, signIn, signedInContext } from "./support/auth";
 
 test.describe("members admin", () => {
+  test("the club page lists invitations not accepted yet; the admin sends an expired one again and withdraws another", async ({
+    page,
+    browser,
+  }) => {
+    await signIn(page, demo.admin);
+    await page.goto("/club");
+    const list = page.getByTestId("unanswered-invitations");
+    const status = page.getByTestId("invitations-status");
+    // The demo seed's two (lib/seed/demo-invitations.ts): Tamsin's is open, Oskar's expired.
+    const tamsin = page.getByTestId("invitation-tamsin@lantern-reach.example");
+    const oskar = page.getByTestId("invitation-oskar@lantern-reach.example");
+    await expect(tamsin).toContainText("link works until");
+    await expect(oskar).toContainText("expired");
+
+    await oskar.getByRole("button", { name: "Send again to oskar@lantern-reach.example" }).click();
+    // The expired link was not working any more, so nothing is said about replacing it.
+    await expect(status).toHaveText("✓ Invitation sent to oskar@lantern-reach.example.");
+    await expect(oskar).toContainText("link works until");
+    await expect(list.getByRole("listitem").filter({ hasText: "oskar@lantern-reach.example" })).toHaveCount(1);
+
+    await oskar.getByRole("button", { name: "Withdraw the invitation to oskar@lantern-reach.example" }).click();
+    await expect(status).toContainText("Invitation to oskar@lantern-reach.example withdrawn");
+    await expect(oskar).toHaveCount(0);
+    await expect(tamsin).toBeVisible();
+    const mail = await openNewestMailTo(page, "oskar@lantern-reach.example");
+    const link = new URL(/https?:\/\/\S+\/invite\/\S+/.exec(mail)![0]);
+
+    // The withdrawn link no longer opens anything.
+    const context = await browser.newContext();
+    const invitee = await context.newPage();
+    const answer = await invitee.goto(link.pathname);
+    expect(answer?.status()).toBe(404);
+    await expect(invitee.getByText("This invitation link is no longer valid.")).toBeVisible();
+    await context.close();
+  });
+
   test("the admin searches the member list and sees roles, status and last sign-in", async ({ page }) => {
     await signIn(page, demo.admin);
     await page.goto("/club");

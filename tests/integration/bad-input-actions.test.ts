@@ -78,6 +78,9 @@ interface Fixtures {
   jonahWaitingSignOffId: string;
   femiCertificateId: string;
   invitationToken: string;
+  /** An invitation the withdraw table's valid control withdraws, and one of the other club. */
+  spareInvitationId: number;
+  otherClubInvitationId: number;
   settingsAsStored: unknown;
 }
 let fx = {} as Fixtures;
@@ -133,6 +136,20 @@ beforeAll(async () => {
     tokenHash: hashToken(invitationToken),
     expiresAt: new Date(Date.now() + 86_400_000),
   });
+  const invitationFor = async (clubId: number, email: string) =>
+    (
+      await Invitation.create({
+        clubId,
+        invitedById: null,
+        email,
+        name: "Spare Invitation",
+        role: "athlete",
+        tokenHash: hashToken(newToken()),
+        expiresAt: new Date(Date.now() + 86_400_000),
+      })
+    ).id;
+  const spareInvitationId = await invitationFor(admin!.clubId, "spare.invitation@bad-input.example");
+  const otherClubInvitationId = await invitationFor(otherAthlete.clubId, "other.invitation@bad-input.example");
   fx = {
     today: localIsoDate(),
     heronId: await boatNamed("Heron"),
@@ -154,6 +171,8 @@ beforeAll(async () => {
       where: { athleteId: femi!.id, kind: "module", moduleSlug: "grip-cleaning", revokedAt: null },
     }))!.id,
     invitationToken,
+    spareInvitationId,
+    otherClubInvitationId,
     settingsAsStored: settingsToForm(readClubSettings((await Club.findByPk(admin!.clubId))!.settings)),
   };
   tables = await tablesOfTheDatabase();
@@ -904,6 +923,23 @@ describe("the club's administration (as an admin)", () => {
         ]),
       ),
     valid: () => [validInvitation()],
+  });
+
+  table("withdrawInvitationAction", {
+    action: clubActions.withdrawInvitationAction,
+    as: "admin",
+    cases: () =>
+      single(
+        objectVariants({ invitationId: fx.spareInvitationId }, "invitationId", { invitationId: { kind: "id" } }, [
+          v("invitationId of another club", { invitationId: fx.otherClubInvitationId }, "invitationId"),
+          v("invitationId unknown", { invitationId: 2_147_480_000 }, "invitationId"),
+          v("invitationId past the largest id", { invitationId: 2 ** 31 }, "invitationId"),
+          v("invitationId in hexadecimal", { invitationId: `0x${fx.spareInvitationId.toString(16)}` }, "invitationId"),
+          v("invitationId with spaces", { invitationId: ` ${fx.spareInvitationId} ` }, "invitationId"),
+          v("an email instead of the id", { invitationId: fx.spareInvitationId, email: "spare.invitation@bad-input.example" }, "email"),
+        ]),
+      ),
+    valid: () => [{ invitationId: fx.spareInvitationId }],
   });
 
   const settings = () => structuredClone(fx.settingsAsStored) as Input & { limits: { sculling: Input; sweep: Input } };

@@ -14,7 +14,16 @@ const { databaseReady } = await import("@/lib/data/database");
 const { seedDemoClub, demoPassword } = await import("@/lib/seed/demo-club");
 const { seedSecondClub } = await import("@/lib/seed/second-club");
 const { changeMemberRole, importRoster, setMemberStatus } = await import("@/lib/data/member-admin");
-const { authenticateWithPassword, acceptInvitation, sessionUserById } = await import("@/lib/data/users");
+const {
+  authenticateWithPassword,
+  acceptInvitation,
+  sessionUserById,
+  inviteMember,
+  listUnansweredInvitations,
+  withdrawInvitation,
+  findPendingInvitation,
+} = await import("@/lib/data/users");
+const { hashToken, newToken } = await import("@/lib/auth/tokens");
 const { currentActor } = await import("@/lib/auth/session");
 const { listOutbox } = await import("@/lib/mail/outbox");
 const { AuditEvent, Invitation, User } = await import("@/models");
@@ -315,5 +324,98 @@ describe("the roster API's pages", () => {
     const body = (await response.json()) as { error: string; message: string; fields: Record<string, string[]> };
     expect(body.error).toBe("invalid_input");
     expect(body.message).toContain(field);
+  });
+});
+
+describe("invitations not accepted yet (the club page's list)", () => {
+  const daysAgo = (days: number) => new Date(Date.now() - days * 86_400_000);
+
+  it("lists the newest invitation per address, leaves out accepted ones, addresses with an account and long-expired ones", async () => {
+    const actor = await actorFor(admin);
+    await inviteMember(actor, { email: "wren.list@lantern-reach.example", name: "Wren List", role: "athlete" });
+    await inviteMember(actor, { email: "wren.list@lantern-reach.example", name: "Wren List", role: "coach" });
+    const clubId = actor.clubId;
+    const stale = { clubId, invitedById: actor.id, role: "athlete" as const, acceptedAt: null };
+    await Invitation.create({
+      ...stale,
+      email: "lapsed.recent@lantern-reach.example",
+      name: "Lapsed Recent",
+      tokenHash: hashToken(newToken()),
+      expiresAt: daysAgo(5),
+    });
+    await Invitation.create({
+      ...stale,
+      email: "lapsed.long@lantern-reach.example",
+      name: "Lapsed Long",
+      tokenHash: hashToken(newToken()),
+      expiresAt: daysAgo(31),
+    });
+    // An address that has an account by now (invited again after joining another way), and an accepted one.
+    await Invitation.create({
+      ...stale,
+      email: "ada@lantern-reach.example",
+      name: "Ada",
+      tokenHash: hashToken(newToken()),
+      expiresAt: daysAgo(-3),
+    });
+    await Invitation.create({
+      ...stale,
+      email: "accepted@lantern-reach.example",
+      name: "Accepted",
+      tokenHash: hashToken(newToken()),
+      expiresAt: daysAgo(-3),
+      acceptedAt: daysAgo(1),
+    });
+
+    const listed = await listUnansweredInvitations(actor);
+    const byEmail = new Map(listed.map((invitation) => [invitation.email, invitation]));
+    expect(listed.filter((invitation) => invitation.email === "wren.list@lantern-reach.example")).toHaveLength(1);
+    expect(byEmail.get("wren.list@lantern-reach.example")).toMatchObject({ role: "coach", open: true });
+    expect(byEmail.get("lapsed.recent@lantern-reach.example")).toMatchObject({ open: false });
+    for (const gone of ["lapsed.long@lantern-reach.example", "ada@lantern-reach.example", "accepted@lantern-reach.example"]) {
+      expect(byEmail.has(gone), gone).toBe(false);
+    }
+    // Another club's invitations never show, and only administrators may look.
+    const other = await listUnansweredInvitations(await actorFor("admin@brackwater.example"));
+    expect(other.some((invitation) => invitation.email.endsWith("@lantern-reach.example"))).toBe(false);
+    await expect(listUnansweredInvitations(await actorFor("coach.tobias@lantern-reach.example"))).rejects.toBeInstanceOf(ForbiddenError);
+  });
+
+  it("withdraws one: its link stops working, it leaves the list and the audit log says who; others are refused", async () => {
+    const actor = await actorFor(admin);
+    // An earlier invitation to the same address, expired: it must not come back on the list once the newer one is withdrawn.
+    await Invitation.create({
+      clubId: actor.clubId,
+      invitedById: actor.id,
+      email: "wrong.address@lantern-reach.example",
+      name: "Wrong Address",
+      role: "athlete",
+      tokenHash: hashToken(newToken()),
+      expiresAt: new Date(Date.now() - 86_400_000),
+      createdAt: new Date(Date.now() - 15 * 86_400_000),
+    });
+    const { invitationId } = await inviteMember(actor, {
+      email: "wrong.address@lantern-reach.example",
+      name: "Wrong Address",
+      role: "athlete",
+    });
+    const token = newToken();
+    await Invitation.update({ tokenHash: hashToken(token) }, { where: { id: invitationId } });
+    expect(await findPendingInvitation(token)).not.toBeNull();
+
+    await expect(withdrawInvitation(await actorFor("admin@brackwater.example"), invitationId)).rejects.toBeInstanceOf(NotFoundError);
+    await expect(withdrawInvitation(await actorFor("coach.tobias@lantern-reach.example"), invitationId)).rejects.toBeInstanceOf(
+      ForbiddenError,
+    );
+    expect(await findPendingInvitation(token)).not.toBeNull();
+
+    expect(await withdrawInvitation(actor, invitationId)).toEqual({ email: "wrong.address@lantern-reach.example" });
+    expect(await findPendingInvitation(token)).toBeNull();
+    expect((await listUnansweredInvitations(actor)).some((invitation) => invitation.email === "wrong.address@lantern-reach.example")).toBe(
+      false,
+    );
+    const audit = await AuditEvent.findOne({ where: { action: "member.invitation-withdrawn", subjectId: String(invitationId) } });
+    expect(audit).toMatchObject({ actorId: actor.id, details: { email: "wrong.address@lantern-reach.example" } });
+    await expect(withdrawInvitation(actor, invitationId)).rejects.toBeInstanceOf(NotFoundError);
   });
 });

@@ -509,6 +509,15 @@ export const actionGuardRows: ActionGuardRow[] = [
     expect: adminsOwnClub(200),
   },
   {
+    file: "app/(club)/club/actions.ts",
+    action: "withdrawInvitationAction",
+    // No invitation is seeded for the rows: an id that does not exist shows that the role check comes
+    // first (403) and that an admin is then told it is not there (404). tests/integration/member-admin.test.ts
+    // withdraws a real one, and refuses the other club's admin.
+    input: () => ({ invitationId: 2_147_480_000 }),
+    expect: { anonymous: 401, athlete: 403, otherAthlete: 403, coach: 403, otherCoach: 403, admin: 404, otherAdmin: 404 },
+  },
+  {
     file: "app/(club)/club/members/actions.ts",
     action: "changeMemberRoleAction",
     input: ({ homeAthleteId }) => ({ memberId: homeAthleteId, role: "athlete" }),

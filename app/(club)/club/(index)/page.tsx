@@ -3,6 +3,10 @@ import Link from "next/link";
 import { PageTitle } from "@/components/ui/page-title";
 import { requirePageActor } from "@/lib/auth/session";
 import { clubOf, listClubMembers } from "@/lib/data/members";
+import { expiredInvitationListDays, listUnansweredInvitations } from "@/lib/data/users";
+import { clubTimeZone } from "@/lib/data/club-settings";
+import { formatIsoDate, isoDateInZone } from "@/lib/care/calendar";
+import { UnansweredInvitations } from "../_components/unanswered-invitations";
 import { isDemoMail } from "@/lib/env";
 import { InviteMemberForm } from "../_components/invite-member-form";
 
@@ -10,7 +14,13 @@ export const metadata: Metadata = { title: "Club" };
 
 export default async function ClubPage() {
   const actor = await requirePageActor("admin", "/club");
-  const [club, members] = await Promise.all([clubOf(actor), listClubMembers(actor)]);
+  const [club, members, invitations, timeZone] = await Promise.all([
+    clubOf(actor),
+    listClubMembers(actor),
+    listUnansweredInvitations(actor),
+    clubTimeZone(actor.clubId),
+  ]);
+  const day = (moment: Date) => formatIsoDate(isoDateInZone(timeZone, moment));
   return (
     <div className="space-y-8">
       <PageTitle lead="Members, invitations and the club's mail.">{club.name}</PageTitle>
@@ -27,6 +37,29 @@ export default async function ClubPage() {
           Invite a member
         </h2>
         <InviteMemberForm />
+      </section>
+      <section aria-labelledby="invitations-heading" className="rounded-lg bg-white p-4 shadow-sm" data-testid="unanswered-invitations">
+        <h2 id="invitations-heading" className="mb-1 text-lg font-semibold">
+          Invitations not accepted yet ({invitations.length})
+        </h2>
+        {invitations.length > 0 && (
+          <p className="mb-3 text-sm text-slate-700">
+            The newest invitation to each address. Send again for a fresh link (the earlier one stops working); withdraw one sent to a wrong
+            address. Expired ones leave this list after {expiredInvitationListDays} days.
+          </p>
+        )}
+        <UnansweredInvitations
+          emptyText={`Everyone you invited has joined. Expired invitations leave this list after ${expiredInvitationListDays} days.`}
+          invitations={invitations.map((invitation) => ({
+            id: invitation.id,
+            email: invitation.email,
+            name: invitation.name,
+            role: invitation.role,
+            sentLabel: day(invitation.sentAt),
+            expiresLabel: day(invitation.expiresAt),
+            open: invitation.open,
+          }))}
+        />
       </section>
       {isDemoMail() && (
         <p>
