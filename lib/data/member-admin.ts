@@ -8,6 +8,7 @@ import type { MemberSummary } from "@/lib/data/members";
 import { assertAllowed, assertVisible, canChangeMember, canManageClub, type Actor } from "@/lib/auth/permissions";
 import type { Role, UserStatus } from "@/lib/auth/roles";
 import { checkRoster, type RosterEntry, type RosterProblem } from "@/lib/members/roster-import";
+import { ForbiddenError } from "@/lib/http/errors";
 import { Invitation, User } from "@/models";
 
 function toSummary(user: User): MemberSummary {
@@ -52,6 +53,35 @@ export async function changeMemberRole(actor: Actor, memberId: number, role: Rol
         subjectType: "user",
         subjectId: member.id,
         details: { from, to: role },
+      },
+      transaction,
+    );
+    return toSummary(member);
+  });
+}
+
+/**
+ * An admin corrects how another member's name is written (a typo in an invitation or a roster file).
+ * Certificates already issued keep the name they were issued to; new ones, the roster and the register's
+ * member column use the new one. Sessions go on: nothing about what the member may do changed.
+ */
+export async function renameMember(actor: Actor, memberId: number, name: string): Promise<MemberSummary> {
+  await databaseReady();
+  const trimmed = name.trim();
+  return writeTransaction(async (transaction) => {
+    if (memberId === actor.id && canManageClub(actor, actor.clubId)) throw new ForbiddenError("Correct your own name under Your account.");
+    const member = await memberToChange(actor, memberId, transaction);
+    if (member.name === trimmed) return toSummary(member);
+    const from = member.name;
+    await member.update({ name: trimmed }, { transaction });
+    await recordAudit(
+      {
+        clubId: actor.clubId,
+        actorId: actor.id,
+        action: "member.renamed",
+        subjectType: "user",
+        subjectId: member.id,
+        details: { from, to: trimmed },
       },
       transaction,
     );

@@ -3,6 +3,34 @@ import AxeBuilder from "@axe-core/playwright";
 import { demo, openNewestMailTo, signIn, signedInContext } from "./support/auth";
 
 test.describe("members admin", () => {
+  test("the admin corrects a member's name; a blank one is refused in the dialog; the roster shows the new name", async ({ page }) => {
+    await signIn(page, demo.admin);
+    await page.goto("/club/members");
+    const row = page.getByTestId("member-row-kit@lantern-reach.example");
+    await row.getByRole("button", { name: "Correct name of Kit Abernethy" }).click();
+    const dialog = page.getByTestId("rename-dialog");
+    const field = dialog.getByLabel("Name");
+    await expect(field).toBeFocused();
+    await field.fill("  ");
+    await dialog.getByRole("button", { name: "Save name" }).click();
+    await expect(dialog.getByText("Enter the member's name.")).toBeVisible();
+    await expect(field).toHaveAttribute("aria-invalid", "true");
+    await field.fill("Kit Abernethy-Rowe");
+    await dialog.getByRole("button", { name: "Save name" }).click();
+    await expect(page.getByTestId("members-status")).toContainText("Name saved: Kit Abernethy-Rowe.");
+    await expect(row).toContainText("Kit Abernethy-Rowe");
+    await page.goto("/roster");
+    await expect(page.getByTestId("roster-table")).toContainText("Kit Abernethy-Rowe");
+
+    // Put it back for the other specs.
+    await page.goto("/club/members");
+    await row.getByRole("button", { name: "Correct name of Kit Abernethy-Rowe" }).click();
+    await dialog.getByLabel("Name").fill("Kit Abernethy");
+    await dialog.getByRole("button", { name: "Save name" }).click();
+    await expect(row).toContainText("Kit Abernethy");
+    await expect(row).not.toContainText("Rowe");
+  });
+
   test("the club page lists invitations not accepted yet; the admin sends an expired one again and withdraws another", async ({
     page,
     browser,

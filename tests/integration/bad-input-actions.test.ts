@@ -1026,6 +1026,29 @@ describe("the club's administration (as an admin)", () => {
     valid: () => [{ memberId: fx.kitId, role: "coach" }],
   });
 
+  table("renameMemberAction", {
+    action: memberActions.renameMemberAction,
+    as: "admin",
+    cases: () =>
+      single(
+        objectVariants(
+          { memberId: fx.hamishId, name: "Hamish Oyelaran" },
+          "memberId",
+          { memberId: { kind: "id" }, name: { kind: "name" } },
+          [
+            v("memberId of another club", { memberId: fx.otherClubAthleteId, name: "Hamish Oyelaran" }, "memberId"),
+            v("memberId past the largest id", { memberId: 2 ** 31, name: "Hamish Oyelaran" }, "memberId"),
+            v("memberId in hexadecimal", { memberId: `0x${fx.hamishId.toString(16)}`, name: "Hamish Oyelaran" }, "memberId"),
+            v("name too long", { memberId: fx.hamishId, name: "n".repeat(121) }, "name"),
+            v("name with a tab", { memberId: fx.hamishId, name: "Hamish\tOyelaran" }, "name"),
+            v("an email beside the name", { memberId: fx.hamishId, name: "Hamish Oyelaran", email: "h@else.example" }, "email"),
+            v("a role beside the name", { memberId: fx.hamishId, name: "Hamish Oyelaran", role: "admin" }, "role"),
+          ],
+        ),
+      ),
+    valid: () => [{ memberId: fx.hamishId, name: "Hamish Oyelaran" }],
+  });
+
   table("setMemberStatusAction", {
     action: memberActions.setMemberStatusAction,
     as: "admin",

@@ -13,7 +13,8 @@ const { closeDatabase, getSequelize } = await import("@/lib/db");
 const { databaseReady } = await import("@/lib/data/database");
 const { seedDemoClub, demoPassword } = await import("@/lib/seed/demo-club");
 const { seedSecondClub } = await import("@/lib/seed/second-club");
-const { changeMemberRole, importRoster, setMemberStatus } = await import("@/lib/data/member-admin");
+const { seedDemoCertification } = await import("@/lib/seed/demo-certification");
+const { changeMemberRole, importRoster, renameMember, setMemberStatus } = await import("@/lib/data/member-admin");
 const {
   authenticateWithPassword,
   acceptInvitation,
@@ -26,7 +27,7 @@ const {
 const { hashToken, newToken } = await import("@/lib/auth/tokens");
 const { currentActor } = await import("@/lib/auth/session");
 const { listOutbox } = await import("@/lib/mail/outbox");
-const { AuditEvent, Invitation, User } = await import("@/models");
+const { AuditEvent, Certificate, Invitation, User } = await import("@/models");
 const { ForbiddenError, NotFoundError } = await import("@/lib/http/errors");
 const memberRoute = await import("@/app/api/members/[id]/route");
 const importRoute = await import("@/app/api/members/import/route");
@@ -38,6 +39,7 @@ beforeAll(async () => {
   await databaseReady();
   await seedDemoClub(getSequelize());
   await seedSecondClub(getSequelize());
+  await seedDemoCertification(getSequelize());
 });
 
 afterAll(async () => {
@@ -417,5 +419,26 @@ describe("invitations not accepted yet (the club page's list)", () => {
     const audit = await AuditEvent.findOne({ where: { action: "member.invitation-withdrawn", subjectId: String(invitationId) } });
     expect(audit).toMatchObject({ actorId: actor.id, details: { email: "wrong.address@lantern-reach.example" } });
     await expect(withdrawInvitation(actor, invitationId)).rejects.toBeInstanceOf(NotFoundError);
+  });
+});
+
+describe("correcting a member's name", () => {
+  it("saves it and audits who; issued certificates keep their name; coaches, the admin's own row and other clubs are refused", async () => {
+    const actor = await actorFor(admin);
+    const greta = await userFor("greta@lantern-reach.example");
+    const issued = await Certificate.findAll({ where: { athleteId: greta.id } });
+    expect(issued.length).toBeGreaterThan(0);
+    const summary = await renameMember(actor, greta.id, "  Greta Quennell-Vasquez ");
+    expect(summary).toMatchObject({ id: greta.id, name: "Greta Quennell-Vasquez" });
+    expect((await userFor("greta@lantern-reach.example")).tokenVersion).toBe(greta.tokenVersion);
+    const kept = await Certificate.findAll({ where: { athleteId: greta.id } });
+    expect(kept.map((certificate) => certificate.athleteName)).toEqual(issued.map((certificate) => certificate.athleteName));
+    const audit = await AuditEvent.findOne({ where: { action: "member.renamed", subjectId: String(greta.id) } });
+    expect(audit).toMatchObject({ actorId: actor.id, details: { from: greta.name, to: "Greta Quennell-Vasquez" } });
+
+    await expect(renameMember(await actorFor("coach.tobias@lantern-reach.example"), greta.id, "X")).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(renameMember(await actorFor("admin@brackwater.example"), greta.id, "X")).rejects.toBeInstanceOf(NotFoundError);
+    await expect(renameMember(actor, actor.id, "Someone Else")).rejects.toThrow("Correct your own name under Your account.");
+    expect((await userFor("greta@lantern-reach.example")).name).toBe("Greta Quennell-Vasquez");
   });
 });

@@ -525,6 +525,12 @@ export const actionGuardRows: ActionGuardRow[] = [
   },
   {
     file: "app/(club)/club/members/actions.ts",
+    action: "renameMemberAction",
+    input: ({ homeAthleteId }) => ({ memberId: homeAthleteId, name: "Lena Fairbrother" }),
+    expect: homeAdminOnRecord,
+  },
+  {
+    file: "app/(club)/club/members/actions.ts",
     action: "setMemberStatusAction",
     input: ({ homeAthleteId }) => ({ memberId: homeAthleteId, status: "active" }),
     expect: homeAdminOnRecord,

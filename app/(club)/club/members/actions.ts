@@ -3,10 +3,10 @@
 import { revalidatePath } from "next/cache";
 import { requireActor } from "@/lib/auth/session";
 import { assertAllowed, assertMayManageClub, canManageClub } from "@/lib/auth/permissions";
-import { changeMemberRole, importRoster, setMemberStatus, type RosterImportReport } from "@/lib/data/member-admin";
+import { changeMemberRole, importRoster, renameMember, setMemberStatus, type RosterImportReport } from "@/lib/data/member-admin";
 import type { MemberSummary } from "@/lib/data/members";
 import { roleLabels } from "@/lib/auth/roles";
-import { changeRoleSchema, memberStatusSchema } from "@/lib/validations/member-admin";
+import { changeRoleSchema, memberStatusSchema, renameMemberSchema } from "@/lib/validations/member-admin";
 import { parseActionInput } from "@/lib/validations/issues";
 import { decodeRosterText, rosterFileProblem, rosterProblemFields } from "@/lib/members/roster-import";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
@@ -28,6 +28,26 @@ export async function changeMemberRoleAction(input: unknown): Promise<ActionResu
     return {
       ok: true,
       message: `${member.name} is now ${roleLabels[member.role].toLowerCase()}. They sign in again to continue.`,
+      data: member,
+    };
+  } catch (error) {
+    return actionFailure(error);
+  }
+}
+
+/** An admin corrects how another member's name is written; issued certificates keep theirs. */
+export async function renameMemberAction(input: unknown): Promise<ActionResult<MemberSummary>> {
+  try {
+    const actor = await requireActor();
+    assertMayManageClub(actor);
+    const parsed = parseActionInput(renameMemberSchema, input);
+    if (!parsed.success) return { ok: false, message: "Check the name.", fieldErrors: parsed.fieldErrors };
+    const { memberId, name } = parsed.data;
+    const member = await lookUpBy("memberId", "member of your club", () => renameMember(actor, memberId, name));
+    revalidatePath(membersPath);
+    return {
+      ok: true,
+      message: `Name saved: ${member.name}. Certificates already issued keep the name they were issued to.`,
       data: member,
     };
   } catch (error) {

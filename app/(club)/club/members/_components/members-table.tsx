@@ -18,7 +18,7 @@ import { Button } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
 import { SelectField, TextField } from "@/components/ui/field";
 import { LiveStatus, Notice } from "@/components/ui/notice";
-import { changeMemberRoleAction, setMemberStatusAction } from "../actions";
+import { changeMemberRoleAction, renameMemberAction, setMemberStatusAction } from "../actions";
 import { reachAction } from "@/lib/http/reach-action";
 
 export interface MemberRow extends MemberSummary {
@@ -26,7 +26,8 @@ export interface MemberRow extends MemberSummary {
   lastSignInLabel: string;
 }
 
-type Pending = { kind: "role"; member: MemberRow } | { kind: "deactivate"; member: MemberRow } | null;
+type Pending =
+  { kind: "role"; member: MemberRow } | { kind: "rename"; member: MemberRow } | { kind: "deactivate"; member: MemberRow } | null;
 
 const column = createColumnHelper<MemberRow>();
 
@@ -56,6 +57,7 @@ interface ChangesMeta {
   actorId: number;
   busy: boolean;
   askRole: (member: MemberRow) => void;
+  askRename: (member: MemberRow) => void;
   askDeactivate: (member: MemberRow) => void;
   reactivate: (member: MemberRow) => void;
 }
@@ -92,8 +94,24 @@ function StatusCell({ member, meta }: { member: MemberRow; meta: ChangesMeta }) 
   );
 }
 
+function NameCell({ member, meta }: { member: MemberRow; meta: ChangesMeta }) {
+  return (
+    <div className="flex flex-col items-start gap-1">
+      <span className="font-semibold">{member.name}</span>
+      {member.id !== meta.actorId && (
+        <Button variant="secondary" onClick={() => meta.askRename(member)} className="whitespace-nowrap">
+          Correct name<span className="sr-only"> of {member.name}</span>
+        </Button>
+      )}
+    </div>
+  );
+}
+
 const columns = [
-  column.accessor("name", { header: "Name", cell: (info) => <span className="font-semibold">{info.getValue()}</span> }),
+  column.accessor("name", {
+    header: "Name",
+    cell: (info) => <NameCell member={info.row.original} meta={info.table.options.meta as ChangesMeta} />,
+  }),
   column.accessor("email", { header: "E-mail", cell: (info) => <span className="[overflow-wrap:anywhere]">{info.getValue()}</span> }),
   column.accessor((member) => roleLabels[member.role], {
     id: "role",
@@ -119,6 +137,8 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
   const [sorting, setSorting] = useState<SortingState>([{ id: "name", desc: false }]);
   const [pending, setPending] = useState<Pending>(null);
   const [newRole, setNewRole] = useState<Role>("athlete");
+  const [newName, setNewName] = useState("");
+  const [nameError, setNameError] = useState<string | undefined>(undefined);
   const [busy, setBusy] = useState(false);
   const [outcome, setOutcome] = useState<{ ok: boolean; message?: string } | null>(null);
 
@@ -126,6 +146,22 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
     setBusy(true);
     const result = await reachAction(action);
     setBusy(false);
+    setPending(null);
+    setOutcome(result);
+    if (result.ok) router.refresh();
+  }
+
+  /** The rename dialog stays open on a refused name, with the reason beside the field. */
+  async function rename(member: MemberRow) {
+    setBusy(true);
+    setNameError(undefined);
+    const result = await reachAction(() => renameMemberAction({ memberId: member.id, name: newName }));
+    setBusy(false);
+    const fieldError = result.ok ? undefined : result.fieldErrors.name?.[0];
+    if (fieldError) {
+      setNameError(fieldError);
+      return;
+    }
     setPending(null);
     setOutcome(result);
     if (result.ok) router.refresh();
@@ -147,6 +183,12 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
         setNewRole(member.role);
         setOutcome(null);
         setPending({ kind: "role", member });
+      },
+      askRename: (member) => {
+        setNewName(member.name);
+        setNameError(undefined);
+        setOutcome(null);
+        setPending({ kind: "rename", member });
       },
       askDeactivate: (member) => {
         setOutcome(null);
@@ -258,6 +300,40 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
             </Button>
             <Button type="submit" pending={busy} pendingLabel="Saving…">
               Save role
+            </Button>
+          </div>
+        </form>
+      </Dialog>
+
+      <Dialog
+        open={pending?.kind === "rename"}
+        onClose={() => setPending(null)}
+        title={pending ? `Correct the name of ${pending.member.name}` : "Correct name"}
+        description="As new certificates and the induction register will print it. Certificates already issued keep the name they were issued to."
+        testId="rename-dialog"
+      >
+        <form
+          onSubmit={(event) => {
+            event.preventDefault();
+            if (pending) void rename(pending.member);
+          }}
+          noValidate
+          className="space-y-4"
+        >
+          <TextField
+            label="Name"
+            autoComplete="off"
+            autoFocus
+            value={newName}
+            error={nameError}
+            onChange={(event) => setNewName(event.target.value)}
+          />
+          <div className="flex flex-wrap justify-end gap-2">
+            <Button type="button" variant="secondary" onClick={() => setPending(null)}>
+              Cancel
+            </Button>
+            <Button type="submit" pending={busy} pendingLabel="Saving…">
+              Save name
             </Button>
           </div>
         </form>
