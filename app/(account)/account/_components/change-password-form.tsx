@@ -6,13 +6,13 @@ import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { z } from "zod";
 import { changePasswordSchema } from "@/lib/validations/members";
-import { minPasswordLength } from "@/lib/auth/password-rules";
 import { startSession } from "@/lib/auth/start-session";
 import { reachAction } from "@/lib/http/reach-action";
 import { TextField } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { ClientForm } from "@/components/ui/client-form";
+import { NewPasswordFields } from "@/components/auth/new-password-fields";
 import { changePasswordAction } from "../actions";
 
 const formSchema = changePasswordSchema
@@ -65,20 +65,12 @@ export function ChangePasswordForm({ email, withoutCurrent }: { email: string; w
           {...form.register("currentPassword")}
         />
       )}
-      <TextField
+      <NewPasswordFields
         label="New password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${minPasswordLength} characters. A few unrelated words work well; very common passwords are refused.`}
-        error={errors.newPassword?.message}
-        {...form.register("newPassword")}
-      />
-      <TextField
-        label="Type it again"
-        type="password"
-        autoComplete="new-password"
-        error={errors.confirm?.message}
-        {...form.register("confirm")}
+        password={form.register("newPassword")}
+        confirm={form.register("confirm")}
+        passwordError={errors.newPassword?.message}
+        confirmError={errors.confirm?.message}
       />
       <LiveStatus testId="change-password-status">
         {outcome && <Notice tone={outcome.ok ? "success" : "error"} title={outcome.message} />}

@@ -10,10 +10,10 @@ import { acceptInvitationSchema } from "@/lib/validations/members";
 import { TextField } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 import { LiveStatus, Notice } from "@/components/ui/notice";
-import { minPasswordLength } from "@/lib/auth/password-rules";
 import { acceptInvitationAction } from "./actions";
 import { reachAction } from "@/lib/http/reach-action";
 import { ClientForm } from "@/components/ui/client-form";
+import { NewPasswordFields } from "@/components/auth/new-password-fields";
 
 const formSchema = acceptInvitationSchema
   .extend({ confirm: z.string() })
@@ -52,20 +52,12 @@ export function AcceptInvitationForm({ token, email, defaultName }: { token: str
     <ClientForm onSubmit={onSubmit} noValidate className="space-y-4 rounded-lg bg-white p-4 shadow-sm">
       <input type="hidden" {...form.register("token")} />
       <TextField label="Your name" autoComplete="name" error={errors.name?.message} {...form.register("name")} />
-      <TextField
+      <NewPasswordFields
         label="Choose a password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${minPasswordLength} characters. A few unrelated words work well; very common passwords are refused.`}
-        error={errors.password?.message}
-        {...form.register("password")}
-      />
-      <TextField
-        label="Type it again"
-        type="password"
-        autoComplete="new-password"
-        error={errors.confirm?.message}
-        {...form.register("confirm")}
+        password={form.register("password")}
+        confirm={form.register("confirm")}
+        passwordError={errors.password?.message}
+        confirmError={errors.confirm?.message}
       />
       <LiveStatus>{failure && <Notice tone="error" title={failure} />}</LiveStatus>
       <Button type="submit" pending={isSubmitting} pendingLabel="Creating your account…" className="w-full">
