@@ -1,3 +1,5 @@
+import { fetchCsrfToken } from "@/lib/auth/csrf-token";
+
 /**
  * Ends the session from the browser through next-auth's own sign-out endpoint (so `events.signOut` runs
  * and the token version moves on), the same two requests `signOut` from next-auth/react makes. Written
@@ -5,10 +7,8 @@
  * about 12 KB (gz) of client code on every page.
  */
 export async function endSession(callbackUrl: string): Promise<void> {
-  const csrf = await fetch("/api/auth/csrf", { cache: "no-store" });
-  if (!csrf.ok) throw new Error(`GET /api/auth/csrf answered ${csrf.status}`);
-  const { csrfToken } = (await csrf.json()) as { csrfToken?: string };
-  if (!csrfToken) throw new Error("GET /api/auth/csrf returned no csrfToken");
+  const csrfToken = await fetchCsrfToken();
+  if (!csrfToken) throw new Error("GET /api/auth/csrf gave no csrfToken");
   const response = await fetch("/api/auth/signout", {
     method: "POST",
     headers: { "Content-Type": "application/x-www-form-urlencoded" },

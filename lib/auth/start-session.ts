@@ -1,3 +1,5 @@
+import { fetchCsrfToken } from "@/lib/auth/csrf-token";
+
 /** How a sign-in from the browser ended. */
 export type SessionStart = { ok: true } | { ok: false; reason: "refused" | "throttled" | "unreached" };
 
@@ -16,9 +18,8 @@ export async function startSession(
 ): Promise<SessionStart> {
   let response: Response;
   try {
-    const csrf = await fetch("/api/auth/csrf", { cache: "no-store" });
-    const { csrfToken } = (await csrf.json().catch(() => ({}))) as { csrfToken?: string };
-    if (!csrf.ok || !csrfToken) return { ok: false, reason: "unreached" };
+    const csrfToken = await fetchCsrfToken();
+    if (!csrfToken) return { ok: false, reason: "unreached" };
     response = await fetch(`/api/auth/callback/${provider}`, {
       method: "POST",
       headers: { "Content-Type": "application/x-www-form-urlencoded" },
