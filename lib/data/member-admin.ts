@@ -3,7 +3,7 @@ import { Op, type Transaction } from "sequelize";
 import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { recordAudit } from "@/lib/data/audit";
-import { inviteMembers, openInvitationWhere } from "@/lib/data/users";
+import { inviteMembers, openInvitationWhere, renameUser } from "@/lib/data/users";
 import type { MemberSummary } from "@/lib/data/members";
 import { assertAllowed, assertVisible, canChangeMember, canManageClub, type Actor } from "@/lib/auth/permissions";
 import type { Role, UserStatus } from "@/lib/auth/roles";
@@ -71,20 +71,7 @@ export async function renameMember(actor: Actor, memberId: number, name: string)
   return writeTransaction(async (transaction) => {
     if (memberId === actor.id && canManageClub(actor, actor.clubId)) throw new ForbiddenError("Correct your own name under Your account.");
     const member = await memberToChange(actor, memberId, transaction);
-    if (member.name === trimmed) return toSummary(member);
-    const from = member.name;
-    await member.update({ name: trimmed }, { transaction });
-    await recordAudit(
-      {
-        clubId: actor.clubId,
-        actorId: actor.id,
-        action: "member.renamed",
-        subjectType: "user",
-        subjectId: member.id,
-        details: { from, to: trimmed },
-      },
-      transaction,
-    );
+    await renameUser(member, trimmed, actor.id, transaction);
     return toSummary(member);
   });
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import { Op } from "sequelize";
+import { Op, type Transaction } from "sequelize";
 import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { selectRows } from "@/lib/data/sql";
@@ -365,6 +365,20 @@ export async function clubNameOf(clubId: number): Promise<string> {
 }
 
 /**
+ * Writes a member's new name (already trimmed) and audits it as `member.renamed` by `actorId`, inside the
+ * caller's write transaction; nothing is written when the name is unchanged.
+ */
+export async function renameUser(user: User, name: string, actorId: number, transaction: Transaction): Promise<void> {
+  if (user.name === name) return;
+  const from = user.name;
+  await user.update({ name }, { transaction });
+  await recordAudit(
+    { clubId: user.clubId, actorId, action: "member.renamed", subjectType: "user", subjectId: user.id, details: { from, to: name } },
+    transaction,
+  );
+}
+
+/**
  * A member corrects their own name. Certificates already issued keep the name they were issued to (the
  * register is a record of what was signed); the roster, new certificates and the header use the new one.
  */
@@ -374,20 +388,7 @@ export async function changeOwnName(actor: Actor, name: string): Promise<{ name:
   return writeTransaction(async (transaction) => {
     const user = await User.findByPk(actor.id, { transaction });
     if (!user || user.status !== "active") throw new NotFoundError("Your account is no longer active. Ask your club administrator.");
-    if (user.name === trimmed) return { name: trimmed };
-    const previous = user.name;
-    await user.update({ name: trimmed }, { transaction });
-    await recordAudit(
-      {
-        clubId: user.clubId,
-        actorId: user.id,
-        action: "member.renamed",
-        subjectType: "user",
-        subjectId: user.id,
-        details: { from: previous, to: trimmed },
-      },
-      transaction,
-    );
+    await renameUser(user, trimmed, user.id, transaction);
     return { name: trimmed };
   });
 }
