@@ -54,6 +54,8 @@ test.describe("members admin", () => {
     await oskar.getByRole("button", { name: "Withdraw the invitation to oskar@lantern-reach.example" }).click();
     await expect(status).toContainText("Invitation to oskar@lantern-reach.example withdrawn");
     await expect(oskar).toHaveCount(0);
+    // The focused button left with its row: focus is on the list, beside the message, not lost to the page.
+    await expect(page.getByTestId("invitations")).toBeFocused();
     await expect(tamsin).toBeVisible();
     const mail = await openNewestMailTo(page, "oskar@lantern-reach.example");
     const link = new URL(/https?:\/\/\S+\/invite\/\S+/.exec(mail)![0]);

@@ -1,6 +1,6 @@
 "use client";
 
-import { useState, useTransition } from "react";
+import { useRef, useState, useTransition } from "react";
 import { useRouter } from "next/navigation";
 import { roleLabels, type Role } from "@/lib/auth/roles";
 import { reachAction } from "@/lib/http/reach-action";
@@ -28,6 +28,8 @@ export function UnansweredInvitations({ invitations, emptyText }: { invitations:
   const [pending, startTransition] = useTransition();
   const [working, setWorking] = useState<{ email: string; kind: "send" | "withdraw" } | null>(null);
   const [outcome, setOutcome] = useState<{ ok: boolean; message: string } | null>(null);
+  // A withdrawn row takes its focused button with it: focus goes to the list, where the outcome is said.
+  const listRef = useRef<HTMLDivElement>(null);
 
   function run(invitation: InvitationRow, kind: "send" | "withdraw") {
     setOutcome(null);
@@ -46,6 +48,7 @@ export function UnansweredInvitations({ invitations, emptyText }: { invitations:
           : (result.message ?? (result.ok ? "Done." : "That did not work.")),
       });
       setWorking(null);
+      if ((kind === "withdraw" && result.ok) || gone) listRef.current?.focus();
       if (result.ok || gone) router.refresh();
     });
   }
@@ -54,7 +57,7 @@ export function UnansweredInvitations({ invitations, emptyText }: { invitations:
     pending && working?.email === invitation.email && working.kind === kind;
 
   return (
-    <div className="space-y-3">
+    <div ref={listRef} tabIndex={-1} className="space-y-3 rounded" data-testid="invitations">
       <LiveStatus testId="invitations-status">
         {outcome && <Notice tone={outcome.ok ? "success" : "error"} title={outcome.message} />}
       </LiveStatus>
