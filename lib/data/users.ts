@@ -10,6 +10,7 @@ import { hashPassword, passwordProblem, verifyAgainstDecoy, verifyPassword } fro
 import { hashToken, newToken } from "@/lib/auth/tokens";
 import { ConflictError, NotFoundError, TooManyRequestsError, ValidationError } from "@/lib/http/errors";
 import { isSignInThrottled, recordSignInFailure } from "@/lib/auth/throttle";
+import { linkSessionGraceMinutes } from "@/lib/auth/password-rules";
 import { sendMail } from "@/lib/mail/send";
 import { publicBaseUrl } from "@/lib/env";
 import type { Role } from "@/lib/auth/roles";
@@ -112,6 +113,8 @@ export async function requestSignInLink(email: string): Promise<void> {
       "",
       `Open this link within ${signInLinkMinutes} minutes to sign in to Slipway. It works once.`,
       `${publicBaseUrl()}/sign-in/link?token=${token}`,
+      "",
+      `Forgot your password? Once signed in, choose a new one under Your account (your name at the top of the page) within ${linkSessionGraceMinutes} minutes.`,
       "",
       "If you did not ask for it, ignore this message.",
     ].join("\n"),

@@ -57,12 +57,14 @@ test("signed in with an e-mail link, a member sets a new password without the ol
   const context = await browser.newContext();
   const athlete = await context.newPage();
   await athlete.goto("/sign-in");
+  await expect(athlete.getByText("Forgot your password? Sign in with a link, then choose a new one under Your account")).toBeVisible();
   await athlete.getByLabel("E-mail for the link").fill(email);
   await athlete.getByRole("button", { name: "E-mail me a link" }).click();
   await expect(athlete.getByTestId("link-status")).toContainText("a sign-in link is on its way");
 
   await signIn(page, demo.admin);
   const text = await openNewestMailTo(page, email);
+  expect(text).toContain("Forgot your password? Once signed in, choose a new one under Your account");
   const link = new URL(/https?:\/\/\S+\/sign-in\/link\?token=\S+/.exec(text)![0]);
   await athlete.goto(`${link.pathname}${link.search}`);
   await athlete.getByRole("button", { name: "Sign in to Slipway" }).click();
