@@ -346,7 +346,7 @@ export async function changeOwnPassword(
     throw new ValidationError(same, { newPassword: [same] });
   }
   const passwordHash = await hashPassword(input.newPassword);
-  return writeTransaction(async (transaction) => {
+  const changed = await writeTransaction(async (transaction) => {
     const [changed] = await User.update(
       { passwordHash, tokenVersion: user.tokenVersion + 1 },
       { where: { id: user.id, tokenVersion: user.tokenVersion, status: "active" }, transaction },
@@ -358,6 +358,18 @@ export async function changeOwnPassword(
     );
     return { email: user.email };
   });
+  // Told by e-mail, so that a change the member did not make (a phone left signed in) does not go unseen.
+  await sendMail({
+    to: user.email,
+    subject: "Your Slipway password was changed",
+    text: [
+      `Hello ${user.name},`,
+      "",
+      "The password of your Slipway account was just changed, and every other device was signed out.",
+      `If that was not you, get a one-time link at ${publicBaseUrl()}/sign-in, choose a new password under Your account, and tell your club administrator.`,
+    ].join("\n"),
+  });
+  return changed;
 }
 
 /** The name of a club, for pages that show a member where they belong. */

@@ -21,6 +21,7 @@ const { authenticateWithPassword } = await import("@/lib/data/users");
 const { newToken, hashToken } = await import("@/lib/auth/tokens");
 const { signInFailureLimit } = await import("@/lib/auth/throttle");
 const { AuditEvent, Certificate, SignInLink, User } = await import("@/models");
+const { listOutbox } = await import("@/lib/mail/outbox");
 const { changeOwnNameAction, changePasswordAction } = await import("@/app/(account)/account/actions");
 
 beforeAll(async () => {
@@ -91,6 +92,9 @@ describe("changing your own password", () => {
     const after = (await User.findOne({ where: { email } }))!;
     expect(after.tokenVersion).toBe(before.tokenVersion + 1);
     expect(await AuditEvent.count({ where: { action: "member.password-changed", subjectId: String(before.id) } })).toBe(1);
+    // The member is told by e-mail, in case it was not them.
+    const told = (await listOutbox()).filter((message) => message.to === email && message.subject === "Your Slipway password was changed");
+    expect(told).toHaveLength(1);
     // The form then signs in again with the new password, as the browser would.
     const { response } = await passwordSignIn(email, newPassword, { "x-forwarded-for": "198.51.100.78" });
     expect(response.status).toBe(200);
