@@ -65,8 +65,22 @@ const pages: { path: string; as: string | null; open?: (page: Page) => Promise<v
     open: async (page) => {
       const { attemptId } = await openQuiz(page, "overall-length");
       await answerQuiz(page, await storedQuestions(attemptId), false);
+      // Once graded, the page refreshes its props, and Next renders the title again: a scan during that
+      // refresh found no title. Wait for a refresh answered after the submission's own answer.
+      const seen: string[] = [];
+      page.on("response", (response) => {
+        const path = new URL(response.url()).pathname;
+        if (path === `/api/attempts/${attemptId}/submit`) seen.push("submitted");
+        else if (path === "/learn/overall-length/quiz" && response.request().headers()["rsc"] === "1") seen.push("refreshed");
+      });
       await page.getByRole("button", { name: "Hand in my answers" }).click();
       await expect(page.getByTestId("quiz-outcome")).toBeVisible();
+      await expect
+        .poll(() => {
+          const submitted = seen.indexOf("submitted");
+          return submitted >= 0 && seen.indexOf("refreshed", submitted) > submitted;
+        })
+        .toBe(true);
     },
   },
   // femi (lib/seed/demo-certification.ts) has passed every quiz: the page opens on the pass, not on questions.
@@ -126,7 +140,14 @@ for (const viewport of viewports) {
         // Next streams the title after the page's body and renders it again when a page refreshes its
         // data (the quiz after grading): every page has one, so wait for it as for the heading.
         await expect(page).toHaveTitle(/Slipway/);
-        const results = await new AxeBuilder({ page }).withTags(wcagTags).analyze();
+        const scan = () => new AxeBuilder({ page }).withTags(wcagTags).analyze();
+        let results = await scan();
+        if (results.violations.length === 1 && results.violations[0]!.id === "document-title") {
+          // Next renders the title again while a page refreshes its data (the quiz after grading), and a
+          // scan can land in between. A page that has no title fails this second scan as well.
+          await expect(page).toHaveTitle(/Slipway/);
+          results = await scan();
+        }
         const summary = results.violations.map(
           (violation) => `${violation.id}: ${violation.nodes.map((node) => node.target.join(" ")).join(", ")}`,
         );
