@@ -372,13 +372,6 @@ export async function changeOwnPassword(
   return changed;
 }
 
-/** The name of a club, for pages that show a member where they belong. */
-export async function clubNameOf(clubId: number): Promise<string> {
-  await databaseReady();
-  const club = await Club.findByPk(clubId, { attributes: ["name"] });
-  return club?.name ?? "";
-}
-
 /**
  * Writes a member's new name (already trimmed) and audits it as `member.renamed` by `actorId`, inside the
  * caller's write transaction; nothing is written when the name is unchanged.

@@ -3,7 +3,7 @@ import { PageTitle } from "@/components/ui/page-title";
 import { currentSessionStart, requirePageActor } from "@/lib/auth/session";
 import { linkSessionGraceMinutes, mayChangePasswordWithoutCurrent } from "@/lib/auth/password-rules";
 import { roleLabels } from "@/lib/auth/roles";
-import { clubNameOf } from "@/lib/data/users";
+import { clubOf } from "@/lib/data/members";
 import { ChangeNameForm } from "./_components/change-name-form";
 import { ChangePasswordForm } from "./_components/change-password-form";
 
@@ -12,7 +12,7 @@ export const metadata: Metadata = { title: "Your account" };
 /** The signed-in member's own account: who they are to Slipway, and their password. */
 export default async function AccountPage() {
   const actor = await requirePageActor("member", "/account");
-  const [clubName, session] = await Promise.all([clubNameOf(actor.clubId), currentSessionStart()]);
+  const [club, session] = await Promise.all([clubOf(actor), currentSessionStart()]);
   const withoutCurrent = mayChangePasswordWithoutCurrent(session, new Date());
   return (
     <div className="mx-auto max-w-md space-y-6">
@@ -23,7 +23,7 @@ export default async function AccountPage() {
         <dt className="font-semibold">Role</dt>
         <dd>{roleLabels[actor.role]}</dd>
         <dt className="font-semibold">Club</dt>
-        <dd>{clubName}</dd>
+        <dd>{club.name}</dd>
       </dl>
       <section aria-labelledby="name-heading" className="rounded-lg bg-white p-4 shadow-sm">
         <h2 id="name-heading" className="mb-3 text-lg font-semibold">
