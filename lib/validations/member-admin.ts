@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { roles, userStatuses } from "@/lib/auth/roles";
 import { recordIdValueSchema } from "@/lib/validations/ids";
-import { oneLineTextMessage, oneLineTextPattern } from "@/lib/validations/text";
+import { memberNameField } from "@/lib/validations/members";
 
 /** A member id in a page address (text). The members page's actions get the number itself: recordIdValueSchema. */
 const memberId = z.coerce.number({ error: "Choose a member." }).int().positive({ error: "Choose a member." });
@@ -36,10 +36,5 @@ export const withdrawInvitationSchema = z.strictObject({ invitationId: recordIdV
 /** "Correct name" on the members page: how another member's name is written. */
 export const renameMemberSchema = z.strictObject({
   memberId: recordIdValueSchema,
-  name: z
-    .string({ error: "Enter the member's name." })
-    .trim()
-    .min(1, { error: "Enter the member's name." })
-    .max(120, { error: "Keep the name under 120 characters." })
-    .regex(oneLineTextPattern, { error: oneLineTextMessage }),
+  name: memberNameField,
 });

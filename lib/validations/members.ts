@@ -6,14 +6,25 @@ import { oneLineTextMessage, oneLineTextPattern } from "@/lib/validations/text";
 /** A one-time token as lib/auth/tokens.ts makes them (invitations, sign-in links): 32 random bytes, base64url. */
 export const oneTimeTokenPattern = /^[A-Za-z0-9_-]{43}$/;
 
+/** A person's name as certificates and the register print it: one line of 1–120 characters, trimmed. */
+function personNameField(messages: { empty: string; tooLong: string }) {
+  return z
+    .string({ error: messages.empty })
+    .trim()
+    .min(1, { error: messages.empty })
+    .max(120, { error: messages.tooLong })
+    .regex(oneLineTextPattern, { error: oneLineTextMessage });
+}
+
+/** Another member's name, as an administrator types it (invitations, "Correct name"). */
+export const memberNameField = personNameField({ empty: "Enter the member's name.", tooLong: "Keep the name under 120 characters." });
+
+/** A member's own name (accepting an invitation, Your account). */
+const ownNameField = personNameField({ empty: "Enter your name.", tooLong: "Keep your name under 120 characters." });
+
 export const invitationSchema = z.strictObject({
   email: z.email({ error: "Enter an e-mail address like name@example.org." }).max(254),
-  name: z
-    .string()
-    .trim()
-    .min(1, { error: "Enter the member's name." })
-    .max(120, { error: "Keep the name under 120 characters." })
-    .regex(oneLineTextPattern, { error: oneLineTextMessage }),
+  name: memberNameField,
   role: z.enum(roles, { error: "Choose athlete, coach or admin." }),
 });
 export type InvitationFormInput = z.input<typeof invitationSchema>;
@@ -23,14 +34,6 @@ const newPasswordField = z
   .string({ error: "Choose a password." })
   .min(minPasswordLength, { error: `Use at least ${minPasswordLength} characters.` })
   .refine(fitsPasswordHash, { error: newPasswordTooLongMessage });
-
-/** A member's own name, as certificates and the register will print it. */
-const ownNameField = z
-  .string({ error: "Enter your name." })
-  .trim()
-  .min(1, { error: "Enter your name." })
-  .max(120, { error: "Keep your name under 120 characters." })
-  .regex(oneLineTextPattern, { error: oneLineTextMessage });
 
 export const acceptInvitationSchema = z.strictObject({
   token: z.string({ error: "Open the link from the invitation e-mail." }).regex(oneTimeTokenPattern, {
