@@ -3,6 +3,7 @@ import * as createLearning from "@/migrations/20261202-0002-create-learning";
 import * as createFleet from "@/migrations/20261202-0003-create-fleet";
 import * as createCertification from "@/migrations/20261202-0004-create-certification";
 import * as indexRosterReads from "@/migrations/20261202-0005-index-roster-reads";
+import * as certificateReplacement from "@/migrations/20261204-0006-certificate-replacement";
 
 export interface MigrationModule {
   up: typeof createFoundation.up;
@@ -16,4 +17,5 @@ export const migrationList: { name: string; module: MigrationModule }[] = [
   { name: "20261202-0003-create-fleet", module: createFleet },
   { name: "20261202-0004-create-certification", module: createCertification },
   { name: "20261202-0005-index-roster-reads", module: indexRosterReads },
+  { name: "20261204-0006-certificate-replacement", module: certificateReplacement },
 ];

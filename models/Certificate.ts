@@ -42,6 +42,8 @@ export class Certificate extends Model<InferAttributes<Certificate>, InferCreati
   declare revokedAt: CreationOptional<Date | null>;
   declare revokedById: CreationOptional<number | null>;
   declare revokeReason: CreationOptional<string | null>;
+  /** Set when the certificate was reissued under a corrected name: the id of its replacement. */
+  declare replacedById: CreationOptional<string | null>;
 
   static initModel(sequelize: Sequelize): typeof Certificate {
     Certificate.init(
@@ -71,6 +73,7 @@ export class Certificate extends Model<InferAttributes<Certificate>, InferCreati
         revokedAt: { type: DataTypes.DATE, allowNull: true },
         revokedById: { type: DataTypes.INTEGER, allowNull: true },
         revokeReason: { type: DataTypes.TEXT, allowNull: true },
+        replacedById: { type: DataTypes.STRING(36), allowNull: true },
       },
       { sequelize, tableName: "certificates", timestamps: false },
     );

@@ -21,6 +21,8 @@ export interface IssueInput {
   issuedOn: string;
   expiresOn: string;
   now: Date;
+  /** Set when an admin reissues a certificate under a corrected name: they, not the coach, issue it. */
+  reissue?: { byId: number; replacesSerial: string };
 }
 
 /**
@@ -62,7 +64,7 @@ export async function issueCertificate(input: IssueInput, transaction: Transacti
   await recordAudit(
     {
       clubId: context.club.id,
-      actorId: input.signedOffBy.id,
+      actorId: input.reissue ? input.reissue.byId : input.signedOffBy.id,
       action: "certificate.issued",
       subjectType: "certificate",
       subjectId: certificate.id,
@@ -71,6 +73,7 @@ export async function issueCertificate(input: IssueInput, transaction: Transacti
         serial: certificate.serial,
         kind: input.kind,
         moduleSlug: input.moduleSlug,
+        ...(input.reissue && { replaces: input.reissue.replacesSerial }),
       },
     },
     transaction,

@@ -33,6 +33,8 @@ export interface CertificateSummary {
   status: CertificateStatus;
   revokedAt: string | null;
   revokeReason: string | null;
+  /** Set when it was reissued under a corrected name: the id of the certificate that replaced it. */
+  replacedById: string | null;
   verifyUrl: string;
   pdfUrl: string;
 }
@@ -71,6 +73,7 @@ export function summarise(certificate: Certificate, today: string, suspended: bo
     ),
     revokedAt: certificate.revokedAt?.toISOString() ?? null,
     revokeReason: certificate.revokeReason,
+    replacedById: certificate.replacedById,
     verifyUrl: verifyUrlFor(certificate.verificationCode),
     pdfUrl: `/api/certificates/${certificate.id}/pdf`,
   };
@@ -144,23 +147,38 @@ export async function certificatePdfFor(actor: Actor, certificateId: string): Pr
   return { bytes: await renderStoredCertificate(certificate), fileName: certificateFileName(certificate) };
 }
 
+/** One certificate as its club's admin manages it. */
+export interface AdminCertificate extends CertificateSummary {
+  revokedByName: string | null;
+  revokedOn: string | null;
+  /** The member's name today, which may differ from the one the certificate was issued to. */
+  athleteCurrentName: string;
+  /** The certificate that replaced this one, when it was reissued under a corrected name. */
+  replacedBy: { id: string; serial: string } | null;
+  /** The club's day, for deciding whether the certificate still holds. */
+  today: string;
+}
+
 /** One certificate for an admin of its club, with who revoked it, on which day and why. */
-export async function certificateForAdmin(
-  actor: Actor,
-  certificateId: string,
-): Promise<CertificateSummary & { revokedByName: string | null; revokedOn: string | null }> {
+export async function certificateForAdmin(actor: Actor, certificateId: string): Promise<AdminCertificate> {
   await databaseReady();
   const certificate = await Certificate.findByPk(certificateId);
   assertVisible(!!certificate && canManageClub(actor, certificate.clubId));
-  const [suspended, revoker, { timeZone }] = await Promise.all([
+  const [suspended, revoker, athlete, replacement, { timeZone }] = await Promise.all([
     suspendedAthletes([certificate.athleteId]),
     certificate.revokedById ? User.findByPk(certificate.revokedById) : null,
+    User.findByPk(certificate.athleteId, { attributes: ["id", "name"] }),
+    certificate.replacedById ? Certificate.findByPk(certificate.replacedById, { attributes: ["id", "serial"] }) : null,
     settingsForClub(certificate.clubId),
   ]);
+  const today = isoDateOf(new Date(), timeZone);
   return {
-    ...summarise(certificate, isoDateOf(new Date(), timeZone), suspended.has(certificate.athleteId)),
+    ...summarise(certificate, today, suspended.has(certificate.athleteId)),
     revokedByName: revoker?.name ?? null,
     revokedOn: certificate.revokedAt ? isoDateOf(certificate.revokedAt, timeZone) : null,
+    athleteCurrentName: athlete?.name ?? certificate.athleteName,
+    replacedBy: replacement ? { id: replacement.id, serial: replacement.serial } : null,
+    today,
   };
 }
 
@@ -229,6 +247,8 @@ export interface PublicVerification {
   issuedOn: string;
   expiresOn: string;
   revokedOn: string | null;
+  /** Revoked because the club reissued it under a corrected name (the new name is not shown). */
+  replaced: boolean;
   code: string;
   /** For the Open Badges credential only; never shown on the page. */
   clubName: string;
@@ -260,6 +280,7 @@ export async function verifyCode(code: string): Promise<PublicVerification | nul
     issuedOn: certificate.issuedOn,
     expiresOn: certificate.expiresOn,
     revokedOn: certificate.revokedAt ? isoDateOf(certificate.revokedAt, timeZone) : null,
+    replaced: certificate.replacedById !== null,
     code,
     clubName: club?.name ?? "",
     clubSlug: club?.slug ?? "",

@@ -4,6 +4,8 @@ import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { recordAudit } from "@/lib/data/audit";
 import { inviteMembers, openInvitationWhere, renameUser } from "@/lib/data/users";
+import { countUnderEarlierName } from "@/lib/data/certificate-reissue";
+import { clubToday } from "@/lib/data/club-settings";
 import type { MemberSummary } from "@/lib/data/members";
 import { assertAllowed, assertVisible, canChangeMember, canManageClub, type Actor } from "@/lib/auth/permissions";
 import type { Role, UserStatus } from "@/lib/auth/roles";
@@ -62,17 +64,22 @@ export async function changeMemberRole(actor: Actor, memberId: number, role: Rol
 
 /**
  * An admin corrects how another member's name is written (a typo in an invitation or a roster file).
- * Certificates already issued keep the name they were issued to; new ones, the roster and the register's
- * member column use the new one. Sessions go on: nothing about what the member may do changed.
+ * Certificates already issued keep the name they were issued to (the count of those still holding is
+ * returned, for reissuing them); new ones, the roster and the register's member column use the new one. Sessions go on: nothing about what the member may do changed.
  */
-export async function renameMember(actor: Actor, memberId: number, name: string): Promise<MemberSummary> {
+export async function renameMember(
+  actor: Actor,
+  memberId: number,
+  name: string,
+): Promise<MemberSummary & { certificatesUnderEarlierName: number }> {
   await databaseReady();
   const trimmed = name.trim();
+  const today = await clubToday(actor.clubId);
   return writeTransaction(async (transaction) => {
     if (memberId === actor.id && canManageClub(actor, actor.clubId)) throw new ForbiddenError("Correct your own name under Your account.");
     const member = await memberToChange(actor, memberId, transaction);
     await renameUser(member, trimmed, actor.id, transaction);
-    return toSummary(member);
+    return { ...toSummary(member), certificatesUnderEarlierName: await countUnderEarlierName(member.id, trimmed, today, transaction) };
   });
 }
 

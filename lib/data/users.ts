@@ -4,6 +4,8 @@ import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { selectRows } from "@/lib/data/sql";
 import { recordAudit } from "@/lib/data/audit";
+import { countUnderEarlierName } from "@/lib/data/certificate-reissue";
+import { clubToday } from "@/lib/data/club-settings";
 import type { Actor } from "@/lib/auth/permissions";
 import { assertAllowed, canManageClub } from "@/lib/auth/permissions";
 import { hashPassword, passwordProblem, verifyAgainstDecoy, verifyPassword } from "@/lib/auth/password";
@@ -388,16 +390,18 @@ export async function renameUser(user: User, name: string, actorId: number, tran
 
 /**
  * A member corrects their own name. Certificates already issued keep the name they were issued to (the
- * register is a record of what was signed); the roster, new certificates and the header use the new one.
+ * register is a record of what was signed; an admin can reissue those still holding, whose count is
+ * returned); the roster, new certificates and the header use the new one.
  */
-export async function changeOwnName(actor: Actor, name: string): Promise<{ name: string }> {
+export async function changeOwnName(actor: Actor, name: string): Promise<{ name: string; certificatesUnderEarlierName: number }> {
   await databaseReady();
   const trimmed = name.trim();
+  const today = await clubToday(actor.clubId);
   return writeTransaction(async (transaction) => {
     const user = await User.findByPk(actor.id, { transaction });
     if (!user || user.status !== "active") throw new NotFoundError("Your account is no longer active. Ask your club administrator.");
     await renameUser(user, trimmed, user.id, transaction);
-    return { name: trimmed };
+    return { name: trimmed, certificatesUnderEarlierName: await countUnderEarlierName(user.id, trimmed, today, transaction) };
   });
 }
 

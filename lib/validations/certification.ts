@@ -2,6 +2,7 @@ import { z } from "zod";
 import { kebabCaseSchema, type ChecklistItem } from "@/lib/content/module-schema";
 import { checklistVerdicts } from "@/lib/clearance/checklist";
 import { maxModuleSlugLength } from "@/lib/validations/learning";
+import { memberNameField } from "@/lib/validations/members";
 import { multiLineTextMessage, multiLineTextPattern, oneLineTextPattern } from "@/lib/validations/text";
 
 /** An athlete asks for a practical sign-off; coachId null means "any coach of the club". */
@@ -161,3 +162,9 @@ export function queryObject(params: URLSearchParams | Record<string, string | st
   }
   return result;
 }
+
+/**
+ * An admin reissues an athlete's certificates under their corrected name. `name` is the name the admin
+ * confirmed on the page; the server refuses if the member's name has changed since.
+ */
+export const reissueCertificatesSchema = z.strictObject({ name: memberNameField });

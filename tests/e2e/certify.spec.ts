@@ -3,6 +3,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { expect, test, type Browser, type Locator, type Page } from "@playwright/test";
+import AxeBuilder from "@axe-core/playwright";
 import { demo, openNewestMailTo, signIn } from "./support/auth";
 
 /** Seeded by lib/seed/demo-certification.ts: every quiz passed, no sign-off yet. */
@@ -218,4 +219,78 @@ test("the grip-cleaning practical warns about the cleaning chemicals; the riggin
   await page.goto("/learn/setting-inboard/practical");
   await expect(page.getByText("A collar that is not seated in a click")).toBeVisible();
   await expect(page.getByTestId("cleaning-cautions")).toHaveCount(0);
+});
+
+test("after a name correction the admin reissues the current certificates; the printed ones check as replaced", async ({ page }) => {
+  // Elin (lib/seed/demo-certification.ts) holds two module passes signed off about 40 days ago.
+  const elinRow = "member-row-elin@lantern-reach.example";
+  async function rename(from: string, to: string) {
+    await page.goto("/club/members");
+    await page
+      .getByTestId(elinRow)
+      .getByRole("button", { name: `Correct name of ${from}` })
+      .click();
+    const dialog = page.getByTestId("rename-dialog");
+    await dialog.getByLabel("Name").fill(to);
+    await dialog.getByRole("button", { name: "Save name" }).click();
+    await expect(page.getByTestId("members-status")).toContainText(
+      `Name saved: ${to}. 2 current certificates still carry the earlier name: reissue them on the athlete's page.`,
+    );
+    await page
+      .getByTestId("members-status")
+      .getByRole("link", { name: `Reissue ${to}'s certificates` })
+      .click();
+    await expect(page).toHaveURL(/\/roster\/athletes\/\d+#certificates$/);
+  }
+  const wcag = ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"];
+  async function reissue(from: string, to: string, scan = false): Promise<[string, string][]> {
+    const panel = page.getByTestId("reissue-panel");
+    await expect(panel).toContainText(`2 current certificates carry an earlier spelling (“${from}”). Reissue them under “${to}”`);
+    if (scan) expect((await new AxeBuilder({ page }).withTags(wcag).analyze()).violations).toEqual([]);
+    await panel.getByRole("button", { name: "Reissue under the current name…" }).click();
+    const dialog = page.getByTestId("reissue-dialog");
+    await expect(dialog.getByRole("button", { name: "Not now" })).toBeFocused();
+    if (scan) expect((await new AxeBuilder({ page }).include("dialog[open]").withTags(wcag).analyze()).violations).toEqual([]);
+    await dialog.getByRole("button", { name: "Yes, reissue" }).click();
+    const status = page.getByTestId("reissue-status");
+    await expect(status).toContainText(`Reissued under ${to}: `);
+    await expect(panel).toHaveCount(0);
+    const pairs = [...((await status.textContent()) ?? "").matchAll(/([A-Z0-9-]+) → ([A-Z0-9-]+)/g)].map((match) => [match[1], match[2]]);
+    expect(pairs).toHaveLength(2);
+    return pairs as [string, string][];
+  }
+
+  await signIn(page, demo.admin);
+  await rename("Elin Marchetti", "Elin Marchetti-Vos");
+  // Each certificate's page says the name was corrected and where to reissue.
+  await page.getByTestId("athlete-certificates").getByRole("link", { name: "Manage" }).first().click();
+  await expect(page.getByTestId("name-corrected")).toContainText("Issued to “Elin Marchetti”; the member is now “Elin Marchetti-Vos”.");
+  await page.getByTestId("name-corrected").getByRole("link", { name: "on the athlete's page" }).click();
+  await expect(page).toHaveURL(/\/roster\/athletes\/\d+#certificates$/);
+  const pairs = await reissue("Elin Marchetti", "Elin Marchetti-Vos", true);
+  const list = page.getByTestId("athlete-certificates");
+  const [oldSerial, newSerial] = pairs[0]!;
+  const oldItem = list.getByRole("listitem").filter({ hasText: `${oldSerial}:` });
+  await expect(oldItem).toContainText(`revoked: Replaced by ${newSerial}, reissued under the corrected name Elin Marchetti-Vos.`);
+  await expect(oldItem).toContainText("issued to Elin Marchetti");
+  await expect(list.getByRole("listitem").filter({ hasText: `${newSerial}:` })).toContainText("Valid");
+
+  // The old certificate's page points to its replacement, whose record carries the new name.
+  await oldItem.getByRole("link", { name: "Manage" }).click();
+  await expect(page.getByTestId("certificate-status")).toContainText("Revoked");
+  const publicCheck = await page.getByRole("link", { name: "Public check page" }).getAttribute("href");
+  await page.getByTestId("replaced-by").click();
+  await expect(page.getByRole("heading", { level: 1 })).toContainText(`Certificate ${newSerial}`);
+  await expect(page.getByTestId("certificate-record")).toContainText("Elin Marchetti-Vos");
+  await expect(page.getByTestId("certificate-status")).toContainText("Valid");
+
+  // Whoever scans the printed copy learns it was replaced, but not the new name.
+  await page.goto(new URL(publicCheck!).pathname);
+  await expect(page.getByTestId("verify-status")).toContainText("replaced this certificate with one reissued under a corrected name");
+  await expect(page.getByTestId("verify-details")).toContainText("Elin Marchetti");
+  await expect(page.getByTestId("verify-details")).not.toContainText("Marchetti-Vos");
+
+  // Put the name back for the other specs, reissuing once more.
+  await rename("Elin Marchetti-Vos", "Elin Marchetti");
+  await reissue("Elin Marchetti-Vos", "Elin Marchetti");
 });

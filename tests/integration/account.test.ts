@@ -22,6 +22,7 @@ const { newToken, hashToken } = await import("@/lib/auth/tokens");
 const { signInFailureLimit } = await import("@/lib/auth/throttle");
 const { AuditEvent, Certificate, SignInLink, User } = await import("@/models");
 const { listOutbox } = await import("@/lib/mail/outbox");
+const { clubToday } = await import("@/lib/data/club-settings");
 const { changeOwnNameAction, changePasswordAction } = await import("@/app/(account)/account/actions");
 
 beforeAll(async () => {
@@ -147,15 +148,22 @@ describe("correcting your own name", () => {
     const femi = (await User.findOne({ where: { email } }))!;
     const issuedBefore = await Certificate.findAll({ where: { athleteId: femi.id } });
     expect(issuedBefore.length).toBeGreaterThan(0);
+    const today = await clubToday(femi.clubId);
+    const holding = issuedBefore.filter((certificate) => certificate.revokedAt === null && certificate.expiresOn > today).length;
+    expect(holding).toBeGreaterThan(1);
     const outcome = await asCookie(cookie, () => changeOwnNameAction({ name: "  Femi Ashdown-Okoro  " }));
-    expect(outcome).toEqual({ ok: true, message: "Name saved.", data: { name: "Femi Ashdown-Okoro" } });
+    expect(outcome).toEqual({
+      ok: true,
+      message: `Name saved. ${holding} current certificates carry your earlier name: a club administrator can reissue them under this one.`,
+      data: { name: "Femi Ashdown-Okoro" },
+    });
     expect(await asCookie(cookie, () => currentActor())).toMatchObject({ name: "Femi Ashdown-Okoro" });
     const issuedAfter = await Certificate.findAll({ where: { athleteId: femi.id } });
     expect(issuedAfter.map((certificate) => certificate.athleteName)).toEqual(issuedBefore.map((certificate) => certificate.athleteName));
     const audit = await AuditEvent.findOne({ where: { action: "member.renamed", subjectId: String(femi.id) } });
     expect(audit?.details).toEqual({ from: femi.name, to: "Femi Ashdown-Okoro" });
     const again = await asCookie(cookie, () => changeOwnNameAction({ name: "Femi Ashdown-Okoro" }));
-    expect(again).toMatchObject({ ok: true, message: "Your name was already written that way." });
+    expect(again).toMatchObject({ ok: true, message: expect.stringMatching(/^Your name was already written that way\. /) });
     expect(await AuditEvent.count({ where: { action: "member.renamed", subjectId: String(femi.id) } })).toBe(1);
   });
 

@@ -71,6 +71,7 @@ interface Fixtures {
   otherClubAthleteId: number;
   /** Athletes of the demo club, one per table that changes a member, so no table's control changes another's subject. */
   lenaId: number;
+  elinId: number;
   hamishId: number;
   kitId: number;
   devId: number;
@@ -100,9 +101,11 @@ beforeAll(async () => {
   cookies.admin = await sessionCookieFor("admin@lantern-reach.example", demoPassword);
   await sessionCookieFor("admin@brackwater.example", secondClubPassword);
 
-  const [admin, lena, hamish, kit, dev, jonah, femi] = await Promise.all(
-    ["admin", "lena", "hamish", "kit", "dev", "jonah", "femi"].map(homeUser),
+  const [admin, lena, hamish, kit, dev, jonah, femi, elin] = await Promise.all(
+    ["admin", "lena", "hamish", "kit", "dev", "jonah", "femi", "elin"].map(homeUser),
   );
+  // Elin's two module passes hold under the seeded name; correcting it gives reissueCertificatesAction work to do.
+  await elin!.update({ name: "Elin Corrected-Spelling" });
   const otherAthlete = (await User.findOne({ where: { email: "athlete@brackwater.example" } }))!;
   // The second club has no fleet: one boat and one oar set of its own, for "a record of another club".
   const otherBoat = await Boat.create({
@@ -160,6 +163,7 @@ beforeAll(async () => {
     otherClubOarSetId: otherSet.id,
     otherClubAthleteId: otherAthlete.id,
     lenaId: lena!.id,
+    elinId: elin!.id,
     hamishId: hamish!.id,
     kitId: kit!.id,
     devId: dev!.id,
@@ -812,6 +816,23 @@ describe("clearance and sign-offs (as a coach)", () => {
     as: "coach",
     cases: () => pair(fx.lenaId, validReason(), athleteIdVariants(fx.lenaId), reasonVariants(validReason())),
     valid: () => [fx.lenaId, validReason()],
+  });
+
+  const validReissue = () => ({ name: "Elin Corrected-Spelling" });
+  table("reissueCertificatesAction", {
+    action: athleteActions.reissueCertificatesAction,
+    as: "admin",
+    cases: () =>
+      pair(
+        fx.elinId,
+        validReissue(),
+        athleteIdVariants(fx.elinId),
+        objectVariants(validReissue(), "name", { name: { kind: "name" } }, [
+          v("name too long", { name: "n".repeat(121) }, "name"),
+          v("name on two lines", { name: "Elin\nCorrected-Spelling" }, "name"),
+        ]),
+      ),
+    valid: () => [fx.elinId, validReissue()],
   });
 
   const validLift = () => ({ note: "Talked it through; rigs with a partner for a week." });

@@ -698,6 +698,13 @@ actionGuardRows.push(
     why: "Coaches and admins of the athlete's club lift a suspension. Lena's clearance is not suspended, so they pass every guard and are told so (409): nothing changes.",
   },
   {
+    file: "app/(coach)/roster/athletes/[id]/actions.ts",
+    action: "reissueCertificatesAction",
+    args: ({ homeAthleteId }) => [homeAthleteId, { name: "Lena Fairbrother" }],
+    expect: { anonymous: 401, athlete: 404, otherAthlete: 404, coach: 403, otherCoach: 404, admin: 409, otherAdmin: 404 },
+    why: "Admins of the athlete's club reissue certificates under a corrected name. Lena's passes have all expired, so the admin passes every guard and is told there is nothing to reissue (409). Her club's coach may see her record but not reissue (403); everyone else is told she does not exist.",
+  },
+  {
     file: "app/(coach)/roster/sign-offs/[id]/actions.ts",
     action: "recordAssessmentAction",
     args: ({ homeDecidedSignOffId }) => [homeDecidedSignOffId, settingInboardVerdicts],

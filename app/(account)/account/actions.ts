@@ -31,9 +31,14 @@ export async function changeOwnNameAction(input: unknown): Promise<ActionResult<
     const actor = await requireActor();
     const parsed = parseActionInput(changeOwnNameSchema, input);
     if (!parsed.success) return { ok: false, message: "Check your name.", fieldErrors: parsed.fieldErrors };
-    const { name } = await changeOwnName(actor, parsed.data.name);
+    const { name, certificatesUnderEarlierName: outdated } = await changeOwnName(actor, parsed.data.name);
     revalidatePath("/", "layout");
-    return { ok: true, message: name === actor.name ? "Your name was already written that way." : "Name saved.", data: { name } };
+    const saved = name === actor.name ? "Your name was already written that way." : "Name saved.";
+    const reissue =
+      outdated === 0
+        ? ""
+        : ` ${outdated === 1 ? "One current certificate carries" : `${outdated} current certificates carry`} your earlier name: a club administrator can reissue ${outdated === 1 ? "it" : "them"} under this one.`;
+    return { ok: true, message: `${saved}${reissue}`, data: { name } };
   } catch (error) {
     return actionFailure(error);
   }

@@ -41,7 +41,7 @@ export function ChangeNameForm({ name }: { name: string }) {
       <TextField
         label="Your name"
         autoComplete="name"
-        hint="As new certificates and the induction register will print it. Certificates already issued keep the name they were issued to."
+        hint="As new certificates and the induction register will print it. Certificates already issued keep the name they were issued to until a club administrator reissues them."
         error={errors.name?.message}
         {...form.register("name")}
       />

@@ -36,7 +36,7 @@ export async function changeMemberRoleAction(input: unknown): Promise<ActionResu
 }
 
 /** An admin corrects how another member's name is written; issued certificates keep theirs. */
-export async function renameMemberAction(input: unknown): Promise<ActionResult<MemberSummary>> {
+export async function renameMemberAction(input: unknown): Promise<ActionResult<MemberSummary & { reissueHref: string | null }>> {
   try {
     const actor = await requireActor();
     assertMayManageClub(actor);
@@ -45,10 +45,14 @@ export async function renameMemberAction(input: unknown): Promise<ActionResult<M
     const { memberId, name } = parsed.data;
     const member = await lookUpBy("memberId", "member of your club", () => renameMember(actor, memberId, name));
     revalidatePath(membersPath);
+    const { certificatesUnderEarlierName: outdated, ...summary } = member;
     return {
       ok: true,
-      message: `Name saved: ${member.name}. Certificates already issued keep the name they were issued to.`,
-      data: member,
+      message:
+        outdated === 0
+          ? `Name saved: ${member.name}.`
+          : `Name saved: ${member.name}. ${outdated === 1 ? "One current certificate still carries" : `${outdated} current certificates still carry`} the earlier name: reissue ${outdated === 1 ? "it" : "them"} on the athlete's page.`,
+      data: { ...summary, reissueHref: outdated === 0 ? null : `/roster/athletes/${member.id}#certificates` },
     };
   } catch (error) {
     return actionFailure(error);

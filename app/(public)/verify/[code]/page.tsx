@@ -15,6 +15,9 @@ const statusText = {
   suspended: "This clearance is suspended by a coach.",
 } as const;
 
+const replacedText =
+  "The club replaced this certificate with one reissued under a corrected name, so this copy no longer counts. Ask the club for the current one.";
+
 const statusClasses = {
   valid: "border-reed-600 bg-reed-100 text-reed-800",
   expired: "border-signal-600 bg-signal-100 text-signal-800",
@@ -40,7 +43,7 @@ export default async function VerifyPage({ params }: { params: Promise<{ code: s
           {label}
         </p>
         <p className="mt-1">
-          {statusText[verification.status]}
+          {verification.replaced ? replacedText : statusText[verification.status]}
           {verification.status === "revoked" && verification.revokedOn ? ` Revoked on ${formatLongDate(verification.revokedOn)}.` : ""}
         </p>
       </div>

@@ -1,5 +1,6 @@
 "use client";
 
+import Link from "next/link";
 import { useState } from "react";
 import { useRouter } from "next/navigation";
 import {
@@ -140,7 +141,7 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
   const [newName, setNewName] = useState("");
   const [nameError, setNameError] = useState<string | undefined>(undefined);
   const [busy, setBusy] = useState(false);
-  const [outcome, setOutcome] = useState<{ ok: boolean; message?: string } | null>(null);
+  const [outcome, setOutcome] = useState<{ ok: boolean; message?: string; link?: { href: string; label: string } } | null>(null);
 
   async function run(action: () => Promise<{ ok: boolean; message?: string }>) {
     setBusy(true);
@@ -163,7 +164,9 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
       return;
     }
     setPending(null);
-    setOutcome(result);
+    const reissueHref = result.ok ? result.data?.reissueHref : null;
+    const renamed = result.ok ? (result.data?.name ?? member.name) : member.name;
+    setOutcome(reissueHref ? { ...result, link: { href: reissueHref, label: `Reissue ${renamed}'s certificates` } } : result);
     if (result.ok) router.refresh();
   }
 
@@ -217,7 +220,15 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
         Showing {shown} of {members.length} members
       </p>
       <LiveStatus testId="members-status">
-        {outcome?.message && <Notice tone={outcome.ok ? "success" : "error"} title={outcome.message} />}
+        {outcome?.message && (
+          <Notice tone={outcome.ok ? "success" : "error"} title={outcome.message}>
+            {outcome.link && (
+              <Link href={outcome.link.href} className="underline" data-testid="members-status-link">
+                {outcome.link.label}
+              </Link>
+            )}
+          </Notice>
+        )}
       </LiveStatus>
       <div className="relative overflow-x-auto rounded-lg bg-white shadow-sm">
         <table className="w-full min-w-[40rem] text-left text-sm" data-testid="members-table">
@@ -309,7 +320,7 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
         open={pending?.kind === "rename"}
         onClose={() => setPending(null)}
         title={pending ? `Correct the name of ${pending.member.name}` : "Correct name"}
-        description="As new certificates and the induction register will print it. Certificates already issued keep the name they were issued to."
+        description="As new certificates and the induction register will print it. Certificates already issued keep the name they were issued to until you reissue them from the athlete's page."
         testId="rename-dialog"
       >
         <form

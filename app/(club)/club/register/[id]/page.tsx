@@ -7,6 +7,8 @@ import { requirePageActor } from "@/lib/auth/session";
 import { certificateForAdmin } from "@/lib/data/certificates";
 import { orNotFound } from "@/lib/http/page-not-found";
 import { formatLongDate } from "@/lib/clearance/dates";
+import { Notice } from "@/components/ui/notice";
+import { certificatesUnderEarlierName } from "@/lib/certificates/reissue";
 import { RevokeCertificateForm } from "./_components/revoke-form";
 
 export const metadata: Metadata = { title: "Certificate" };
@@ -16,6 +18,12 @@ export default async function CertificatePage({ params }: { params: Promise<{ id
   const { id } = await params;
   const actor = await requirePageActor("admin", `/club/register/${id}`);
   const certificate = await orNotFound(certificateForAdmin(actor, id));
+  const nameCorrected =
+    certificatesUnderEarlierName(
+      [{ ...certificate, revoked: certificate.revokedAt !== null }],
+      certificate.athleteCurrentName,
+      certificate.today,
+    ).length > 0;
   return (
     <div className="space-y-6">
       <PageTitle lead={certificate.title}>Certificate {certificate.serial}</PageTitle>
@@ -34,6 +42,18 @@ export default async function CertificatePage({ params }: { params: Promise<{ id
             <PendingMark />
           </Link>
         </dd>
+        {certificate.replacedBy && (
+          <>
+            <dt className="font-semibold">Replaced by</dt>
+            <dd>
+              <Link href={`/club/register/${certificate.replacedBy.id}`} className="underline" data-testid="replaced-by">
+                Certificate {certificate.replacedBy.serial}
+                <PendingMark />
+              </Link>
+              , reissued under a corrected name
+            </dd>
+          </>
+        )}
         <dt className="font-semibold">Signed off by</dt>
         <dd>{certificate.signedOffByName}</dd>
         <dt className="font-semibold">Issued</dt>
@@ -49,6 +69,17 @@ export default async function CertificatePage({ params }: { params: Promise<{ id
           </>
         )}
       </dl>
+      {nameCorrected && (
+        <Notice tone="warning" title="The member's name was corrected" testId="name-corrected">
+          <p>
+            Issued to “{certificate.athleteName}”; the member is now “{certificate.athleteCurrentName}”. Reissue it under the current name{" "}
+            <Link href={`/roster/athletes/${certificate.athleteId}#certificates`} className="underline">
+              on the athlete&apos;s page
+            </Link>
+            .
+          </p>
+        </Notice>
+      )}
       <p className="flex flex-wrap gap-4">
         <a href={certificate.pdfUrl} className="font-semibold text-river-700 underline">
           Download the PDF

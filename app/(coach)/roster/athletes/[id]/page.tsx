@@ -9,7 +9,9 @@ import { athleteRecordFor } from "@/lib/data/clearance";
 import { orNotFound } from "@/lib/http/page-not-found";
 import { expiryVerb, formatLongDate, lastValidDay } from "@/lib/clearance/dates";
 import { formatInstantInZone } from "@/lib/care/calendar";
+import { certificatesUnderEarlierName, sameName } from "@/lib/certificates/reissue";
 import { SuspensionControl } from "./_components/suspension-forms";
+import { ReissueCertificatesForm } from "./_components/reissue-form";
 
 export const metadata: Metadata = { title: "Athlete" };
 
@@ -29,6 +31,11 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
   const { clearance } = record.standing;
   const activeSuspension = record.suspensions.find((entry) => entry.liftedAt === null);
   const sectionClasses = "space-y-3 rounded-lg bg-white p-4 shadow-sm";
+  const underEarlierName = certificatesUnderEarlierName(
+    record.certificates.map((certificate) => ({ ...certificate, revoked: certificate.revokedAt !== null })),
+    record.athlete.name,
+    today,
+  );
 
   return (
     <div className="space-y-6">
@@ -161,10 +168,24 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
         )}
       </section>
 
-      <section aria-labelledby="certificates-heading" className={sectionClasses}>
+      <section id="certificates" aria-labelledby="certificates-heading" className={`${sectionClasses} scroll-mt-24`}>
         <h2 id="certificates-heading" className="text-lg font-semibold">
           Certificates ({record.certificates.length})
         </h2>
+        {record.viewer.isAdmin ? (
+          <ReissueCertificatesForm
+            athleteId={record.athlete.id}
+            currentName={record.athlete.name}
+            outdated={underEarlierName.map(({ serial, athleteName }) => ({ serial, athleteName }))}
+          />
+        ) : (
+          underEarlierName.length > 0 && (
+            <p data-testid="reissue-note">
+              {underEarlierName.length === 1 ? "One current certificate carries" : `${underEarlierName.length} current certificates carry`}{" "}
+              an earlier spelling of the name: a club administrator can reissue them under “{record.athlete.name}”.
+            </p>
+          )
+        )}
         {record.certificates.length === 0 ? (
           <p>None issued yet.</p>
         ) : (
@@ -178,6 +199,7 @@ export default async function AthletePage({ params }: { params: Promise<{ id: st
                   <span className="block text-sm text-slate-700">
                     Issued {formatLongDate(certificate.issuedOn)} · {expiryVerb(certificate.expiresOn, today)}{" "}
                     {formatLongDate(certificate.expiresOn)} · {certificate.signedOffByName}
+                    {!sameName(certificate.athleteName, record.athlete.name) && ` · issued to ${certificate.athleteName}`}
                     {certificate.revokeReason && ` · revoked: ${certificate.revokeReason}`}
                   </span>
                 </span>
