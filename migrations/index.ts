@@ -4,6 +4,7 @@ import * as createFleet from "@/migrations/20261202-0003-create-fleet";
 import * as createCertification from "@/migrations/20261202-0004-create-certification";
 import * as indexRosterReads from "@/migrations/20261202-0005-index-roster-reads";
 import * as certificateReplacement from "@/migrations/20261204-0006-certificate-replacement";
+import * as emailChanges from "@/migrations/20261204-0007-email-changes";
 
 export interface MigrationModule {
   up: typeof createFoundation.up;
@@ -18,4 +19,5 @@ export const migrationList: { name: string; module: MigrationModule }[] = [
   { name: "20261202-0004-create-certification", module: createCertification },
   { name: "20261202-0005-index-roster-reads", module: indexRosterReads },
   { name: "20261204-0006-certificate-replacement", module: certificateReplacement },
+  { name: "20261204-0007-email-changes", module: emailChanges },
 ];

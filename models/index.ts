@@ -3,6 +3,7 @@ import { AuditEvent } from "@/models/AuditEvent";
 import { Certificate } from "@/models/Certificate";
 import { ClearanceSuspension } from "@/models/ClearanceSuspension";
 import { Club } from "@/models/Club";
+import { EmailChange } from "@/models/EmailChange";
 import { EvidencePhoto } from "@/models/EvidencePhoto";
 import { Invitation } from "@/models/Invitation";
 import { LessonRead } from "@/models/LessonRead";
@@ -17,7 +18,7 @@ import { CleaningRecord } from "@/models/CleaningRecord";
 import { OarSet } from "@/models/OarSet";
 import { RigPlan } from "@/models/RigPlan";
 
-export { AuditEvent, Club, Invitation, LessonRead, QuizAttempt, SignInLink, User };
+export { AuditEvent, Club, EmailChange, Invitation, LessonRead, QuizAttempt, SignInLink, User };
 export { Boat, BoatOarSet, CleaningDigest, CleaningRecord, OarSet, RigPlan };
 export { Certificate, ClearanceSuspension, EvidencePhoto, PracticalAssessment };
 
@@ -30,6 +31,7 @@ export function initModels(sequelize: Sequelize): void {
   User.initModel(sequelize);
   Invitation.initModel(sequelize);
   SignInLink.initModel(sequelize);
+  EmailChange.initModel(sequelize);
   AuditEvent.initModel(sequelize);
   LessonRead.initModel(sequelize);
   QuizAttempt.initModel(sequelize);
@@ -42,6 +44,7 @@ export function initModels(sequelize: Sequelize): void {
   User.belongsTo(Club, { foreignKey: "clubId" });
   Invitation.belongsTo(Club, { foreignKey: "clubId" });
   SignInLink.belongsTo(User, { foreignKey: "userId" });
+  EmailChange.belongsTo(User, { foreignKey: "userId" });
   AuditEvent.belongsTo(User, { foreignKey: "actorId", as: "actor" });
   LessonRead.belongsTo(User, { foreignKey: "userId" });
   QuizAttempt.belongsTo(User, { foreignKey: "userId" });

@@ -7,5 +7,5 @@ export NEXT_TELEMETRY_DISABLED=1
 export SLIPWAY_SEED_SECOND_CLUB=1
 rm -rf "$SLIPWAY_DATA_DIR"
 mkdir -p "$SLIPWAY_DATA_DIR"
-SLIPWAY_SEED_LOAD_ATHLETES=43 node_modules/.bin/tsx --conditions=react-server scripts/seed.ts
+SLIPWAY_SEED_LOAD_ATHLETES=44 node_modules/.bin/tsx --conditions=react-server scripts/seed.ts
 exec node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "${PORT:-3100}"

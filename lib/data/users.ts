@@ -309,6 +309,37 @@ export async function acceptInvitation(token: string, name: string, password: st
   });
 }
 
+/** The signed-in member's own row, while their account is active. */
+export async function activeSelf(actor: Actor): Promise<User> {
+  const user = await User.findByPk(actor.id);
+  if (!user || user.status !== "active") throw new NotFoundError("Your account is no longer active. Ask your club administrator.");
+  return user;
+}
+
+/**
+ * Checks the member's current password before a change to their account, unless `withoutCurrent` (a
+ * fresh e-mail-link session, see mayChangePasswordWithoutCurrent) and none was typed. Wrong guesses
+ * count against the same limit as failed sign-ins, for the account and the address.
+ */
+export async function checkCurrentPassword(
+  user: User,
+  currentPassword: string,
+  options: { address: string; withoutCurrent: boolean },
+): Promise<void> {
+  if (options.withoutCurrent && currentPassword === "") return;
+  if (await isSignInThrottled(user.email, options.address)) {
+    throw new TooManyRequestsError("Too many wrong passwords. Wait 15 minutes, or sign in with an e-mail link to set a new one.", 15 * 60);
+  }
+  if (currentPassword === "") {
+    throw new ValidationError("Enter your current password.", { currentPassword: ["Enter your current password."] });
+  }
+  const matches = user.passwordHash ? await verifyPassword(currentPassword, user.passwordHash) : await verifyAgainstDecoy(currentPassword);
+  if (!matches) {
+    await recordSignInFailure(user.email, options.address);
+    throw new ValidationError("That is not your current password.", { currentPassword: ["That is not your current password."] });
+  }
+}
+
 /**
  * A member changes their own password. The current password is checked unless `withoutCurrent` (a fresh
  * e-mail-link session, see mayChangePasswordWithoutCurrent); wrong guesses count against the same limit
@@ -321,26 +352,8 @@ export async function changeOwnPassword(
   options: { address: string; withoutCurrent: boolean },
 ): Promise<{ email: string }> {
   await databaseReady();
-  const user = await User.findByPk(actor.id);
-  if (!user || user.status !== "active") throw new NotFoundError("Your account is no longer active. Ask your club administrator.");
-  if (!options.withoutCurrent || input.currentPassword !== "") {
-    if (await isSignInThrottled(user.email, options.address)) {
-      throw new TooManyRequestsError(
-        "Too many wrong passwords. Wait 15 minutes, or sign in with an e-mail link to set a new one.",
-        15 * 60,
-      );
-    }
-    if (input.currentPassword === "") {
-      throw new ValidationError("Enter your current password.", { currentPassword: ["Enter your current password."] });
-    }
-    const matches = user.passwordHash
-      ? await verifyPassword(input.currentPassword, user.passwordHash)
-      : await verifyAgainstDecoy(input.currentPassword);
-    if (!matches) {
-      await recordSignInFailure(user.email, options.address);
-      throw new ValidationError("That is not your current password.", { currentPassword: ["That is not your current password."] });
-    }
-  }
+  const user = await activeSelf(actor);
+  await checkCurrentPassword(user, input.currentPassword, options);
   const problem = passwordProblem(input.newPassword);
   if (problem) throw new ValidationError(problem, { newPassword: [problem] });
   if (user.passwordHash && (await verifyPassword(input.newPassword, user.passwordHash))) {

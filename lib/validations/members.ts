@@ -22,8 +22,13 @@ export const memberNameField = personNameField({ empty: "Enter the member's name
 /** A member's own name (accepting an invitation, Your account). */
 const ownNameField = personNameField({ empty: "Enter your name.", tooLong: "Keep your name under 120 characters." });
 
+/** An e-mail address as a member or admin types it; stored trimmed and in lower case (normaliseEmail). */
+const emailAddressField = z
+  .email({ error: "Enter an e-mail address like name@example.org." })
+  .max(254, { error: "An e-mail address has at most 254 characters." });
+
 export const invitationSchema = z.strictObject({
-  email: z.email({ error: "Enter an e-mail address like name@example.org." }).max(254),
+  email: emailAddressField,
   name: memberNameField,
   role: z.enum(roles, { error: "Choose athlete, coach or admin." }),
 });
@@ -55,6 +60,21 @@ export const changePasswordSchema = z.strictObject({
     .string({ error: "Enter your current password." })
     .max(maxPasswordLength, { error: "That is not your current password." }),
   newPassword: newPasswordField,
+});
+
+/** A member asking to sign in with another address; the current password is checked as for a password change. */
+export const requestEmailChangeSchema = z.strictObject({
+  newEmail: emailAddressField,
+  currentPassword: z
+    .string({ error: "Enter your current password." })
+    .max(maxPasswordLength, { error: "That is not your current password." }),
+});
+
+/** The token of the link sent to the new address. */
+export const confirmEmailChangeSchema = z.strictObject({
+  token: z.string({ error: "Open the link from the e-mail." }).regex(oneTimeTokenPattern, {
+    error: "Not a confirmation link: copy the whole link from the e-mail.",
+  }),
 });
 
 export const signInSchema = z.strictObject({

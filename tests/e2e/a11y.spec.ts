@@ -27,6 +27,7 @@ function firstLink(from: string, prefix: string) {
  */
 const pages: { path: string; as: string | null; open?: (page: Page) => Promise<void>; ready?: (page: Page) => Promise<void> }[] = [
   { path: "/sign-in/link", as: null },
+  { path: "/confirm-email?token=no-such-email-change-0000000000000000000000", as: null },
   {
     path: "/sign-in, after a wrong password",
     as: null,

@@ -2,7 +2,7 @@ import { expect, test, type Page } from "@playwright/test";
 import { demo, openNewestMailTo, signIn } from "./support/auth";
 import { loadAthleteEmail } from "@/lib/seed/load-athletes";
 
-/** Your account (/account): a member corrects their name and changes their password. Uses load athletes 41–43 only. */
+/** Your account (/account): a member corrects their name, moves to another e-mail address and changes their password. Uses load athletes 41–44 only. */
 
 async function signInFails(page: Page, email: string, password: string): Promise<void> {
   await page.goto("/sign-in");
@@ -109,4 +109,62 @@ test("a member corrects their name; the header shows it at once, and a blank nam
 test("Your account is for members only: a visitor is sent to sign in and brought back", async ({ page }) => {
   await page.goto("/account");
   await expect(page).toHaveURL(/\/sign-in\?callbackUrl=%2Faccount/);
+});
+
+test("a member moves their account to a new e-mail address: nothing changes until the link from the new address is pressed", async ({
+  page,
+  browser,
+}) => {
+  const email = loadAthleteEmail(44);
+  const moved = "load044.moved@river-mail.example";
+  const context = await browser.newContext();
+  const athlete = await context.newPage();
+  await signIn(athlete, email);
+  await athlete.goto("/account");
+  const form = athlete.getByTestId("change-email-form");
+  await form.getByLabel("New e-mail address").fill("not an address");
+  await form.getByRole("button", { name: "Send a confirmation link" }).click();
+  await expect(form.getByLabel("New e-mail address")).toHaveAttribute("aria-invalid", "true");
+  await form.getByLabel("New e-mail address").fill(moved);
+  await form.getByLabel("Current password").fill("a wrong guess at it");
+  await form.getByRole("button", { name: "Send a confirmation link" }).click();
+  await expect(form.getByLabel("Current password")).toHaveAttribute("aria-invalid", "true");
+  await expect(athlete.getByTestId("change-email-status")).toContainText("That is not your current password.");
+  await form.getByLabel("Current password").fill(demo.password);
+  await form.getByRole("button", { name: "Send a confirmation link" }).click();
+  await expect(athlete.getByTestId("change-email-status")).toContainText(`A confirmation link is on its way to ${moved}.`);
+  await expect(athlete.getByTestId("pending-email-change")).toContainText(`Waiting for you to open the link sent to ${moved}`);
+  await expect(athlete.getByTestId("account-facts")).toContainText(email);
+
+  await signIn(page, demo.admin);
+  const text = await openNewestMailTo(page, moved);
+  const link = new URL(/https?:\/\/\S+\/confirm-email\?token=\S+/.exec(text)![0]);
+  // Opening the link changes nothing by itself (a mail scanner may open it): the button does.
+  await athlete.goto(`${link.pathname}${link.search}`);
+  await expect(athlete.getByRole("heading", { level: 1 })).toHaveText("Confirm your new e-mail address");
+  await athlete.getByRole("button", { name: "Confirm the new address" }).click();
+  await expect(athlete.getByTestId("confirm-email-status")).toContainText(`Your Slipway account now signs in with ${moved}.`);
+  // Every session ended: the header no longer shows the member.
+  await expect(athlete.getByTestId("signed-in-as")).toHaveCount(0);
+  await athlete.goto(`${link.pathname}${link.search}`);
+  await athlete.getByRole("button", { name: "Confirm the new address" }).click();
+  await expect(athlete.getByTestId("confirm-email-status")).toContainText("This link is no longer valid.");
+  await context.close();
+
+  // The old address is told, and only the new one signs in.
+  expect(await openNewestMailTo(page, email)).toContain(`now signs in with ${moved}`);
+  const fresh = await browser.newContext();
+  const again = await fresh.newPage();
+  await signInFails(again, email, demo.password);
+  await signIn(again, moved);
+  await again.goto("/account");
+  await expect(again.getByTestId("account-facts")).toContainText(moved);
+  await expect(again.getByTestId("pending-email-change")).toHaveCount(0);
+  await fresh.close();
+});
+
+test("a confirmation link cut short says so instead of offering the button", async ({ page }) => {
+  await page.goto("/confirm-email?token=too-short");
+  await expect(page.getByText("This confirmation link is incomplete.")).toBeVisible();
+  await expect(page.getByRole("button", { name: "Confirm the new address" })).toHaveCount(0);
 });

@@ -23,7 +23,10 @@ const { signInFailureLimit } = await import("@/lib/auth/throttle");
 const { AuditEvent, Certificate, SignInLink, User } = await import("@/models");
 const { listOutbox } = await import("@/lib/mail/outbox");
 const { clubToday } = await import("@/lib/data/club-settings");
-const { changeOwnNameAction, changePasswordAction } = await import("@/app/(account)/account/actions");
+const { changeOwnNameAction, changePasswordAction, requestEmailChangeAction } = await import("@/app/(account)/account/actions");
+const { confirmEmailChangeAction } = await import("@/app/(auth)/confirm-email/actions");
+const { emailChangesPerHour, pendingEmailChange } = await import("@/lib/data/email-change");
+const { EmailChange } = await import("@/models");
 
 beforeAll(async () => {
   await databaseReady();
@@ -180,5 +183,158 @@ describe("correcting your own name", () => {
       fieldErrors: { name: [expect.stringContaining("one line")] },
     });
     expect((await User.findOne({ where: { email } }))!.name).toBe(before);
+  });
+});
+
+/** The token in the newest confirmation mail to `to`. */
+async function confirmationTokenSentTo(to: string): Promise<string> {
+  const mail = (await listOutbox()).find((message) => message.to === to && message.subject === "Confirm your new Slipway e-mail address");
+  const token = /\/confirm-email\?token=([A-Za-z0-9_-]{43})/.exec(mail?.text ?? "")?.[1];
+  if (!token) throw new Error(`no confirmation link to ${to}`);
+  return token;
+}
+
+describe("changing your own e-mail address", () => {
+  it("changes nothing until the link sent to the new address is used; then it signs in with that one only and every session ends", async () => {
+    const email = "bilal@lantern-reach.example";
+    const moved = "bilal.new-address@river-mail.example";
+    const cookie = await sessionCookieFor(email, demoPassword);
+    const before = (await User.findOne({ where: { email } }))!;
+
+    const asked = await asCookie(cookie, () =>
+      requestEmailChangeAction({ newEmail: " Bilal.New-Address@River-Mail.example ", currentPassword: demoPassword }),
+    );
+    expect(asked).toMatchObject({ ok: false, fieldErrors: { newEmail: [expect.stringContaining("e-mail address")] } });
+    const sent = await asCookie(cookie, () =>
+      requestEmailChangeAction({ newEmail: "Bilal.New-Address@River-Mail.example", currentPassword: demoPassword }),
+    );
+    expect(sent).toEqual({
+      ok: true,
+      message: `A confirmation link is on its way to ${moved}. Open it within 24 hours; until then you sign in with ${email}.`,
+      data: { newEmail: moved },
+    });
+    // Nothing changed yet: the old address signs in, the session lives, Your account shows what waits.
+    expect(await authenticateWithPassword(email, demoPassword)).not.toBeNull();
+    expect(await asCookie(cookie, () => currentActor())).toMatchObject({ email });
+    expect(await pendingEmailChange((await asCookie(cookie, () => currentActor()))!)).toMatchObject({ newEmail: moved });
+    const firstToken = await confirmationTokenSentTo(moved);
+
+    // Asking again replaces the first link.
+    await asCookie(cookie, () => requestEmailChangeAction({ newEmail: moved, currentPassword: demoPassword }));
+    const token = await confirmationTokenSentTo(moved);
+    expect(token).not.toBe(firstToken);
+    expect(await confirmEmailChangeAction({ token: firstToken })).toMatchObject({
+      ok: false,
+      message: "This link is no longer valid. Ask for a new one under Your account.",
+      fieldErrors: { token: expect.any(Array) },
+    });
+
+    expect(await confirmEmailChangeAction({ token })).toEqual({
+      ok: true,
+      message: `Your Slipway account now signs in with ${moved}. Every device was signed out: sign in again with it.`,
+      data: { email: moved },
+    });
+    const after = (await User.findByPk(before.id))!;
+    expect(after.email).toBe(moved);
+    expect(after.tokenVersion).toBe(before.tokenVersion + 1);
+    expect(await asCookie(cookie, () => currentActor())).toBeNull();
+    expect(await authenticateWithPassword(email, demoPassword)).toBeNull();
+    expect(await authenticateWithPassword(moved, demoPassword)).toMatchObject({ id: before.id });
+    const audit = await AuditEvent.findOne({ where: { action: "member.email-changed", subjectId: String(before.id) } });
+    expect(audit).toMatchObject({ actorId: before.id, details: { from: email, to: moved } });
+    // The old address is told, in case it was not them.
+    const told = (await listOutbox()).filter(
+      (message) => message.to === email && message.subject === "Your Slipway e-mail address was changed",
+    );
+    expect(told).toHaveLength(1);
+    expect(told[0]!.text).toContain(moved);
+    // The link works once.
+    expect(await confirmEmailChangeAction({ token })).toMatchObject({
+      ok: false,
+      message: "This link is no longer valid. Ask for a new one under Your account.",
+    });
+  });
+
+  it("checks the current password like a password change, and refuses the address the member already has", async () => {
+    const email = "carys@lantern-reach.example";
+    const cookie = await sessionCookieFor(email, demoPassword);
+    const wrong = await asCookie(cookie, () =>
+      requestEmailChangeAction({ newEmail: "carys@elsewhere.example", currentPassword: "not my password at all" }),
+    );
+    expect(wrong).toMatchObject({ ok: false, fieldErrors: { currentPassword: ["That is not your current password."] } });
+    const blank = await asCookie(cookie, () => requestEmailChangeAction({ newEmail: "carys@elsewhere.example", currentPassword: "" }));
+    expect(blank).toMatchObject({ ok: false, fieldErrors: { currentPassword: ["Enter your current password."] } });
+    const same = await asCookie(cookie, () =>
+      requestEmailChangeAction({ newEmail: "CARYS@lantern-reach.example", currentPassword: demoPassword }),
+    );
+    expect(same).toMatchObject({ ok: false, fieldErrors: { newEmail: ["That is the address you sign in with already."] } });
+    const carys = (await User.findOne({ where: { email } }))!;
+    expect(await EmailChange.count({ where: { userId: carys.id } })).toBe(0);
+    expect((await listOutbox()).some((message) => message.to === "carys@elsewhere.example")).toBe(false);
+  });
+
+  it("answers an address that has an account as any other, and tells that address instead of sending a link", async () => {
+    const email = "iris@lantern-reach.example";
+    const taken = "ada@lantern-reach.example";
+    const cookie = await sessionCookieFor(email, demoPassword);
+    const outcome = await asCookie(cookie, () => requestEmailChangeAction({ newEmail: taken, currentPassword: demoPassword }));
+    expect(outcome).toMatchObject({ ok: true, message: expect.stringContaining(`A confirmation link is on its way to ${taken}.`) });
+    const iris = (await User.findOne({ where: { email } }))!;
+    expect(await EmailChange.count({ where: { userId: iris.id } })).toBe(0);
+    const mail = (await listOutbox()).find(
+      (message) => message.to === taken && message.subject === "Your Slipway account's address was not changed",
+    );
+    expect(mail?.text).not.toMatch(/token=/);
+  });
+
+  it("refuses a link whose address got an account of its own meanwhile, and an expired link", async () => {
+    const email = "elin@lantern-reach.example";
+    const cookie = await sessionCookieFor(email, demoPassword);
+    const target = "elin.meanwhile@river-mail.example";
+    await asCookie(cookie, () => requestEmailChangeAction({ newEmail: target, currentPassword: demoPassword }));
+    const token = await confirmationTokenSentTo(target);
+    const elin = (await User.findOne({ where: { email } }))!;
+    const squatter = await User.create({
+      clubId: elin.clubId,
+      email: target,
+      name: "Meanwhile Member",
+      role: "athlete",
+      passwordHash: null,
+    });
+    expect(await confirmEmailChangeAction({ token })).toMatchObject({
+      ok: false,
+      message: "That address has a Slipway account of its own by now, so yours was not moved to it.",
+    });
+    expect((await User.findByPk(elin.id))!.email).toBe(email);
+    await squatter.destroy();
+
+    const later = "elin.later@river-mail.example";
+    await asCookie(cookie, () => requestEmailChangeAction({ newEmail: later, currentPassword: demoPassword }));
+    const expiring = await confirmationTokenSentTo(later);
+    await EmailChange.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { userId: elin.id, usedAt: null } });
+    expect(await confirmEmailChangeAction({ token: expiring })).toMatchObject({
+      ok: false,
+      message: expect.stringContaining("no longer valid"),
+    });
+    expect((await User.findByPk(elin.id))!.email).toBe(email);
+  });
+
+  it(`sends at most ${emailChangesPerHour} confirmation links an hour for one member`, async () => {
+    const email = "hamish@lantern-reach.example";
+    const cookie = await sessionCookieFor(email, demoPassword);
+    for (let ask = 0; ask < emailChangesPerHour; ask += 1) {
+      const outcome = await asCookie(cookie, () =>
+        requestEmailChangeAction({ newEmail: `hamish.${ask}@river-mail.example`, currentPassword: demoPassword }),
+      );
+      expect(outcome).toMatchObject({ ok: true });
+    }
+    const refused = await asCookie(cookie, () =>
+      requestEmailChangeAction({ newEmail: "hamish.more@river-mail.example", currentPassword: demoPassword }),
+    );
+    expect(refused).toMatchObject({
+      ok: false,
+      message: expect.stringContaining(`You asked for ${emailChangesPerHour} confirmation links in the last hour.`),
+    });
+    expect((await listOutbox()).some((message) => message.to === "hamish.more@river-mail.example")).toBe(false);
   });
 });

@@ -39,7 +39,7 @@ const { addDaysIso } = await import("@/lib/care/dates");
 const { newToken, hashToken } = await import("@/lib/auth/tokens");
 const { readClubSettings } = await import("@/lib/validations/club-settings");
 const { settingsToForm } = await import("@/lib/validations/club-settings-form");
-const { Boat, Certificate, Club, Invitation, OarSet, PracticalAssessment, User } = await import("@/models");
+const { Boat, Certificate, Club, EmailChange, Invitation, OarSet, PracticalAssessment, User } = await import("@/models");
 
 const careActions = await import("@/app/(rig)/rig/care/actions");
 const learnActions = await import("@/app/(learn)/learn/[slug]/actions");
@@ -53,6 +53,7 @@ const registerActions = await import("@/app/(club)/club/register/[id]/actions");
 const settingsActions = await import("@/app/(club)/club/settings/actions");
 const memberActions = await import("@/app/(club)/club/members/actions");
 const accountActions = await import("@/app/(account)/account/actions");
+const confirmEmailActions = await import("@/app/(auth)/confirm-email/actions");
 
 // ---------------------------------------------------------------------------------------------------
 // Fixtures
@@ -78,6 +79,7 @@ interface Fixtures {
   adaEmail: string;
   jonahWaitingSignOffId: string;
   femiCertificateId: string;
+  emailChangeToken: string;
   invitationToken: string;
   /** An invitation the withdraw table's valid control withdraws, and one of the other club. */
   spareInvitationId: number;
@@ -130,6 +132,15 @@ beforeAll(async () => {
   const boatNamed = async (name: string) => (await Boat.findOne({ where: { clubId: admin!.clubId, name } }))!.id;
   const setNamed = async (name: string) => (await OarSet.findOne({ where: { clubId: admin!.clubId, name } }))!.id;
   const invitationToken = newToken();
+  // Bilal asked to move his account to another address; the confirm table's valid call uses the link.
+  const emailChangeToken = newToken();
+  const bilal = await homeUser("bilal");
+  await EmailChange.create({
+    userId: bilal!.id,
+    newEmail: "bilal.moved@bad-input.example",
+    tokenHash: hashToken(emailChangeToken),
+    expiresAt: new Date(Date.now() + 86_400_000),
+  });
   await Invitation.create({
     clubId: admin!.clubId,
     invitedById: admin!.id,
@@ -175,6 +186,7 @@ beforeAll(async () => {
       where: { athleteId: femi!.id, kind: "module", moduleSlug: "grip-cleaning", revokedAt: null },
     }))!.id,
     invitationToken,
+    emailChangeToken,
     spareInvitationId,
     otherClubInvitationId,
     settingsAsStored: settingsToForm(readClubSettings((await Club.findByPk(admin!.clubId))!.settings)),
@@ -1211,6 +1223,25 @@ describe("signing in and joining (signed out)", () => {
       ),
     valid: () => [validAccept()],
   });
+
+  const validConfirm = () => ({ token: fx.emailChangeToken });
+  table("confirmEmailChangeAction", {
+    action: confirmEmailActions.confirmEmailChangeAction,
+    as: "anonymous",
+    cases: () =>
+      single(
+        objectVariants(validConfirm(), "token", { token: { kind: "token" } }, [
+          v("token unknown", { token: newToken() }, "token"),
+          v("token too short", { token: fx.emailChangeToken.slice(0, 20) }, "token"),
+          v("token with a character outside base64url", { token: `${fx.emailChangeToken.slice(0, -1)}+` }, "token"),
+          v("token of another length", { token: `${fx.emailChangeToken}A` }, "token"),
+          v("token of an invitation", { token: fx.invitationToken }, "token"),
+          v("a new e-mail field", { ...validConfirm(), newEmail: "someone@else.example" }, "newEmail"),
+          v("a member id field", { ...validConfirm(), memberId: 1 }, "memberId"),
+        ]),
+      ),
+    valid: () => [validConfirm()],
+  });
 });
 
 // ---------------------------------------------------------------------------------------------------
@@ -1304,6 +1335,31 @@ describe("correcting your own name (as an athlete)", () => {
         ]),
       ),
     valid: () => [validName()],
+  });
+});
+
+// ---------------------------------------------------------------------------------------------------
+// Your own e-mail address (any member). The valid control only mails a link: nothing changes yet.
+
+describe("changing your own e-mail address (as an athlete)", () => {
+  const validRequest = () => ({ newEmail: "ada.elsewhere@bad-input.example", currentPassword: demoPassword });
+  table("requestEmailChangeAction", {
+    action: accountActions.requestEmailChangeAction,
+    as: "athlete",
+    cases: () =>
+      single(
+        objectVariants(validRequest(), "newEmail", { newEmail: { kind: "email" }, currentPassword: { kind: "password" } }, [
+          v("new e-mail without a domain", { ...validRequest(), newEmail: "ada@" }, "newEmail"),
+          v("new e-mail with two at signs", { ...validRequest(), newEmail: "ada@@bad-input.example" }, "newEmail"),
+          v("new e-mail over 254 characters", { ...validRequest(), newEmail: `${"a".repeat(60)}@${"d".repeat(200)}.example` }, "newEmail"),
+          v("new e-mail the one she has", { ...validRequest(), newEmail: fx.adaEmail }, "newEmail"),
+          v("current password wrong", { ...validRequest(), currentPassword: "not the password at all" }, "currentPassword"),
+          v("current password longer than sign-in accepts", { ...validRequest(), currentPassword: "p".repeat(129) }, "currentPassword"),
+          v("an email field", { ...validRequest(), email: "someone@else.example" }, "email"),
+          v("a member id field (there is no moving someone else)", { ...validRequest(), memberId: 1 }, "memberId"),
+        ]),
+      ),
+    valid: () => [validRequest()],
   });
 });
 

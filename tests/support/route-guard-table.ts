@@ -488,6 +488,21 @@ export const actionGuardRows: ActionGuardRow[] = [
     why: "Any member renames only themselves (there is no member argument).",
   },
   {
+    file: "app/(account)/account/actions.ts",
+    action: "requestEmailChangeAction",
+    input: () => ({ newEmail: "guard.row@river-mail.example", currentPassword: "not anyone's password here" }),
+    expect: { anonymous: 401, athlete: 400, otherAthlete: 400, coach: 400, otherCoach: 400, admin: 400, otherAdmin: 400 },
+    why: "Any member, only for their own account (there is no member argument); a wrong current password is refused (400), so no link is sent.",
+  },
+  {
+    file: "app/(auth)/confirm-email/actions.ts",
+    action: "confirmEmailChangeAction",
+    // Shaped like a real token (43 base64url characters), so that it is refused as unknown, not as malformed.
+    input: () => ({ token: "no-such-email-change-0000000000000000000000" }),
+    expect: all(404),
+    why: "Public: the link's token is the guard; an unknown one is not found for everyone.",
+  },
+  {
     file: "app/(auth)/invite/[token]/actions.ts",
     action: "acceptInvitationAction",
     // Shaped like a real token (43 base64url characters), so that it is refused as unknown, not as malformed.

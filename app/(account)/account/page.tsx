@@ -4,7 +4,12 @@ import { currentSessionStart, requirePageActor } from "@/lib/auth/session";
 import { linkSessionGraceMinutes, mayChangePasswordWithoutCurrent } from "@/lib/auth/password-rules";
 import { roleLabels } from "@/lib/auth/roles";
 import { clubOf } from "@/lib/data/members";
+import { clubTimeZone } from "@/lib/data/club-settings";
+import { emailChangeLinkHours, pendingEmailChange } from "@/lib/data/email-change";
+import { formatInstantInZone } from "@/lib/care/calendar";
+import { Notice } from "@/components/ui/notice";
 import { ChangeNameForm } from "./_components/change-name-form";
+import { ChangeEmailForm } from "./_components/change-email-form";
 import { ChangePasswordForm } from "./_components/change-password-form";
 
 export const metadata: Metadata = { title: "Your account" };
@@ -12,11 +17,16 @@ export const metadata: Metadata = { title: "Your account" };
 /** The signed-in member's own account: who they are to Slipway, and their password. */
 export default async function AccountPage() {
   const actor = await requirePageActor("member", "/account");
-  const [club, session] = await Promise.all([clubOf(actor), currentSessionStart()]);
+  const [club, session, pending, timeZone] = await Promise.all([
+    clubOf(actor),
+    currentSessionStart(),
+    pendingEmailChange(actor),
+    clubTimeZone(actor.clubId),
+  ]);
   const withoutCurrent = mayChangePasswordWithoutCurrent(session, new Date());
   return (
     <div className="mx-auto max-w-md space-y-6">
-      <PageTitle lead="Your name as your club's records print it, and your password.">Your account</PageTitle>
+      <PageTitle lead="Your name as your club's records print it, the address you sign in with, and your password.">Your account</PageTitle>
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 rounded-lg bg-white p-4 shadow-sm" data-testid="account-facts">
         <dt className="font-semibold">E-mail</dt>
         <dd className="break-all">{actor.email}</dd>
@@ -30,6 +40,24 @@ export default async function AccountPage() {
           Your name
         </h2>
         <ChangeNameForm name={actor.name} />
+      </section>
+      <section aria-labelledby="email-heading" className="rounded-lg bg-white p-4 shadow-sm">
+        <h2 id="email-heading" className="mb-1 text-lg font-semibold">
+          Change your e-mail address
+        </h2>
+        <p className="mb-3 text-sm text-slate-700">
+          Slipway sends a link to the new address; once you open it (within {emailChangeLinkHours} hours) you sign in with that address, and
+          every phone or computer is signed out. Until then nothing changes.
+        </p>
+        {pending && (
+          <div className="mb-3">
+            <Notice tone="info" title={`Waiting for you to open the link sent to ${pending.newEmail}`} testId="pending-email-change">
+              It works until {formatInstantInZone(pending.expiresAt, timeZone)}. Asking again sends a new link and the earlier one stops
+              working.
+            </Notice>
+          </div>
+        )}
+        <ChangeEmailForm withoutCurrent={withoutCurrent} />
       </section>
       <section aria-labelledby="password-heading" className="rounded-lg bg-white p-4 shadow-sm">
         <h2 id="password-heading" className="mb-1 text-lg font-semibold">
