@@ -221,7 +221,10 @@ test("the grip-cleaning practical warns about the cleaning chemicals; the riggin
   await expect(page.getByTestId("cleaning-cautions")).toHaveCount(0);
 });
 
-test("after a name correction the admin reissues the current certificates; the printed ones check as replaced", async ({ page }) => {
+test("after a name correction the admin reissues the current certificates; the printed ones check as replaced", async ({
+  page,
+  browser,
+}) => {
   // Elin (lib/seed/demo-certification.ts) holds two module passes signed off about 40 days ago.
   const elinRow = "member-row-elin@lantern-reach.example";
   async function rename(from: string, to: string) {
@@ -262,6 +265,16 @@ test("after a name correction the admin reissues the current certificates; the p
 
   await signIn(page, demo.admin);
   await rename("Elin Marchetti", "Elin Marchetti-Vos");
+  // A coach sees that the certificates carry the earlier name, and who can reissue them; not the button.
+  const coach = await browser.newContext();
+  const coachPage = await coach.newPage();
+  await signIn(coachPage, demo.coach);
+  await coachPage.goto(new URL(page.url()).pathname);
+  await expect(coachPage.getByTestId("reissue-note")).toContainText(
+    "2 current certificates carry an earlier spelling of the name: a club administrator can reissue them under “Elin Marchetti-Vos”.",
+  );
+  await expect(coachPage.getByTestId("reissue-panel")).toHaveCount(0);
+  await coach.close();
   // Each certificate's page says the name was corrected and where to reissue.
   await page.getByTestId("athlete-certificates").getByRole("link", { name: "Manage" }).first().click();
   await expect(page.getByTestId("name-corrected")).toContainText("Issued to “Elin Marchetti”; the member is now “Elin Marchetti-Vos”.");
