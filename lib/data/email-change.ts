@@ -4,10 +4,10 @@ import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { recordAudit } from "@/lib/data/audit";
 import { activeSelf, checkCurrentPassword, normaliseEmail } from "@/lib/data/users";
-import type { Actor } from "@/lib/auth/permissions";
+import { assertAllowed, assertVisible, canManageClub, type Actor } from "@/lib/auth/permissions";
 import { hashToken, newToken } from "@/lib/auth/tokens";
 import { consumeOrRefuse, namedLimiter } from "@/lib/auth/throttle";
-import { ConflictError, NotFoundError, ValidationError } from "@/lib/http/errors";
+import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "@/lib/http/errors";
 import { publicBaseUrl } from "@/lib/env";
 import { sendMail } from "@/lib/mail/send";
 import { EmailChange, User } from "@/models";
@@ -32,6 +32,54 @@ export async function pendingEmailChange(actor: Actor, now: Date = new Date()): 
   return pending ? { newEmail: pending.newEmail, expiresAt: pending.expiresAt } : null;
 }
 
+async function throttleConfirmationMails(memberId: number): Promise<void> {
+  await consumeOrRefuse(namedLimiter("email-change", emailChangesPerHour, 3600), String(memberId), (msBeforeNext) => {
+    const minutes = Math.max(1, Math.ceil(msBeforeNext / 60_000));
+    return `${emailChangesPerHour} confirmation links were sent for this account in the last hour. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`;
+  });
+}
+
+/**
+ * Replaces the member's waiting change with one to `newEmail` (audited, with who asked) and mails the
+ * link there. Nothing about the account changes until the link is used.
+ */
+async function sendConfirmationLink(member: User, newEmail: string, askedBy: { id: number; name: string } | null): Promise<void> {
+  const token = newToken();
+  await writeTransaction(async (transaction) => {
+    await EmailChange.destroy({ where: { userId: member.id, usedAt: null }, transaction });
+    await EmailChange.create(
+      { userId: member.id, newEmail, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + emailChangeLinkHours * 3_600_000) },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        clubId: member.clubId,
+        actorId: askedBy?.id ?? member.id,
+        action: "member.email-change-requested",
+        subjectType: "user",
+        subjectId: member.id,
+        details: { to: newEmail },
+      },
+      transaction,
+    );
+  });
+  await sendMail({
+    to: newEmail,
+    subject: "Confirm your new Slipway e-mail address",
+    text: [
+      `Hello ${member.name},`,
+      "",
+      askedBy ? `${askedBy.name}, an administrator of your club, asked to move your Slipway account to this address.` : null,
+      `Open this link within ${emailChangeLinkHours} hours to sign in to Slipway with this address from now on. It works once.`,
+      `${publicBaseUrl()}/confirm-email?token=${token}`,
+      "",
+      `Until then you sign in with ${member.email}. If you did not ask for this, ignore this message.`,
+    ]
+      .filter((line) => line !== null)
+      .join("\n"),
+  });
+}
+
 /**
  * A member asks to move their account to `newEmail`. The current password is checked as for a password
  * change; then a link is mailed to the new address, and nothing changes until it is used. Asking again
@@ -51,58 +99,66 @@ export async function requestEmailChange(
     throw new ValidationError(same, { newEmail: [same] });
   }
   await checkCurrentPassword(user, input.currentPassword, options);
-  await consumeOrRefuse(namedLimiter("email-change", emailChangesPerHour, 3600), String(user.id), (msBeforeNext) => {
-    const minutes = Math.max(1, Math.ceil(msBeforeNext / 60_000));
-    return `You asked for ${emailChangesPerHour} confirmation links in the last hour. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`;
-  });
-  const taken = await User.findOne({ where: { email: newEmail }, attributes: ["id"] });
-  const token = newToken();
-  await writeTransaction(async (transaction) => {
-    await EmailChange.destroy({ where: { userId: user.id, usedAt: null }, transaction });
-    if (!taken) {
-      await EmailChange.create(
-        { userId: user.id, newEmail, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + emailChangeLinkHours * 3_600_000) },
-        { transaction },
-      );
-    }
-    await recordAudit(
-      {
-        clubId: user.clubId,
-        actorId: user.id,
-        action: "member.email-change-requested",
-        subjectType: "user",
-        subjectId: user.id,
-        details: { to: newEmail, ...(taken && { refused: "address has an account" }) },
-      },
-      transaction,
-    );
-  });
-  await sendMail(
-    taken
-      ? {
-          to: newEmail,
-          subject: "Your Slipway account's address was not changed",
-          text: [
-            "Hello,",
-            "",
-            "Someone signed in to Slipway asked to move their account to this address. This address already has a Slipway account, so nothing was changed.",
-            "If it was you, sign in with this address instead, or ask your club administrator to help.",
-          ].join("\n"),
-        }
-      : {
-          to: newEmail,
-          subject: "Confirm your new Slipway e-mail address",
-          text: [
-            `Hello ${user.name},`,
-            "",
-            `Open this link within ${emailChangeLinkHours} hours to sign in to Slipway with this address from now on. It works once.`,
-            `${publicBaseUrl()}/confirm-email?token=${token}`,
-            "",
-            `Until then you sign in with ${user.email}. If you did not ask for this, ignore this message.`,
-          ].join("\n"),
+  await throttleConfirmationMails(user.id);
+  if (await User.findOne({ where: { email: newEmail }, attributes: ["id"] })) {
+    await writeTransaction((transaction) =>
+      recordAudit(
+        {
+          clubId: user.clubId,
+          actorId: user.id,
+          action: "member.email-change-requested",
+          subjectType: "user",
+          subjectId: user.id,
+          details: { to: newEmail, refused: "address has an account" },
         },
-  );
+        transaction,
+      ),
+    );
+    await sendMail({
+      to: newEmail,
+      subject: "Your Slipway account's address was not changed",
+      text: [
+        "Hello,",
+        "",
+        "Someone signed in to Slipway asked to move their account to this address. This address already has a Slipway account, so nothing was changed.",
+        "If it was you, sign in with this address instead, or ask your club administrator to help.",
+      ].join("\n"),
+    });
+    return { newEmail };
+  }
+  await sendConfirmationLink(user, newEmail, null);
   return { newEmail };
+}
+
+/**
+ * An admin starts the move for another member of their club (who has lost the old mailbox, say): the
+ * same link goes to the new address, and only the member opening it makes the change. Admins already
+ * learn whether an address has an account when they invite, so a taken one is refused by name here.
+ * 403 for non-admins and for the admin's own account (Your account is the way), 404 outside the club.
+ */
+export async function requestMemberEmailChange(
+  actor: Actor,
+  memberId: number,
+  email: string,
+): Promise<{ newEmail: string; currentEmail: string }> {
+  await databaseReady();
+  assertAllowed(canManageClub(actor, actor.clubId), "Only club administrators can change members.");
+  const member = await User.findByPk(memberId);
+  assertVisible(member !== null && member.clubId === actor.clubId);
+  if (member.id === actor.id) throw new ForbiddenError("Change your own e-mail address under Your account.");
+  if (member.status !== "active") throw new ConflictError(`${member.name} is deactivated: reactivate them first.`);
+  const newEmail = normaliseEmail(email);
+  if (newEmail === member.email) {
+    const same = `That is the address ${member.name} signs in with already.`;
+    throw new ValidationError(same, { newEmail: [same] });
+  }
+  if (await User.findOne({ where: { email: newEmail }, attributes: ["id"] })) {
+    const taken = "That address already has a Slipway account.";
+    throw new ValidationError(taken, { newEmail: [taken] });
+  }
+  await throttleConfirmationMails(member.id);
+  await sendConfirmationLink(member, newEmail, { id: actor.id, name: actor.name });
+  return { newEmail, currentEmail: member.email };
 }
 
 /**

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { roles, userStatuses } from "@/lib/auth/roles";
 import { recordIdValueSchema } from "@/lib/validations/ids";
-import { memberNameField } from "@/lib/validations/members";
+import { emailAddressField, memberNameField } from "@/lib/validations/members";
 
 /** A member id in a page address (text). The members page's actions get the number itself: recordIdValueSchema. */
 const memberId = z.coerce.number({ error: "Choose a member." }).int().positive({ error: "Choose a member." });
@@ -37,4 +37,10 @@ export const withdrawInvitationSchema = z.strictObject({ invitationId: recordIdV
 export const renameMemberSchema = z.strictObject({
   memberId: recordIdValueSchema,
   name: memberNameField,
+});
+
+/** "Change e-mail" on the members page: a link goes to the new address, and the member's opening it makes the change. */
+export const memberEmailChangeSchema = z.strictObject({
+  memberId: recordIdValueSchema,
+  newEmail: emailAddressField,
 });

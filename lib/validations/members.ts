@@ -23,7 +23,7 @@ export const memberNameField = personNameField({ empty: "Enter the member's name
 const ownNameField = personNameField({ empty: "Enter your name.", tooLong: "Keep your name under 120 characters." });
 
 /** An e-mail address as a member or admin types it; stored trimmed and in lower case (normaliseEmail). */
-const emailAddressField = z
+export const emailAddressField = z
   .email({ error: "Enter an e-mail address like name@example.org." })
   .max(254, { error: "An e-mail address has at most 254 characters." });
 

@@ -3,6 +3,30 @@ import AxeBuilder from "@axe-core/playwright";
 import { demo, openNewestMailTo, signIn, signedInContext } from "./support/auth";
 
 test.describe("members admin", () => {
+  test("the admin starts moving a member to a new e-mail address; a link goes there and nothing changes yet", async ({ page }) => {
+    await signIn(page, demo.admin);
+    await page.goto("/club/members");
+    const row = page.getByTestId("member-row-bilal@lantern-reach.example");
+    await row.getByRole("button", { name: "Change e-mail of Bilal Hartigan" }).click();
+    const dialog = page.getByTestId("email-dialog");
+    const field = dialog.getByLabel("New e-mail address");
+    await expect(field).toBeFocused();
+    expect((await new AxeBuilder({ page }).include("dialog[open]").analyze()).violations).toEqual([]);
+    await field.fill(demo.athlete);
+    await dialog.getByRole("button", { name: "Send the link" }).click();
+    await expect(dialog.getByText("That address already has a Slipway account.")).toBeVisible();
+    await expect(field).toHaveAttribute("aria-invalid", "true");
+    await field.fill("bilal.hartigan@river-mail.example");
+    await dialog.getByRole("button", { name: "Send the link" }).click();
+    await expect(page.getByTestId("members-status")).toContainText(
+      "A confirmation link is on its way to bilal.hartigan@river-mail.example. Until it is opened (within 24 hours) the member signs in with bilal@lantern-reach.example.",
+    );
+    await expect(row).toContainText("bilal@lantern-reach.example");
+    const text = await openNewestMailTo(page, "bilal.hartigan@river-mail.example");
+    expect(text).toContain("Maren Okafor, an administrator of your club, asked to move your Slipway account to this address.");
+    expect(text).toMatch(/\/confirm-email\?token=[A-Za-z0-9_-]{43}/);
+  });
+
   test("the admin corrects a member's name; a blank one is refused in the dialog; the roster shows the new name", async ({ page }) => {
     await signIn(page, demo.admin);
     await page.goto("/club/members");

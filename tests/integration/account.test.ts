@@ -333,7 +333,7 @@ describe("changing your own e-mail address", () => {
     );
     expect(refused).toMatchObject({
       ok: false,
-      message: expect.stringContaining(`You asked for ${emailChangesPerHour} confirmation links in the last hour.`),
+      message: expect.stringContaining(`${emailChangesPerHour} confirmation links were sent for this account in the last hour.`),
     });
     expect((await listOutbox()).some((message) => message.to === "hamish.more@river-mail.example")).toBe(false);
   });

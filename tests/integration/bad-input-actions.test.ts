@@ -1082,6 +1082,26 @@ describe("the club's administration (as an admin)", () => {
     valid: () => [{ memberId: fx.hamishId, name: "Hamish Oyelaran" }],
   });
 
+  // The valid call only mails Kit a link: nothing about the account changes until it is opened.
+  const validMove = () => ({ memberId: fx.kitId, newEmail: "kit.moved@bad-input.example" });
+  table("changeMemberEmailAction", {
+    action: memberActions.changeMemberEmailAction,
+    as: "admin",
+    cases: () =>
+      single(
+        objectVariants(validMove(), "memberId", { memberId: { kind: "id" }, newEmail: { kind: "email" } }, [
+          v("memberId of another club", { ...validMove(), memberId: fx.otherClubAthleteId }, "memberId"),
+          v("memberId past the largest id", { ...validMove(), memberId: 2 ** 31 }, "memberId"),
+          v("new e-mail without a domain", { ...validMove(), newEmail: "kit@" }, "newEmail"),
+          v("new e-mail over 254 characters", { ...validMove(), newEmail: `${"k".repeat(60)}@${"d".repeat(200)}.example` }, "newEmail"),
+          v("new e-mail of another member", { ...validMove(), newEmail: fx.adaEmail }, "newEmail"),
+          v("new e-mail the one Kit has", { ...validMove(), newEmail: "kit@lantern-reach.example" }, "newEmail"),
+          v("a name beside it", { ...validMove(), name: "Kit Abernethy" }, "name"),
+        ]),
+      ),
+    valid: () => [validMove()],
+  });
+
   table("setMemberStatusAction", {
     action: memberActions.setMemberStatusAction,
     as: "admin",

@@ -15,6 +15,8 @@ const { seedDemoClub, demoPassword } = await import("@/lib/seed/demo-club");
 const { seedSecondClub } = await import("@/lib/seed/second-club");
 const { seedDemoCertification } = await import("@/lib/seed/demo-certification");
 const { changeMemberRole, importRoster, renameMember, setMemberStatus } = await import("@/lib/data/member-admin");
+const { confirmEmailChange, requestMemberEmailChange } = await import("@/lib/data/email-change");
+const { ConflictError, ValidationError } = await import("@/lib/http/errors");
 const {
   authenticateWithPassword,
   acceptInvitation,
@@ -440,5 +442,54 @@ describe("correcting a member's name", () => {
     await expect(renameMember(await actorFor("admin@brackwater.example"), greta.id, "X")).rejects.toBeInstanceOf(NotFoundError);
     await expect(renameMember(actor, actor.id, "Someone Else")).rejects.toThrow("Correct your own name under Your account.");
     expect((await userFor("greta@lantern-reach.example")).name).toBe("Greta Quennell-Vasquez");
+  });
+});
+
+describe("moving a member to another e-mail address", () => {
+  it("mails a link to the new address naming the admin; only the member's opening it makes the change", async () => {
+    const actor = await actorFor(admin);
+    const dev = await userFor("dev@lantern-reach.example");
+    const moved = "dev.castellano@river-mail.example";
+    expect(await requestMemberEmailChange(actor, dev.id, " Dev.Castellano@River-Mail.example ")).toEqual({
+      newEmail: moved,
+      currentEmail: "dev@lantern-reach.example",
+    });
+    // Nothing changed yet.
+    expect((await userFor("dev@lantern-reach.example")).tokenVersion).toBe(dev.tokenVersion);
+    const mail = (await listOutbox()).find((message) => message.to === moved);
+    expect(mail?.subject).toBe("Confirm your new Slipway e-mail address");
+    expect(mail?.text).toContain(`${actor.name}, an administrator of your club, asked to move your Slipway account to this address.`);
+    const audit = await AuditEvent.findOne({ where: { action: "member.email-change-requested", subjectId: String(dev.id) } });
+    expect(audit).toMatchObject({ actorId: actor.id, details: { to: moved } });
+
+    const token = /\/confirm-email\?token=([A-Za-z0-9_-]{43})/.exec(mail!.text)![1]!;
+    expect(await confirmEmailChange(token)).toEqual({ email: moved });
+    const after = (await User.findByPk(dev.id))!;
+    expect(after.email).toBe(moved);
+    expect(after.tokenVersion).toBe(dev.tokenVersion + 1);
+    // Put it back for the tests below.
+    await after.update({ email: "dev@lantern-reach.example" });
+  });
+
+  it("refuses a taken address, the member's own, a deactivated member, the admin's own account, coaches and other clubs", async () => {
+    const actor = await actorFor(admin);
+    const kit = await userFor("kit@lantern-reach.example");
+    await expect(requestMemberEmailChange(actor, kit.id, "ada@lantern-reach.example")).rejects.toThrow(
+      "That address already has a Slipway account.",
+    );
+    await expect(requestMemberEmailChange(actor, kit.id, "KIT@lantern-reach.example")).rejects.toBeInstanceOf(ValidationError);
+    await expect(requestMemberEmailChange(actor, actor.id, "maren@river-mail.example")).rejects.toThrow(
+      "Change your own e-mail address under Your account.",
+    );
+    await expect(
+      requestMemberEmailChange(await actorFor("coach.tobias@lantern-reach.example"), kit.id, "kit@river-mail.example"),
+    ).rejects.toBeInstanceOf(ForbiddenError);
+    await expect(
+      requestMemberEmailChange(await actorFor("admin@brackwater.example"), kit.id, "kit@river-mail.example"),
+    ).rejects.toBeInstanceOf(NotFoundError);
+    await setMemberStatus(actor, kit.id, "deactivated");
+    await expect(requestMemberEmailChange(actor, kit.id, "kit@river-mail.example")).rejects.toBeInstanceOf(ConflictError);
+    await setMemberStatus(actor, kit.id, "active");
+    expect((await listOutbox()).some((message) => message.to === "kit@river-mail.example")).toBe(false);
   });
 });

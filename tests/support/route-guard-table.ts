@@ -546,6 +546,13 @@ export const actionGuardRows: ActionGuardRow[] = [
   },
   {
     file: "app/(club)/club/members/actions.ts",
+    action: "changeMemberEmailAction",
+    input: ({ homeAthleteId }) => ({ memberId: homeAthleteId, newEmail: "ada@lantern-reach.example" }),
+    expect: { anonymous: 401, athlete: 403, otherAthlete: 403, coach: 403, otherCoach: 403, admin: 400, otherAdmin: 404 },
+    why: "Admins start moving their own club's members to a new address. Ada's address has an account, so the admin passes every guard and is refused by name (400): no link is sent.",
+  },
+  {
+    file: "app/(club)/club/members/actions.ts",
     action: "setMemberStatusAction",
     input: ({ homeAthleteId }) => ({ memberId: homeAthleteId, status: "active" }),
     expect: homeAdminOnRecord,

@@ -6,7 +6,8 @@ import { assertAllowed, assertMayManageClub, canManageClub } from "@/lib/auth/pe
 import { changeMemberRole, importRoster, renameMember, setMemberStatus, type RosterImportReport } from "@/lib/data/member-admin";
 import type { MemberSummary } from "@/lib/data/members";
 import { roleLabels } from "@/lib/auth/roles";
-import { changeRoleSchema, memberStatusSchema, renameMemberSchema } from "@/lib/validations/member-admin";
+import { changeRoleSchema, memberEmailChangeSchema, memberStatusSchema, renameMemberSchema } from "@/lib/validations/member-admin";
+import { emailChangeLinkHours, requestMemberEmailChange } from "@/lib/data/email-change";
 import { parseActionInput } from "@/lib/validations/issues";
 import { decodeRosterText, rosterFileProblem, rosterProblemFields } from "@/lib/members/roster-import";
 import { actionFailure, type ActionResult } from "@/lib/http/action-result";
@@ -53,6 +54,25 @@ export async function renameMemberAction(input: unknown): Promise<ActionResult<M
           ? `Name saved: ${member.name}.`
           : `Name saved: ${member.name}. ${outdated === 1 ? "One current certificate still carries" : `${outdated} current certificates still carry`} the earlier name: reissue ${outdated === 1 ? "it" : "them"} on the athlete's page.`,
       data: { ...summary, reissueHref: outdated === 0 ? null : `/roster/athletes/${member.id}#certificates` },
+    };
+  } catch (error) {
+    return actionFailure(error);
+  }
+}
+
+/** An admin starts moving another member to a new e-mail address; the member confirms it from there. */
+export async function changeMemberEmailAction(input: unknown): Promise<ActionResult<{ newEmail: string }>> {
+  try {
+    const actor = await requireActor();
+    assertMayManageClub(actor);
+    const parsed = parseActionInput(memberEmailChangeSchema, input);
+    if (!parsed.success) return { ok: false, message: "Check the e-mail address.", fieldErrors: parsed.fieldErrors };
+    const { memberId, newEmail } = parsed.data;
+    const sent = await lookUpBy("memberId", "member of your club", () => requestMemberEmailChange(actor, memberId, newEmail));
+    return {
+      ok: true,
+      message: `A confirmation link is on its way to ${sent.newEmail}. Until it is opened (within ${emailChangeLinkHours} hours) the member signs in with ${sent.currentEmail}.`,
+      data: { newEmail: sent.newEmail },
     };
   } catch (error) {
     return actionFailure(error);

@@ -19,7 +19,8 @@ import { Button } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
 import { SelectField, TextField } from "@/components/ui/field";
 import { LiveStatus, Notice } from "@/components/ui/notice";
-import { changeMemberRoleAction, renameMemberAction, setMemberStatusAction } from "../actions";
+import { changeMemberEmailAction, changeMemberRoleAction, renameMemberAction, setMemberStatusAction } from "../actions";
+import type { ActionResult } from "@/lib/http/action-result";
 import { reachAction } from "@/lib/http/reach-action";
 
 export interface MemberRow extends MemberSummary {
@@ -27,8 +28,7 @@ export interface MemberRow extends MemberSummary {
   lastSignInLabel: string;
 }
 
-type Pending =
-  { kind: "role"; member: MemberRow } | { kind: "rename"; member: MemberRow } | { kind: "deactivate"; member: MemberRow } | null;
+type Pending = { kind: "role" | "rename" | "email" | "deactivate"; member: MemberRow } | null;
 
 const column = createColumnHelper<MemberRow>();
 
@@ -59,6 +59,7 @@ interface ChangesMeta {
   busy: boolean;
   askRole: (member: MemberRow) => void;
   askRename: (member: MemberRow) => void;
+  askEmail: (member: MemberRow) => void;
   askDeactivate: (member: MemberRow) => void;
   reactivate: (member: MemberRow) => void;
 }
@@ -108,12 +109,28 @@ function NameCell({ member, meta }: { member: MemberRow; meta: ChangesMeta }) {
   );
 }
 
+function EmailCell({ member, meta }: { member: MemberRow; meta: ChangesMeta }) {
+  return (
+    <div className="flex flex-col items-start gap-1">
+      <span className="[overflow-wrap:anywhere]">{member.email}</span>
+      {member.id !== meta.actorId && member.status === "active" && (
+        <Button variant="secondary" onClick={() => meta.askEmail(member)} className="whitespace-nowrap">
+          Change e-mail<span className="sr-only"> of {member.name}</span>
+        </Button>
+      )}
+    </div>
+  );
+}
+
 const columns = [
   column.accessor("name", {
     header: "Name",
     cell: (info) => <NameCell member={info.row.original} meta={info.table.options.meta as ChangesMeta} />,
   }),
-  column.accessor("email", { header: "E-mail", cell: (info) => <span className="[overflow-wrap:anywhere]">{info.getValue()}</span> }),
+  column.accessor("email", {
+    header: "E-mail",
+    cell: (info) => <EmailCell member={info.row.original} meta={info.table.options.meta as ChangesMeta} />,
+  }),
   column.accessor((member) => roleLabels[member.role], {
     id: "role",
     header: "Role",
@@ -140,6 +157,8 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
   const [newRole, setNewRole] = useState<Role>("athlete");
   const [newName, setNewName] = useState("");
   const [nameError, setNameError] = useState<string | undefined>(undefined);
+  const [newEmail, setNewEmail] = useState("");
+  const [emailError, setEmailError] = useState<string | undefined>(undefined);
   const [busy, setBusy] = useState(false);
   const [outcome, setOutcome] = useState<{ ok: boolean; message?: string; link?: { href: string; label: string } } | null>(null);
 
@@ -152,22 +171,33 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
     if (result.ok) router.refresh();
   }
 
-  /** The rename dialog stays open on a refused name, with the reason beside the field. */
-  async function rename(member: MemberRow) {
+  /** A one-field dialog (name, e-mail) stays open on a refused value, with the reason beside the field; null then. */
+  async function submitField<T>(field: string, action: () => Promise<ActionResult<T>>, showError: (message?: string) => void) {
     setBusy(true);
-    setNameError(undefined);
-    const result = await reachAction(() => renameMemberAction({ memberId: member.id, name: newName }));
+    showError(undefined);
+    const result = await reachAction(action);
     setBusy(false);
-    const fieldError = result.ok ? undefined : result.fieldErrors.name?.[0];
+    const fieldError = result.ok ? undefined : result.fieldErrors[field]?.[0];
     if (fieldError) {
-      setNameError(fieldError);
-      return;
+      showError(fieldError);
+      return null;
     }
     setPending(null);
+    return result;
+  }
+
+  async function rename(member: MemberRow) {
+    const result = await submitField("name", () => renameMemberAction({ memberId: member.id, name: newName }), setNameError);
+    if (!result) return;
     const reissueHref = result.ok ? result.data?.reissueHref : null;
     const renamed = result.ok ? (result.data?.name ?? member.name) : member.name;
     setOutcome(reissueHref ? { ...result, link: { href: reissueHref, label: `Reissue ${renamed}'s certificates` } } : result);
     if (result.ok) router.refresh();
+  }
+
+  async function changeEmail(member: MemberRow) {
+    const result = await submitField("newEmail", () => changeMemberEmailAction({ memberId: member.id, newEmail }), setEmailError);
+    if (result) setOutcome(result);
   }
 
   // TanStack Table keeps its own state outside React's memoisation; this component is not compiled.
@@ -192,6 +222,12 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
         setNameError(undefined);
         setOutcome(null);
         setPending({ kind: "rename", member });
+      },
+      askEmail: (member) => {
+        setNewEmail("");
+        setEmailError(undefined);
+        setOutcome(null);
+        setPending({ kind: "email", member });
       },
       askDeactivate: (member) => {
         setOutcome(null);
@@ -345,6 +381,41 @@ export function MembersTable({ members, actorId }: { members: MemberRow[]; actor
             </Button>
             <Button type="submit" pending={busy} pendingLabel="Saving…">
               Save name
+            </Button>
+          </div>
+        </form>
+      </Dialog>
+
+      <Dialog
+        open={pending?.kind === "email"}
+        onClose={() => setPending(null)}
+        title={pending ? `Change the e-mail address of ${pending.member.name}` : "Change e-mail"}
+        description="Slipway sends a link to the new address. Only when the member opens it do they sign in with it (and are signed out everywhere); until then nothing changes."
+        testId="email-dialog"
+      >
+        <form
+          onSubmit={(event) => {
+            event.preventDefault();
+            if (pending) void changeEmail(pending.member);
+          }}
+          noValidate
+          className="space-y-4"
+        >
+          <TextField
+            label="New e-mail address"
+            type="email"
+            autoComplete="off"
+            autoFocus
+            value={newEmail}
+            error={emailError}
+            onChange={(event) => setNewEmail(event.target.value)}
+          />
+          <div className="flex flex-wrap justify-end gap-2">
+            <Button type="button" variant="secondary" onClick={() => setPending(null)}>
+              Cancel
+            </Button>
+            <Button type="submit" pending={busy} pendingLabel="Sending…">
+              Send the link
             </Button>
           </div>
         </form>
