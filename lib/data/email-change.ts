@@ -10,7 +10,7 @@ import { consumeOrRefuse, namedLimiter } from "@/lib/auth/throttle";
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "@/lib/http/errors";
 import { publicBaseUrl } from "@/lib/env";
 import { sendMail } from "@/lib/mail/send";
-import { EmailChange, User } from "@/models";
+import { EmailChange, SignInLink, User } from "@/models";
 
 /** How long the confirmation link sent to the new address works. */
 export const emailChangeLinkHours = 24;
@@ -163,8 +163,8 @@ export async function requestMemberEmailChange(
 
 /**
  * The link from the new address is used: the account signs in with it from now on. Every session ends
- * (the token version moves on), other unconfirmed links of the member stop working, and the old address
- * is told, in case it was not them.
+ * (the token version moves on), other unconfirmed links of the member stop working (and sign-in links
+ * mailed to the old address), and the old address is told, in case it was not them.
  */
 export async function confirmEmailChange(token: string): Promise<{ email: string }> {
   await databaseReady();
@@ -184,6 +184,8 @@ export async function confirmEmailChange(token: string): Promise<{ email: string
     await user.update({ email: change.newEmail, tokenVersion: user.tokenVersion + 1 }, { transaction });
     await change.update({ usedAt: now }, { transaction });
     await EmailChange.destroy({ where: { userId: user.id, usedAt: null }, transaction });
+    // A one-time sign-in link mailed to the old address must not open the account any more.
+    await SignInLink.destroy({ where: { userId: user.id, usedAt: null }, transaction });
     await recordAudit(
       {
         clubId: user.clubId,

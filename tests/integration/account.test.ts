@@ -229,11 +229,18 @@ describe("changing your own e-mail address", () => {
       fieldErrors: { token: expect.any(Array) },
     });
 
+    // A sign-in link mailed to the old address before the change stops working with it.
+    const oldAddressLink = await SignInLink.create({
+      userId: before.id,
+      tokenHash: hashToken(newToken()),
+      expiresAt: new Date(Date.now() + 15 * 60_000),
+    });
     expect(await confirmEmailChangeAction({ token })).toEqual({
       ok: true,
       message: `Your Slipway account now signs in with ${moved}. Every device was signed out: sign in again with it.`,
       data: { email: moved },
     });
+    expect(await SignInLink.findByPk(oldAddressLink.id)).toBeNull();
     const after = (await User.findByPk(before.id))!;
     expect(after.email).toBe(moved);
     expect(after.tokenVersion).toBe(before.tokenVersion + 1);
