@@ -288,6 +288,19 @@ test("after a name correction the admin reissues the current certificates; the p
   await expect(oldItem).toContainText("issued to Elin Marchetti");
   await expect(list.getByRole("listitem").filter({ hasText: `${newSerial}:` })).toContainText("Valid");
 
+  // Elin's own list says which certificate replaced the revoked one.
+  const elin = await browser.newContext();
+  const elinPage = await elin.newPage();
+  await signIn(elinPage, "elin@lantern-reach.example");
+  await elinPage.goto("/learn/certificates");
+  await expect(
+    elinPage
+      .getByTestId("my-certificates")
+      .getByRole("listitem")
+      .filter({ hasText: `${oldSerial} ·` }),
+  ).toContainText(`Replaced by ${newSerial}, reissued under your corrected name: print that one instead.`);
+  await elin.close();
+
   // The old certificate's page points to its replacement, whose record carries the new name.
   await oldItem.getByRole("link", { name: "Manage" }).click();
   await expect(page.getByTestId("certificate-status")).toContainText("Revoked");

@@ -57,6 +57,12 @@ export default async function MyCertificatesPage() {
                   {certificate.serial} · signed off by {certificate.signedOffByName} on {formatLongDate(certificate.issuedOn)} ·{" "}
                   {expiryVerb(certificate.expiresOn, today)} {formatLongDate(certificate.expiresOn)}
                 </p>
+                {certificate.replacedById && (
+                  <p className="text-sm" data-testid="replaced-note">
+                    Replaced by {certificates.find((entry) => entry.id === certificate.replacedById)?.serial ?? "a newer certificate"},
+                    reissued under your corrected name: print that one instead.
+                  </p>
+                )}
                 <p className="flex flex-wrap gap-x-4">
                   <a href={certificate.pdfUrl} className="inline-flex min-h-11 items-center font-semibold text-river-700 underline">
                     Download PDF
