@@ -12,6 +12,7 @@ import { Button } from "@/components/ui/button";
 import { LiveStatus, Notice } from "@/components/ui/notice";
 import { ClientForm } from "@/components/ui/client-form";
 import { requestEmailChangeAction } from "../actions";
+import { showFieldErrors } from "@/components/ui/field-errors";
 
 type EmailChangeInput = z.input<typeof requestEmailChangeSchema>;
 const blank: EmailChangeInput = { newEmail: "", currentPassword: "" };
@@ -30,9 +31,7 @@ export function ChangeEmailForm({ withoutCurrent }: { withoutCurrent: boolean })
     setOutcome(null);
     const result = await reachAction(() => requestEmailChangeAction(values));
     if (!result.ok) {
-      for (const [field, messages] of Object.entries(result.fieldErrors)) {
-        if (field === "newEmail" || field === "currentPassword") form.setError(field, { message: messages[0] });
-      }
+      showFieldErrors(form.setError, result.fieldErrors, ["newEmail", "currentPassword"]);
       setOutcome({ ok: false, message: result.message });
       return;
     }

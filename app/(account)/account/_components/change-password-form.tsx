@@ -14,6 +14,7 @@ import { LiveStatus, Notice } from "@/components/ui/notice";
 import { ClientForm } from "@/components/ui/client-form";
 import { NewPasswordFields } from "@/components/auth/new-password-fields";
 import { changePasswordAction } from "../actions";
+import { showFieldErrors } from "@/components/ui/field-errors";
 
 const formSchema = changePasswordSchema
   .extend({ confirm: z.string() })
@@ -36,9 +37,7 @@ export function ChangePasswordForm({ email, withoutCurrent }: { email: string; w
     setOutcome(null);
     const result = await reachAction(() => changePasswordAction(values));
     if (!result.ok) {
-      for (const [field, messages] of Object.entries(result.fieldErrors)) {
-        if (field === "currentPassword" || field === "newPassword") form.setError(field, { message: messages[0] });
-      }
+      showFieldErrors(form.setError, result.fieldErrors, ["currentPassword", "newPassword"]);
       setOutcome({ ok: false, message: result.message });
       return;
     }

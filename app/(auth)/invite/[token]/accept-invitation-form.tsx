@@ -14,6 +14,7 @@ import { acceptInvitationAction } from "./actions";
 import { reachAction } from "@/lib/http/reach-action";
 import { ClientForm } from "@/components/ui/client-form";
 import { NewPasswordFields } from "@/components/auth/new-password-fields";
+import { showFieldErrors } from "@/components/ui/field-errors";
 
 const formSchema = acceptInvitationSchema
   .extend({ confirm: z.string() })
@@ -33,9 +34,7 @@ export function AcceptInvitationForm({ token, email, defaultName }: { token: str
     setFailure(null);
     const result = await reachAction(() => acceptInvitationAction(values));
     if (!result.ok) {
-      for (const [field, messages] of Object.entries(result.fieldErrors)) {
-        if (field === "name" || field === "password") form.setError(field, { message: messages[0] });
-      }
+      showFieldErrors(form.setError, result.fieldErrors, ["name", "password"]);
       setFailure(result.message);
       return;
     }

@@ -11,6 +11,7 @@ import { LiveStatus, Notice } from "@/components/ui/notice";
 import { inviteMemberAction } from "../actions";
 import { reachAction } from "@/lib/http/reach-action";
 import { ClientForm } from "@/components/ui/client-form";
+import { showFieldErrors } from "@/components/ui/field-errors";
 
 type InviteInput = z.infer<typeof invitationSchema>;
 
@@ -26,10 +27,7 @@ export function InviteMemberForm() {
     const outcome = await reachAction(() => inviteMemberAction(values));
     setResult(outcome);
     if (outcome.ok) form.reset();
-    else
-      for (const [field, messages] of Object.entries(outcome.fieldErrors)) {
-        if (field === "email" || field === "name" || field === "role") form.setError(field, { message: messages[0] });
-      }
+    else showFieldErrors(form.setError, outcome.fieldErrors, ["email", "name", "role"]);
   });
   // Drop the last answer first: it spoke of the previous entry, even when this one fails its own check.
   const onSubmit = (event: React.FormEvent<HTMLFormElement>) => {

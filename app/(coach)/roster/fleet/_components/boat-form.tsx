@@ -13,6 +13,7 @@ import { SaveFeedback, type SaveOutcome } from "./save-feedback";
 import { optionalCmValue } from "./form-helpers";
 import { reachAction } from "@/lib/http/reach-action";
 import { ClientForm } from "@/components/ui/client-form";
+import { showFieldErrors } from "@/components/ui/field-errors";
 
 interface BoatFormProps {
   /** Present when editing. */
@@ -43,10 +44,7 @@ export function BoatForm({ boatId, initial, linkedSets = [], halfSwivelCm }: Boa
       if (boatId === undefined) form.reset({ name: "", boatClass: values.boatClass, notes: "" });
       return;
     }
-    for (const [field, messages] of Object.entries(outcome.fieldErrors)) {
-      const known = fields.find((name) => name === field);
-      if (known) form.setError(known, { message: messages[0] });
-    }
+    showFieldErrors(form.setError, outcome.fieldErrors, fields);
   });
 
   return (

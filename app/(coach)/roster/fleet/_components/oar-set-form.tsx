@@ -16,6 +16,7 @@ import { SaveFeedback, type SaveOutcome } from "./save-feedback";
 import { cmValue, wholeValue } from "./form-helpers";
 import { reachAction } from "@/lib/http/reach-action";
 import { ClientForm } from "@/components/ui/client-form";
+import { showFieldErrors } from "@/components/ui/field-errors";
 
 interface OarSetFormProps {
   oarSetId?: number;
@@ -77,10 +78,7 @@ export function OarSetForm({ oarSetId, initial, boats, limits, defaultClickCm }:
       }
       return;
     }
-    for (const [field, messages] of Object.entries(outcome.fieldErrors)) {
-      const known = fields.find((name) => name === field);
-      if (known) form.setError(known, { message: messages[0] });
-    }
+    showFieldErrors(form.setError, outcome.fieldErrors, fields);
   });
 
   return (

@@ -12,6 +12,7 @@ import { cleaningRecordSchemaFor, type CleaningRecordFormInput, type CleaningRec
 import { recordCleaningAction } from "../actions";
 import { reachAction } from "@/lib/http/reach-action";
 import { ClientForm } from "@/components/ui/client-form";
+import { showFieldErrors } from "@/components/ui/field-errors";
 
 interface CleaningFormProps {
   oarSets: { id: number; name: string }[];
@@ -42,10 +43,7 @@ export function CleaningForm({ oarSets, members, me, today }: CleaningFormProps)
       router.refresh();
       return;
     }
-    for (const [field, messages] of Object.entries(outcome.fieldErrors)) {
-      const known = formFields.find((name) => name === field);
-      if (known) form.setError(known, { message: messages[0] });
-    }
+    showFieldErrors(form.setError, outcome.fieldErrors, formFields);
   });
 
   return (
