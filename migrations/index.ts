@@ -5,6 +5,7 @@ import * as createCertification from "@/migrations/20261202-0004-create-certific
 import * as indexRosterReads from "@/migrations/20261202-0005-index-roster-reads";
 import * as certificateReplacement from "@/migrations/20261204-0006-certificate-replacement";
 import * as emailChanges from "@/migrations/20261204-0007-email-changes";
+import * as emailChangeRequester from "@/migrations/20261204-0008-email-change-requester";
 
 export interface MigrationModule {
   up: typeof createFoundation.up;
@@ -20,4 +21,5 @@ export const migrationList: { name: string; module: MigrationModule }[] = [
   { name: "20261202-0005-index-roster-reads", module: indexRosterReads },
   { name: "20261204-0006-certificate-replacement", module: certificateReplacement },
   { name: "20261204-0007-email-changes", module: emailChanges },
+  { name: "20261204-0008-email-change-requester", module: emailChangeRequester },
 ];

@@ -15,6 +15,8 @@ export class EmailChange extends Model<InferAttributes<EmailChange>, InferCreati
   declare userId: ForeignKey<User["id"]>;
   /** Already normalised (trimmed, lower case). */
   declare newEmail: string;
+  /** Null when the member asked (only they, signed in, may confirm); the admin's id when an admin did. */
+  declare requestedById: CreationOptional<number | null>;
   declare tokenHash: string;
   declare expiresAt: Date;
   declare usedAt: CreationOptional<Date | null>;
@@ -27,6 +29,7 @@ export class EmailChange extends Model<InferAttributes<EmailChange>, InferCreati
         id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
         userId: { type: DataTypes.INTEGER, allowNull: false },
         newEmail: { type: DataTypes.STRING(254), allowNull: false },
+        requestedById: { type: DataTypes.INTEGER, allowNull: true },
         tokenHash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
         expiresAt: { type: DataTypes.DATE, allowNull: false },
         usedAt: { type: DataTypes.DATE, allowNull: true },

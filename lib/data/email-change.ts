@@ -1,5 +1,5 @@
 import "server-only";
-import { Op } from "sequelize";
+import { Op, type Transaction } from "sequelize";
 import { writeTransaction } from "@/lib/db";
 import { databaseReady } from "@/lib/data/database";
 import { recordAudit } from "@/lib/data/audit";
@@ -48,7 +48,13 @@ async function sendConfirmationLink(member: User, newEmail: string, askedBy: { i
   await writeTransaction(async (transaction) => {
     await EmailChange.destroy({ where: { userId: member.id, usedAt: null }, transaction });
     await EmailChange.create(
-      { userId: member.id, newEmail, tokenHash: hashToken(token), expiresAt: new Date(Date.now() + emailChangeLinkHours * 3_600_000) },
+      {
+        userId: member.id,
+        newEmail,
+        requestedById: askedBy?.id ?? null,
+        tokenHash: hashToken(token),
+        expiresAt: new Date(Date.now() + emailChangeLinkHours * 3_600_000),
+      },
       { transaction },
     );
     await recordAudit(
@@ -70,10 +76,12 @@ async function sendConfirmationLink(member: User, newEmail: string, askedBy: { i
       `Hello ${member.name},`,
       "",
       askedBy ? `${askedBy.name}, an administrator of your club, asked to move your Slipway account to this address.` : null,
-      `Open this link within ${emailChangeLinkHours} hours to sign in to Slipway with this address from now on. It works once.`,
+      askedBy
+        ? `Open this link within ${emailChangeLinkHours} hours to sign in to Slipway with this address from now on. It works once.`
+        : `Open this link within ${emailChangeLinkHours} hours, signed in to Slipway as you are now, to sign in with this address from now on. It works once.`,
       `${publicBaseUrl()}/confirm-email?token=${token}`,
       "",
-      `Until then you sign in with ${member.email}. If you did not ask for this, ignore this message.`,
+      `Until then you sign in with ${member.email}. If you are not ${member.name}, or did not ask for this, ignore this message.`,
     ]
       .filter((line) => line !== null)
       .join("\n"),
@@ -161,21 +169,55 @@ export async function requestMemberEmailChange(
   return { newEmail, currentEmail: member.email };
 }
 
+/** What the confirmation page shows of a link that still works; null for any other token (no hints). */
+export interface EmailChangeLink {
+  memberName: string;
+  newEmail: string;
+  /** The member asked: only they, signed in, may confirm. False when an admin started it. */
+  needsMemberSignedIn: boolean;
+  /** Whether the visitor is signed in as that member. */
+  signedInAsMember: boolean;
+}
+
+async function openChangeFor(token: string, now: Date, transaction?: Transaction) {
+  const change = await EmailChange.findOne({ where: { tokenHash: hashToken(token) }, transaction });
+  const user = change ? await User.findByPk(change.userId, { transaction }) : null;
+  if (!change || !user || change.usedAt || change.expiresAt.getTime() <= now.getTime() || user.status !== "active") return null;
+  return { change, user };
+}
+
+export async function emailChangeLink(token: string, actor: Actor | null): Promise<EmailChangeLink | null> {
+  await databaseReady();
+  const open = await openChangeFor(token, new Date());
+  if (!open) return null;
+  return {
+    memberName: open.user.name,
+    newEmail: open.change.newEmail,
+    needsMemberSignedIn: open.change.requestedById === null,
+    signedInAsMember: actor?.id === open.user.id,
+  };
+}
+
 /**
- * The link from the new address is used: the account signs in with it from now on. Every session ends
+ * The link from the new address is used: the account signs in with it from now on. A change the member
+ * asked for needs the member signed in (`actor`); one an admin started does not (the admin vouched). Every session ends
  * (the token version moves on), other unconfirmed links of the member stop working (and sign-in links
  * mailed to the old address), and the old address is told, in case it was not them.
  */
-export async function confirmEmailChange(token: string): Promise<{ email: string }> {
+export async function confirmEmailChange(token: string, actor: Actor | null): Promise<{ email: string }> {
   await databaseReady();
   const now = new Date();
   const changed = await writeTransaction(async (transaction) => {
-    const change = await EmailChange.findOne({ where: { tokenHash: hashToken(token) }, transaction });
-    const user = change ? await User.findByPk(change.userId, { transaction }) : null;
-    if (!change || !user || change.usedAt || change.expiresAt.getTime() <= now.getTime() || user.status !== "active") {
+    const open = await openChangeFor(token, now, transaction);
+    if (!open) {
       throw new NotFoundError("This link is no longer valid. Ask for a new one under Your account.", {
         token: ["no open e-mail change has this token"],
       });
+    }
+    const { change, user } = open;
+    // A member's own request is confirmed by the member, signed in: whoever reads a mistyped address cannot.
+    if (change.requestedById === null && actor?.id !== user.id) {
+      throw new ForbiddenError(`Sign in as ${user.name}, with the address you use now, and open the link again.`);
     }
     if (await User.findOne({ where: { email: change.newEmail }, transaction })) {
       throw new ConflictError("That address has a Slipway account of its own by now, so yours was not moved to it.");

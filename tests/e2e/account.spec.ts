@@ -139,16 +139,34 @@ test("a member moves their account to a new e-mail address: nothing changes unti
   await signIn(page, demo.admin);
   const text = await openNewestMailTo(page, moved);
   const link = new URL(/https?:\/\/\S+\/confirm-email\?token=\S+/.exec(text)![0]);
-  // Opening the link changes nothing by itself (a mail scanner may open it): the button does.
-  await athlete.goto(`${link.pathname}${link.search}`);
-  await expect(athlete.getByRole("heading", { level: 1 })).toHaveText("Confirm your new e-mail address");
-  await athlete.getByRole("button", { name: "Confirm the new address" }).click();
-  await expect(athlete.getByTestId("confirm-email-status")).toContainText(`Your Slipway account now signs in with ${moved}.`);
-  // Every session ended: the header no longer shows the member.
-  await expect(athlete.getByTestId("signed-in-as")).toHaveCount(0);
-  await athlete.goto(`${link.pathname}${link.search}`);
-  await athlete.getByRole("button", { name: "Confirm the new address" }).click();
-  await expect(athlete.getByTestId("confirm-email-status")).toContainText("This link is no longer valid.");
+  // Signed out, or signed in as someone else, the link only says whose account it is: whoever reads a mistyped address cannot confirm.
+  const notice = `This moves Load Athlete 44's Slipway account to ${moved}. Only Load Athlete 44, signed in with the address they use now, can confirm it.`;
+  await page.goto(`${link.pathname}${link.search}`);
+  await expect(page.getByTestId("confirm-email-sign-in")).toContainText(notice);
+  await expect(page.getByRole("button", { name: "Confirm the new address" })).toHaveCount(0);
+  // The member opens it on another device, signed out: signing in brings them back to the link.
+  const phone = await browser.newContext();
+  const member = await phone.newPage();
+  await member.goto(`${link.pathname}${link.search}`);
+  await expect(member.getByTestId("confirm-email-sign-in")).toContainText(notice);
+  await member.getByRole("link", { name: "Sign in, then come back here" }).click();
+  const signInForm = member.getByTestId("password-sign-in");
+  await signInForm.getByLabel("E-mail").fill(email);
+  await signInForm.getByLabel("Password").fill(demo.password);
+  await signInForm.getByRole("button", { name: "Sign in" }).click();
+  // Signed in, opening the link changes nothing by itself (a mail scanner may open it): the button does.
+  await expect(member.getByRole("heading", { level: 1 })).toHaveText("Confirm your new e-mail address");
+  await expect(member).toHaveURL(new RegExp(`/confirm-email\\?token=${link.searchParams.get("token")}$`));
+  await member.getByRole("button", { name: "Confirm the new address" }).click();
+  await expect(member.getByTestId("confirm-email-status")).toContainText(`Your Slipway account now signs in with ${moved}.`);
+  // Every session ended: the header no longer shows the member, on this device or the first one.
+  await expect(member.getByTestId("signed-in-as")).toHaveCount(0);
+  await member.goto(`${link.pathname}${link.search}`);
+  await expect(member.getByText("This link is no longer valid.")).toBeVisible();
+  await expect(member.getByRole("button", { name: "Confirm the new address" })).toHaveCount(0);
+  await phone.close();
+  await athlete.goto("/account");
+  await expect(athlete).toHaveURL(/\/sign-in\?callbackUrl=%2Faccount/);
   await context.close();
 
   // The old address is told, and only the new one signs in.

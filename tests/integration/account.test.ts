@@ -223,7 +223,7 @@ describe("changing your own e-mail address", () => {
     await asCookie(cookie, () => requestEmailChangeAction({ newEmail: moved, currentPassword: demoPassword }));
     const token = await confirmationTokenSentTo(moved);
     expect(token).not.toBe(firstToken);
-    expect(await confirmEmailChangeAction({ token: firstToken })).toMatchObject({
+    expect(await asCookie(null, () => confirmEmailChangeAction({ token: firstToken }))).toMatchObject({
       ok: false,
       message: "This link is no longer valid. Ask for a new one under Your account.",
       fieldErrors: { token: expect.any(Array) },
@@ -235,7 +235,15 @@ describe("changing your own e-mail address", () => {
       tokenHash: hashToken(newToken()),
       expiresAt: new Date(Date.now() + 15 * 60_000),
     });
-    expect(await confirmEmailChangeAction({ token })).toEqual({
+    // Only Bilal, signed in, confirms his own request: not whoever reads a mistyped address, nor another member.
+    expect(await asCookie(null, () => confirmEmailChangeAction({ token }))).toMatchObject({
+      ok: false,
+      message: "Sign in as Bilal Hartigan, with the address you use now, and open the link again.",
+    });
+    const someoneElse = await sessionCookieFor("greta@lantern-reach.example", demoPassword);
+    expect(await asCookie(someoneElse, () => confirmEmailChangeAction({ token }))).toMatchObject({ ok: false });
+    expect((await User.findByPk(before.id))!.email).toBe(email);
+    expect(await asCookie(cookie, () => confirmEmailChangeAction({ token }))).toEqual({
       ok: true,
       message: `Your Slipway account now signs in with ${moved}. Every device was signed out: sign in again with it.`,
       data: { email: moved },
@@ -256,7 +264,7 @@ describe("changing your own e-mail address", () => {
     expect(told).toHaveLength(1);
     expect(told[0]!.text).toContain(moved);
     // The link works once.
-    expect(await confirmEmailChangeAction({ token })).toMatchObject({
+    expect(await asCookie(null, () => confirmEmailChangeAction({ token }))).toMatchObject({
       ok: false,
       message: "This link is no longer valid. Ask for a new one under Your account.",
     });
@@ -308,7 +316,7 @@ describe("changing your own e-mail address", () => {
       role: "athlete",
       passwordHash: null,
     });
-    expect(await confirmEmailChangeAction({ token })).toMatchObject({
+    expect(await asCookie(cookie, () => confirmEmailChangeAction({ token }))).toMatchObject({
       ok: false,
       message: "That address has a Slipway account of its own by now, so yours was not moved to it.",
     });
@@ -319,7 +327,7 @@ describe("changing your own e-mail address", () => {
     await asCookie(cookie, () => requestEmailChangeAction({ newEmail: later, currentPassword: demoPassword }));
     const expiring = await confirmationTokenSentTo(later);
     await EmailChange.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { userId: elin.id, usedAt: null } });
-    expect(await confirmEmailChangeAction({ token: expiring })).toMatchObject({
+    expect(await asCookie(cookie, () => confirmEmailChangeAction({ token: expiring }))).toMatchObject({
       ok: false,
       message: expect.stringContaining("no longer valid"),
     });

@@ -132,12 +132,14 @@ beforeAll(async () => {
   const boatNamed = async (name: string) => (await Boat.findOne({ where: { clubId: admin!.clubId, name } }))!.id;
   const setNamed = async (name: string) => (await OarSet.findOne({ where: { clubId: admin!.clubId, name } }))!.id;
   const invitationToken = newToken();
-  // Bilal asked to move his account to another address; the confirm table's valid call uses the link.
+  // An admin started moving Bilal to another address; the confirm table's valid call uses the link.
   const emailChangeToken = newToken();
   const bilal = await homeUser("bilal");
   await EmailChange.create({
     userId: bilal!.id,
     newEmail: "bilal.moved@bad-input.example",
+    // Started by the admin, so it is confirmed without Bilal's session (the caller is anonymous).
+    requestedById: admin!.id,
     tokenHash: hashToken(emailChangeToken),
     expiresAt: new Date(Date.now() + 86_400_000),
   });
