@@ -200,9 +200,9 @@ export async function emailChangeLink(token: string, actor: Actor | null): Promi
 
 /**
  * The link from the new address is used: the account signs in with it from now on. A change the member
- * asked for needs the member signed in (`actor`); one an admin started does not (the admin vouched). Every session ends
- * (the token version moves on), other unconfirmed links of the member stop working (and sign-in links
- * mailed to the old address), and the old address is told, in case it was not them.
+ * asked for needs the member signed in (`actor`); one an admin started does not (the admin vouched).
+ * Every session ends (the token version moves on), other unconfirmed links of the member stop working
+ * (and sign-in links mailed to the old address), and the old address is told, in case it was not them.
  */
 export async function confirmEmailChange(token: string, actor: Actor | null): Promise<{ email: string }> {
   await databaseReady();

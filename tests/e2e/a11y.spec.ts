@@ -1,10 +1,10 @@
 import AxeBuilder from "@axe-core/playwright";
+import { wcagTags } from "./support/axe";
 import { expect, test, type Page } from "@playwright/test";
 import { demo, signIn } from "./support/auth";
 import { answerQuiz, openQuiz, storedQuestions } from "./support/attempts";
 import { loadAthleteEmail } from "@/lib/seed/load-athletes";
 
-const wcagTags = ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"];
 const viewports = [
   { name: "phone", width: 390, height: 844 },
   { name: "desk", width: 1280, height: 800 },

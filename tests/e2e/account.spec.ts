@@ -1,5 +1,6 @@
 import { expect, test, type Page } from "@playwright/test";
 import { demo, openNewestMailTo, signIn } from "./support/auth";
+import { axeFindings } from "./support/axe";
 import { loadAthleteEmail } from "@/lib/seed/load-athletes";
 
 /** Your account (/account): a member corrects their name, moves to another e-mail address and changes their password. Uses load athletes 41–44 only. */
@@ -145,10 +146,12 @@ test("a member moves their account to a new e-mail address: nothing changes unti
   await expect(page.getByTestId("confirm-email-sign-in")).toContainText(notice);
   await expect(page.getByRole("button", { name: "Confirm the new address" })).toHaveCount(0);
   // The member opens it on another device, signed out: signing in brings them back to the link.
-  const phone = await browser.newContext();
+  const phone = await browser.newContext({ viewport: { width: 390, height: 844 } });
   const member = await phone.newPage();
   await member.goto(`${link.pathname}${link.search}`);
   await expect(member.getByTestId("confirm-email-sign-in")).toContainText(notice);
+  await expect(member).toHaveTitle(/Slipway/);
+  expect(await axeFindings(member)).toEqual([]);
   await member.getByRole("link", { name: "Sign in, then come back here" }).click();
   const signInForm = member.getByTestId("password-sign-in");
   await signInForm.getByLabel("E-mail").fill(email);
@@ -157,10 +160,14 @@ test("a member moves their account to a new e-mail address: nothing changes unti
   // Signed in, opening the link changes nothing by itself (a mail scanner may open it): the button does.
   await expect(member.getByRole("heading", { level: 1 })).toHaveText("Confirm your new e-mail address");
   await expect(member).toHaveURL(new RegExp(`/confirm-email\\?token=${link.searchParams.get("token")}$`));
+  await expect(member).toHaveTitle(/Slipway/);
+  expect(await axeFindings(member)).toEqual([]);
   await member.getByRole("button", { name: "Confirm the new address" }).click();
   await expect(member.getByTestId("confirm-email-status")).toContainText(`Your Slipway account now signs in with ${moved}.`);
   // Every session ended: the header no longer shows the member, on this device or the first one.
   await expect(member.getByTestId("signed-in-as")).toHaveCount(0);
+  await expect(member).toHaveTitle(/Slipway/);
+  expect(await axeFindings(member)).toEqual([]);
   await member.goto(`${link.pathname}${link.search}`);
   await expect(member.getByText("This link is no longer valid.")).toBeVisible();
   await expect(member.getByRole("button", { name: "Confirm the new address" })).toHaveCount(0);
