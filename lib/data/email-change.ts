@@ -76,9 +76,7 @@ async function sendConfirmationLink(member: User, newEmail: string, askedBy: { i
       `Hello ${member.name},`,
       "",
       askedBy ? `${askedBy.name}, an administrator of your club, asked to move your Slipway account to this address.` : null,
-      askedBy
-        ? `Open this link within ${emailChangeLinkHours} hours to sign in to Slipway with this address from now on. It works once.`
-        : `Open this link within ${emailChangeLinkHours} hours, signed in to Slipway as you are now, to sign in with this address from now on. It works once.`,
+      `Open this link within ${emailChangeLinkHours} hours${askedBy ? "" : ", signed in to Slipway as you are now,"} to sign in with this address from now on. It works once.`,
       `${publicBaseUrl()}/confirm-email?token=${token}`,
       "",
       `Until then you sign in with ${member.email}. If you are not ${member.name}, or did not ask for this, ignore this message.`,

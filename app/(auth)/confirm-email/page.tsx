@@ -34,8 +34,9 @@ export default async function ConfirmEmailPage({ searchParams }: { searchParams:
       ) : link.needsMemberSignedIn && !link.signedInAsMember ? (
         <Notice tone="info" title={`Sign in as ${link.memberName} to confirm`} testId="confirm-email-sign-in">
           <p>
-            This moves {link.memberName}&apos;s Slipway account to {link.newEmail}. Only {link.memberName}, signed in with the address they
-            use now, can confirm it. If that is not you, close this page: nothing changes.
+            This moves {link.memberName}&apos;s Slipway account to <span className="break-all">{link.newEmail}</span>. Only{" "}
+            {link.memberName}, signed in with the address they use now, can confirm it. If that is not you, close this page: nothing
+            changes.
           </p>
           <p className="mt-2">
             <Link href={`/sign-in?callbackUrl=${encodeURIComponent(here)}`} className="font-semibold underline">
